@@ -1,0 +1,181 @@
+package org.nebulith.equilibrium;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Gibbs free-energy minimiser for an ideal gas, pure condensed phases and ideal solutions at fixed
+ * T and P: the element-potential Newton method (Gordon &amp; McBride 1994, NASA RP-1311) with
+ * phase selection. After each converged Newton solve, a phase whose amount went negative is
+ * dropped; otherwise the absent phase with the largest driving force per atom is brought in (or
+ * exchanged for a present pure phase when its stoichiometry depends on theirs); this repeats until
+ * no absent phase is supersaturated. A cold start continues from an all-gas state at high
+ * temperature down to the target. Every result is checked a posteriori ({@link ResultChecks}); a
+ * state that fails is an error naming T, P and the composition.
+ *
+ * <p>Instances are immutable and thread-safe.
+ */
+public final class EquilibriumSolver {
+    private final SolverOptions options;
+
+    /** @param options solver settings */
+    public EquilibriumSolver(SolverOptions options) {
+        this.options = options;
+    }
+
+    /** A solver with {@link SolverOptions#defaults()}. */
+    public EquilibriumSolver() {
+        this(SolverOptions.defaults());
+    }
+
+    /** @return the settings */
+    public SolverOptions options() {
+        return options;
+    }
+
+    /**
+     * Solves from a cold start.
+     *
+     * @param problem the state
+     * @return the checked equilibrium
+     * @throws ConvergenceException naming the state if no checked equilibrium was found
+     */
+    public EquilibriumResult solve(EquilibriumProblem problem) {
+        return coldSolve(problem);
+    }
+
+    /**
+     * Solves from a warm start; falls back to a cold start if the warm start fails or its result
+     * fails the checks (a warm start can land in a wrong assemblage near a phase boundary).
+     *
+     * @param problem the state
+     * @param start   a start from earlier results of the same system (may be null)
+     * @return the checked equilibrium
+     */
+    public EquilibriumResult solve(EquilibriumProblem problem, WarmStart start) {
+        if (start == null) {
+            return coldSolve(problem);
+        }
+        StateData st = new StateData(problem);
+        Iterate it = adapt(start.iterate.copy(), st);
+        Attempt a = attempt(problem, st, it);
+        if (a.result != null) {
+            return a.result;
+        }
+        return coldSolve(problem);
+    }
+
+    private static final class Attempt {
+        EquilibriumResult result;
+        Iterate iterate;
+        String failure;
+        int iterations;
+    }
+
+    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it) {
+        Attempt a = new Attempt();
+        NewtonKernel kernel = new NewtonKernel(st, problem.totals(), options);
+        PhaseSelection sel = new PhaseSelection(st, kernel, options);
+        String failure = sel.run(it);
+        a.iterations = kernel.iterations;
+        a.iterate = it;
+        if (failure != null) {
+            a.failure = failure;
+            return a;
+        }
+        EquilibriumResult r = ResultBuilder.build(problem, st, kernel, it, sel.changes, false);
+        String bad = ResultChecks.failure(r, options);
+        if (bad != null) {
+            a.failure = bad;
+            return a;
+        }
+        a.result = r;
+        return a;
+    }
+
+    /** Removes phases unavailable at the new state, replacing polymorphs by a valid twin. */
+    private static Iterate adapt(Iterate it, StateData st) {
+        ChemicalSystem sys = st.system;
+        Set<Integer> seen = new HashSet<>();
+        List<Integer> act = new ArrayList<>();
+        List<Double> amt = new ArrayList<>();
+        for (int q = 0; q < it.active.length; q++) {
+            int p = it.active[q];
+            int use = st.available[p] ? p : twin(sys, st, p);
+            if (use >= 0 && seen.add(use)) {
+                act.add(use);
+                amt.add(Math.max(it.u[q] * st.scale[p], 0) / st.scale[use]);
+            }
+        }
+        it.active = act.stream().mapToInt(Integer::intValue).toArray();
+        it.u = amt.stream().mapToDouble(Double::doubleValue).toArray();
+        return it;
+    }
+
+    private static int twin(ChemicalSystem sys, StateData st, int p) {
+        if (sys.phaseKind(p) != PhaseKind.PURE) {
+            return -1;
+        }
+        double[] a = sys.phase(p).members[0].a;
+        for (int q = 1; q < sys.phaseCount(); q++) {
+            if (q != p && st.available[q] && sys.phaseKind(q) == PhaseKind.PURE
+                    && java.util.Arrays.equals(a, sys.phase(q).members[0].a)) {
+                return q;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Cold start: an all-gas guess at a high temperature, then continuation in 1/T down (or up)
+     * to the target with adaptive steps.
+     */
+    private EquilibriumResult coldSolve(EquilibriumProblem problem) {
+        double target = problem.temperatureK();
+        double t0 = Math.max(options.coldStartTK(), target);
+        EquilibriumProblem first = problem.at(t0, problem.pressureBar());
+        StateData st0 = new StateData(first);
+        Iterate it = GasGuess.initial(st0, first.totals());
+        Attempt a = attempt(first, st0, it);
+        if (a.result == null) {
+            throw failure(problem, "cold start at " + t0 + " K: " + a.failure);
+        }
+        int totalIterations = a.iterations;
+        Iterate good = a.iterate;
+        double invT = 1.0 / t0;
+        double invTarget = 1.0 / target;
+        double h = 1.0e-4;
+        EquilibriumResult last = a.result;
+        while (invT < invTarget) {
+            double next = Math.min(invTarget, invT + h);
+            if (invTarget - next < 0.2 * h) {
+                next = invTarget;
+            }
+            EquilibriumProblem pr = problem.at(1.0 / next, problem.pressureBar());
+            if (next == invTarget) {
+                pr = problem;
+            }
+            StateData st = new StateData(pr);
+            Attempt s = attempt(pr, st, adapt(good.copy(), st));
+            totalIterations += s.iterations;
+            if (s.result == null) {
+                h *= 0.5;
+                if (h < 1e-9) {
+                    throw failure(problem, "continuation stalled at T = " + (1.0 / invT) + " K: " + s.failure);
+                }
+                continue;
+            }
+            invT = next;
+            good = s.iterate;
+            last = s.result;
+            h = Math.min(h * 1.5, 4e-4);
+        }
+        return ResultBuilder.markCold(last, totalIterations);
+    }
+
+    static ConvergenceException failure(EquilibriumProblem problem, String what) {
+        return new ConvergenceException("no converged equilibrium at " + problem.describe() + ": " + what);
+    }
+}

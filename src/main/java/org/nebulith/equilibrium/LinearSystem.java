@@ -1,0 +1,64 @@
+package org.nebulith.equilibrium;
+
+/**
+ * Dense Gaussian elimination with partial pivoting for the small Newton systems of the solver
+ * (tens of unknowns), without allocation per solve.
+ */
+final class LinearSystem {
+    private LinearSystem() {
+    }
+
+    /**
+     * Solves A x = r in place: on return r holds x. A is destroyed.
+     *
+     * @return false if the matrix is numerically singular
+     */
+    static boolean solve(double[][] a, double[] r, int n) {
+        for (int col = 0; col < n; col++) {
+            int piv = col;
+            double best = Math.abs(a[col][col]);
+            for (int i = col + 1; i < n; i++) {
+                double v = Math.abs(a[i][col]);
+                if (v > best) {
+                    best = v;
+                    piv = i;
+                }
+            }
+            if (!(best > 1e-300)) {
+                return false;
+            }
+            if (piv != col) {
+                double[] t = a[piv];
+                a[piv] = a[col];
+                a[col] = t;
+                double tr = r[piv];
+                r[piv] = r[col];
+                r[col] = tr;
+            }
+            double[] rowc = a[col];
+            double d = rowc[col];
+            for (int i = col + 1; i < n; i++) {
+                double[] rowi = a[i];
+                double f = rowi[col] / d;
+                if (f != 0) {
+                    for (int k = col + 1; k < n; k++) {
+                        rowi[k] -= f * rowc[k];
+                    }
+                    r[i] -= f * r[col];
+                }
+            }
+        }
+        for (int i = n - 1; i >= 0; i--) {
+            double s = r[i];
+            double[] row = a[i];
+            for (int k = i + 1; k < n; k++) {
+                s -= row[k] * r[k];
+            }
+            r[i] = s / row[i];
+            if (!Double.isFinite(r[i])) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

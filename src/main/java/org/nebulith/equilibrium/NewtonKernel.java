@@ -1,0 +1,254 @@
+package org.nebulith.equilibrium;
+
+/**
+ * Newton iteration of the element-potential method for a fixed set of active phases
+ * (Gordon &amp; McBride 1994, NASA RP-1311, ch. 2, in the dual form of White, Johnson &amp; Dantzig
+ * 1958). Unknowns: element potentials lambda_j, ln N_gas and the amounts of the active condensed
+ * phases. Every mixture member (gas species or solution end-member) has the mole fraction
+ * x = exp((a.lambda - c)/m), so trace species are computed, never iterated, and cannot underflow
+ * the balance. Equations, each scaled to be dimensionless:
+ * <ul>
+ * <li>element balance of element j divided by its total b_j;</li>
+ * <li>for each mixture phase: ln(sum of its mole fractions) = 0;</li>
+ * <li>for each pure phase: a.lambda - G/RT = 0.</li>
+ * </ul>
+ * Steps are limited in lambda and damped by a backtracking line search on the residual norm.
+ * This is the numerical kernel of the solver, kept in one place on purpose.
+ */
+final class NewtonKernel {
+    private static final double MAX_EXP = 690;
+    private final StateData st;
+    private final ChemicalSystem sys;
+    private final double[] b;
+    private final int m;
+    private final SolverOptions opt;
+    int iterations;
+    double lastBalance;
+    double lastPotential;
+
+    NewtonKernel(StateData st, double[] totals, SolverOptions opt) {
+        this.st = st;
+        this.sys = st.system;
+        this.b = totals;
+        this.m = sys.elementCount();
+        this.opt = opt;
+    }
+
+    /** Mole fraction of member k of phase p (not normalised). */
+    double x(int p, int k, double[] lambda) {
+        double c = st.c[p][k];
+        if (c == Double.POSITIVE_INFINITY) {
+            return 0;
+        }
+        Constituent mem = sys.phase(p).members[k];
+        double e = (mem.dot(lambda) - c) / mem.multiplicity;
+        return Math.exp(Math.min(e, MAX_EXP));
+    }
+
+    /** ln of the sum of mole fractions of a mixture phase (its stability function). */
+    double stability(int p, double[] lambda) {
+        PhaseDef ph = sys.phase(p);
+        if (ph.kind == PhaseKind.PURE) {
+            return ph.members[0].dot(lambda) - st.c[p][0];
+        }
+        double max = Double.NEGATIVE_INFINITY;
+        double[] e = new double[ph.members.length];
+        for (int k = 0; k < e.length; k++) {
+            double c = st.c[p][k];
+            e[k] = c == Double.POSITIVE_INFINITY ? Double.NEGATIVE_INFINITY
+                    : (ph.members[k].dot(lambda) - c) / ph.members[k].multiplicity;
+            max = Math.max(max, e[k]);
+        }
+        if (max == Double.NEGATIVE_INFINITY) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        double s = 0;
+        for (double v : e) {
+            s += Math.exp(v - max);
+        }
+        return max + Math.log(s);
+    }
+
+    /**
+     * Residuals into r (length m + 1 + active); returns 0.5 |r|^2, and fills jac if non-null.
+     */
+    double evaluate(Iterate it, double[] r, double[][] jac) {
+        int n = m + 1 + it.active.length;
+        if (jac != null) {
+            for (int i = 0; i < n; i++) {
+                java.util.Arrays.fill(jac[i], 0, n, 0.0);
+            }
+        }
+        for (int j = 0; j < m; j++) {
+            r[j] = -b[j];
+        }
+        double gasN = Math.exp(it.lnGas);
+        r[m] = mixture(0, gasN, true, it.lambda, r, jac, m, m);
+        for (int q = 0; q < it.active.length; q++) {
+            int p = it.active[q];
+            int row = m + 1 + q;
+            double amount = it.u[q] * st.scale[p];
+            if (sys.phase(p).kind == PhaseKind.PURE) {
+                r[row] = pure(p, amount, it.lambda, r, jac, row, q);
+            } else {
+                r[row] = mixture(p, amount, false, it.lambda, r, jac, row, row);
+            }
+        }
+        double f = 0;
+        for (int j = 0; j < m; j++) {
+            r[j] /= b[j];
+            if (jac != null) {
+                for (int k = 0; k < n; k++) {
+                    jac[j][k] /= b[j];
+                }
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            f += r[i] * r[i];
+        }
+        return 0.5 * f;
+    }
+
+    /** Adds a pure phase to the balances; returns its phase residual. */
+    private double pure(int p, double amount, double[] lambda, double[] r, double[][] jac, int row, int q) {
+        Constituent mem = sys.phase(p).members[0];
+        for (int k = 0; k < mem.nzIndex.length; k++) {
+            int j = mem.nzIndex[k];
+            r[j] += amount * mem.nzCount[k];
+            if (jac != null) {
+                jac[j][m + 1 + q] += st.scale[p] * mem.nzCount[k];
+                jac[row][j] = mem.nzCount[k];
+            }
+        }
+        return mem.dot(lambda) - st.c[p][0];
+    }
+
+    /**
+     * Adds a mixture phase (gas or solution) of total amount n to the balances and the Jacobian;
+     * column amountCol holds d/d(ln N) for the gas and d/du for a solution. Returns ln(sum x).
+     */
+    private double mixture(int p, double n, boolean gas, double[] lambda, double[] r, double[][] jac,
+                           int row, int amountCol) {
+        PhaseDef ph = sys.phase(p);
+        double sum = 0;
+        double colScale = gas ? n : st.scale[p];
+        double[] grad = jac == null ? null : jac[row];
+        for (int k = 0; k < ph.members.length; k++) {
+            double xk = x(p, k, lambda);
+            if (xk == 0) {
+                continue;
+            }
+            sum += xk;
+            Constituent mem = ph.members[k];
+            double nk = n * xk;
+            int[] idx = mem.nzIndex;
+            double[] cnt = mem.nzCount;
+            double invM = 1.0 / mem.multiplicity;
+            for (int a = 0; a < idx.length; a++) {
+                int j = idx[a];
+                r[j] += nk * cnt[a];
+                if (jac != null) {
+                    double w = nk * cnt[a] * invM;
+                    double[] rowj = jac[j];
+                    for (int c = 0; c < idx.length; c++) {
+                        rowj[idx[c]] += w * cnt[c];
+                    }
+                    rowj[amountCol] += colScale * xk * cnt[a];
+                    grad[j] += xk * cnt[a] * invM;
+                }
+            }
+        }
+        if (sum == 0) {
+            return -MAX_EXP;
+        }
+        if (jac != null) {
+            for (int j = 0; j < m; j++) {
+                grad[j] /= sum;
+            }
+        }
+        return Math.log(sum);
+    }
+
+    /**
+     * Iterates to convergence from it (modified in place).
+     *
+     * @return true when converged within the options' tolerances
+     */
+    boolean converge(Iterate it) {
+        int n = m + 1 + it.active.length;
+        double[] r = new double[n];
+        double[] rTrial = new double[n];
+        double[][] jac = new double[n][n];
+        double f = evaluate(it, r, jac);
+        for (int iter = 0; iter < opt.maxNewtonIterations(); iter++) {
+            if (converged(r, n)) {
+                return true;
+            }
+            double[] d = new double[n];
+            for (int i = 0; i < n; i++) {
+                d[i] = -r[i];
+            }
+            if (!LinearSystem.solve(jac, d, n)) {
+                return false;
+            }
+            iterations++;
+            double alpha = stepLimit(d);
+            Iterate trial = null;
+            double fTrial = Double.POSITIVE_INFINITY;
+            for (int ls = 0; ls < 40; ls++) {
+                trial = step(it, d, alpha);
+                fTrial = evaluate(trial, rTrial, null);
+                if (fTrial <= (1 - 1e-4 * alpha) * f || fTrial < 1e-28) {
+                    break;
+                }
+                alpha *= 0.5;
+            }
+            if (!(fTrial < f) && !(fTrial < 1e-28)) {
+                return converged(r, n);
+            }
+            copyInto(trial, it);
+            f = evaluate(it, r, jac);
+        }
+        return converged(r, n);
+    }
+
+    private boolean converged(double[] r, int n) {
+        double bal = 0;
+        for (int j = 0; j < m; j++) {
+            bal = Math.max(bal, Math.abs(r[j]));
+        }
+        double pot = 0;
+        for (int i = m; i < n; i++) {
+            pot = Math.max(pot, Math.abs(r[i]));
+        }
+        lastBalance = bal;
+        lastPotential = pot;
+        return bal <= opt.balanceTolerance() && pot <= opt.potentialTolerance();
+    }
+
+    private double stepLimit(double[] d) {
+        double big = 0;
+        for (int j = 0; j <= m; j++) {
+            big = Math.max(big, Math.abs(d[j]));
+        }
+        return big > opt.maxPotentialStep() ? opt.maxPotentialStep() / big : 1.0;
+    }
+
+    private Iterate step(Iterate it, double[] d, double alpha) {
+        Iterate t = it.copy();
+        for (int j = 0; j < m; j++) {
+            t.lambda[j] += alpha * d[j];
+        }
+        t.lnGas += alpha * d[m];
+        for (int q = 0; q < t.u.length; q++) {
+            t.u[q] += alpha * d[m + 1 + q];
+        }
+        return t;
+    }
+
+    private static void copyInto(Iterate from, Iterate to) {
+        to.lambda = from.lambda;
+        to.lnGas = from.lnGas;
+        to.u = from.u;
+    }
+}

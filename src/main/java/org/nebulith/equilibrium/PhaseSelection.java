@@ -1,0 +1,205 @@
+package org.nebulith.equilibrium;
+
+import java.util.HashSet;
+import java.util.Set;
+
+/**
+ * The phase-selection loop around {@link NewtonKernel}: drop the phase with the most negative
+ * amount; otherwise bring in the absent phase with the largest driving force per atom, exchanging
+ * it for a present pure phase when its stoichiometry is a combination of theirs (the phase rule);
+ * undo an addition whose Newton solve fails and try the next candidate.
+ */
+final class PhaseSelection {
+    private final StateData st;
+    private final NewtonKernel kernel;
+    private final SolverOptions opt;
+    private final ChemicalSystem sys;
+    int changes;
+
+    PhaseSelection(StateData st, NewtonKernel kernel, SolverOptions opt) {
+        this.st = st;
+        this.kernel = kernel;
+        this.opt = opt;
+        this.sys = st.system;
+    }
+
+    /** @return null on success, else what failed */
+    String run(Iterate it) {
+        Set<Integer> blocked = new HashSet<>();
+        Iterate backup = null;
+        int lastAdded = -1;
+        while (changes <= opt.maxPhaseChanges()) {
+            if (!kernel.converge(it)) {
+                if (lastAdded >= 0 && backup != null) {
+                    restore(backup, it);
+                    blocked.add(lastAdded);
+                    lastAdded = -1;
+                    changes++;
+                    continue;
+                }
+                return String.format(java.util.Locale.ROOT,
+                        "Newton iteration did not converge with phases %s (balance residual %.3g, potential residual %.3g)",
+                        names(it), kernel.lastBalance, kernel.lastPotential);
+            }
+            int worst = mostNegative(it);
+            if (worst >= 0) {
+                it.remove(worst);
+                changes++;
+                lastAdded = -1;
+                blocked.clear();
+                continue;
+            }
+            int cand = mostSupersaturated(it, blocked);
+            if (cand < 0) {
+                return null;
+            }
+            backup = it.copy();
+            if (sys.phaseKind(cand) != PhaseKind.PURE || !exchange(it, cand)) {
+                it.add(cand, 0.0);
+            }
+            lastAdded = cand;
+            changes++;
+        }
+        return "phase selection did not settle after " + opt.maxPhaseChanges() + " changes (phases " + names(it) + ")";
+    }
+
+    private static void restore(Iterate from, Iterate to) {
+        to.lambda = from.lambda.clone();
+        to.lnGas = from.lnGas;
+        to.active = from.active.clone();
+        to.u = from.u.clone();
+    }
+
+    private static int mostNegative(Iterate it) {
+        int worst = -1;
+        double wv = 0;
+        for (int q = 0; q < it.u.length; q++) {
+            if (it.u[q] < wv) {
+                wv = it.u[q];
+                worst = q;
+            }
+        }
+        return worst;
+    }
+
+    /** Driving force per atom of absent phase p [RT]; positive means supersaturated. */
+    double drivingForce(int p, double[] lambda) {
+        PhaseDef ph = sys.phase(p);
+        if (ph.kind == PhaseKind.PURE) {
+            return (ph.members[0].dot(lambda) - st.c[p][0]) / ph.members[0].atoms;
+        }
+        double mult = 0;
+        double atoms = 0;
+        for (Constituent c : ph.members) {
+            mult += c.multiplicity;
+            atoms += c.atoms;
+        }
+        return kernel.stability(p, lambda) * mult / atoms;
+    }
+
+    private int mostSupersaturated(Iterate it, Set<Integer> blocked) {
+        int best = -1;
+        double bv = opt.affinityTolerance();
+        for (int p = 1; p < sys.phaseCount(); p++) {
+            if (!st.available[p] || blocked.contains(p) || it.indexOf(p) >= 0) {
+                continue;
+            }
+            double d = drivingForce(p, it.lambda);
+            if (d > bv) {
+                bv = d;
+                best = p;
+            }
+        }
+        return best;
+    }
+
+    /**
+     * If the stoichiometry of pure phase k is a combination of the present pure phases, replaces
+     * the one that the reaction would exhaust first (ratio test) by k, conserving every element.
+     *
+     * @return true if an exchange was made
+     */
+    private boolean exchange(Iterate it, int k) {
+        int nq = 0;
+        int[] pure = new int[it.active.length];
+        for (int q = 0; q < it.active.length; q++) {
+            if (sys.phaseKind(it.active[q]) == PhaseKind.PURE) {
+                pure[nq++] = q;
+            }
+        }
+        if (nq == 0) {
+            return false;
+        }
+        double[] coef = combination(it, pure, nq, sys.phase(k).members[0].a);
+        if (coef == null) {
+            return false;
+        }
+        int out = -1;
+        double tMin = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < nq; i++) {
+            if (coef[i] > 1e-12) {
+                double n = it.u[pure[i]] * st.scale[it.active[pure[i]]];
+                if (n / coef[i] < tMin) {
+                    tMin = n / coef[i];
+                    out = i;
+                }
+            }
+        }
+        if (out < 0) {
+            return false;
+        }
+        for (int i = 0; i < nq; i++) {
+            int q = pure[i];
+            double n = it.u[q] * st.scale[it.active[q]] - coef[i] * tMin;
+            it.u[q] = (i == out ? 0 : n) / st.scale[it.active[q]];
+        }
+        it.add(k, tMin / st.scale[k]);
+        it.remove(pure[out]);
+        return true;
+    }
+
+    /** Least-squares coefficients c with sum c_i a_i = target, or null if target is independent. */
+    private double[] combination(Iterate it, int[] pure, int nq, double[] target) {
+        int m = sys.elementCount();
+        double[][] g = new double[nq][nq];
+        double[] rhs = new double[nq];
+        for (int i = 0; i < nq; i++) {
+            double[] ai = sys.phase(it.active[pure[i]]).members[0].a;
+            for (int l = 0; l < nq; l++) {
+                double[] al = sys.phase(it.active[pure[l]]).members[0].a;
+                double s = 0;
+                for (int j = 0; j < m; j++) {
+                    s += ai[j] * al[j];
+                }
+                g[i][l] = s;
+            }
+            double s = 0;
+            for (int j = 0; j < m; j++) {
+                s += ai[j] * target[j];
+            }
+            rhs[i] = s;
+        }
+        if (!LinearSystem.solve(g, rhs, nq)) {
+            return null;
+        }
+        double res = 0;
+        double norm = 0;
+        for (int j = 0; j < m; j++) {
+            double v = target[j];
+            for (int i = 0; i < nq; i++) {
+                v -= rhs[i] * sys.phase(it.active[pure[i]]).members[0].a[j];
+            }
+            res += v * v;
+            norm += target[j] * target[j];
+        }
+        return res <= 1e-18 * norm ? rhs : null;
+    }
+
+    private String names(Iterate it) {
+        StringBuilder sb = new StringBuilder("[");
+        for (int q = 0; q < it.active.length; q++) {
+            sb.append(q == 0 ? "" : ", ").append(sys.phaseName(it.active[q]));
+        }
+        return sb.append(']').toString();
+    }
+}

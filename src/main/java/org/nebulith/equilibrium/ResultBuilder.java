@@ -1,0 +1,60 @@
+package org.nebulith.equilibrium;
+
+/** Turns a converged {@link Iterate} into an {@link EquilibriumResult} with checked diagnostics. */
+final class ResultBuilder {
+    private ResultBuilder() {
+    }
+
+    static EquilibriumResult build(EquilibriumProblem problem, StateData st, NewtonKernel kernel, Iterate it,
+                                   int changes, boolean cold) {
+        ChemicalSystem sys = st.system;
+        int np = sys.phaseCount();
+        double[] phaseMoles = new double[np];
+        double[][] memberMoles = new double[np][];
+        String[][] memberSpecies = new String[np][];
+        for (int p = 0; p < np; p++) {
+            memberMoles[p] = new double[sys.phase(p).members.length];
+            memberSpecies[p] = new String[memberMoles[p].length];
+            for (int k = 0; k < memberSpecies[p].length; k++) {
+                memberSpecies[p][k] = st.chosen[p][k] == null ? null : st.chosen[p][k].id();
+            }
+        }
+        fillMixture(0, Math.exp(it.lnGas), kernel, it, phaseMoles, memberMoles);
+        for (int q = 0; q < it.active.length; q++) {
+            int p = it.active[q];
+            double n = it.u[q] * st.scale[p];
+            if (sys.phaseKind(p) == PhaseKind.PURE) {
+                phaseMoles[p] = n;
+                memberMoles[p][0] = n;
+            } else {
+                fillMixture(p, n, kernel, it, phaseMoles, memberMoles);
+            }
+        }
+        ResultChecks.Measures ms = ResultChecks.measure(problem, st, kernel, it, phaseMoles, memberMoles);
+        EquilibriumResult.Diagnostics d = new EquilibriumResult.Diagnostics(kernel.iterations, changes,
+                ms.balance(), ms.potential(), ms.minAffinity(), ms.minAffinityPhase(), st.excludedGas, cold);
+        return new EquilibriumResult(problem, it.lambda.clone(), phaseMoles, memberMoles, memberSpecies, d, it.copy());
+    }
+
+    private static void fillMixture(int p, double n, NewtonKernel kernel, Iterate it, double[] phaseMoles,
+                                    double[][] memberMoles) {
+        double sum = 0;
+        double[] x = memberMoles[p];
+        for (int k = 0; k < x.length; k++) {
+            x[k] = kernel.x(p, k, it.lambda);
+            sum += x[k];
+        }
+        for (int k = 0; k < x.length; k++) {
+            x[k] = n * x[k] / sum;
+        }
+        phaseMoles[p] = n;
+    }
+
+    static EquilibriumResult markCold(EquilibriumResult r, int totalIterations) {
+        EquilibriumResult.Diagnostics d = r.diagnostics();
+        EquilibriumResult.Diagnostics nd = new EquilibriumResult.Diagnostics(totalIterations, d.phaseChanges(),
+                d.maxBalanceError(), d.maxPotentialResidual(), d.minAbsentAffinity(), d.minAffinityPhase(),
+                d.excludedGasSpecies(), true);
+        return r.withDiagnostics(nd);
+    }
+}
