@@ -27,13 +27,14 @@ public final class EquilibriumResult {
      * @param phaseChanges     phase additions, removals and exchanges
      * @param maxBalanceError  largest relative element-balance error of the final amounts
      * @param maxPotentialResidual largest |mu - sum a lambda| of a present member [RT]
+     * @param worstMember      the member with that residual (phase:member)
      * @param minAbsentAffinity smallest affinity per atom of an absent, available condensed phase [RT]
      * @param minAffinityPhase the phase with that affinity ("" if none)
      * @param excludedGasSpecies gas species left out because T is outside their data
      * @param coldStart        whether the state was reached by a cold start
      */
     public record Diagnostics(int newtonIterations, int phaseChanges, double maxBalanceError,
-                              double maxPotentialResidual, double minAbsentAffinity, String minAffinityPhase,
+                              double maxPotentialResidual, String worstMember, double minAbsentAffinity, String minAffinityPhase,
                               int excludedGasSpecies, boolean coldStart) {
     }
 

@@ -106,7 +106,7 @@ public final class EquilibriumSolver {
             int use = st.available[p] ? p : twin(sys, st, p);
             if (use >= 0 && seen.add(use)) {
                 act.add(use);
-                amt.add(Math.max(it.u[q] * st.scale[p], 0) / st.scale[use]);
+                amt.add(use == p ? it.u[q] : it.u[q] * st.scale[p] / st.scale[use]);
             }
         }
         it.active = act.stream().mapToInt(Integer::intValue).toArray();

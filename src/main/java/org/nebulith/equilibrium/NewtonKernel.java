@@ -17,6 +17,10 @@ package org.nebulith.equilibrium;
  */
 final class NewtonKernel {
     private static final double MAX_EXP = 690;
+    /** ln of the scaled amount below which a solution counts as vanishing (1e-30 of its maximum). */
+    static final double VANISH_LN = Math.log(1e-30);
+    /** ln of the scaled amount given to a solution when it is brought in. */
+    static final double START_LN = Math.log(1e-6);
     private final StateData st;
     private final ChemicalSystem sys;
     private final double[] b;
@@ -83,15 +87,15 @@ final class NewtonKernel {
             r[j] = -b[j];
         }
         double gasN = Math.exp(it.lnGas);
-        r[m] = mixture(0, gasN, true, it.lambda, r, jac, m, m);
+        r[m] = mixture(0, gasN, it.lambda, r, jac, m, m);
         for (int q = 0; q < it.active.length; q++) {
             int p = it.active[q];
             int row = m + 1 + q;
-            double amount = it.u[q] * st.scale[p];
             if (sys.phase(p).kind == PhaseKind.PURE) {
-                r[row] = pure(p, amount, it.lambda, r, jac, row, q);
+                r[row] = pure(p, it.u[q] * st.scale[p], it.lambda, r, jac, row, q);
             } else {
-                r[row] = mixture(p, amount, false, it.lambda, r, jac, row, row);
+                double amount = Math.exp(Math.min(it.u[q], MAX_EXP)) * st.scale[p];
+                r[row] = mixture(p, amount, it.lambda, r, jac, row, row);
             }
         }
         double f = 0;
@@ -125,13 +129,12 @@ final class NewtonKernel {
 
     /**
      * Adds a mixture phase (gas or solution) of total amount n to the balances and the Jacobian;
-     * column amountCol holds d/d(ln N) for the gas and d/du for a solution. Returns ln(sum x).
+     * its amount variable is logarithmic, so column amountCol holds d/d(ln n). Returns ln(sum x).
      */
-    private double mixture(int p, double n, boolean gas, double[] lambda, double[] r, double[][] jac,
-                           int row, int amountCol) {
+    private double mixture(int p, double n, double[] lambda, double[] r, double[][] jac, int row, int amountCol) {
         PhaseDef ph = sys.phase(p);
         double sum = 0;
-        double colScale = gas ? n : st.scale[p];
+        double colScale = n;
         double[] grad = jac == null ? null : jac[row];
         for (int k = 0; k < ph.members.length; k++) {
             double xk = x(p, k, lambda);
@@ -192,7 +195,7 @@ final class NewtonKernel {
                 return false;
             }
             iterations++;
-            double alpha = stepLimit(d);
+            double alpha = stepLimit(d, it);
             Iterate trial = null;
             double fTrial = Double.POSITIVE_INFINITY;
             for (int ls = 0; ls < 40; ls++) {
@@ -207,9 +210,25 @@ final class NewtonKernel {
                 return converged(r, n);
             }
             copyInto(trial, it);
+            if (vanishing(it) >= 0) {
+                return false;
+            }
             f = evaluate(it, r, jac);
         }
         return converged(r, n);
+    }
+
+    /**
+     * @return the active index of a solution whose amount fell below {@link #VANISH_LN} of its
+     *         scale (it is driven towards zero: unstable), or -1
+     */
+    int vanishing(Iterate it) {
+        for (int q = 0; q < it.active.length; q++) {
+            if (sys.phase(it.active[q]).kind == PhaseKind.SOLUTION && it.u[q] < VANISH_LN) {
+                return q;
+            }
+        }
+        return -1;
     }
 
     private boolean converged(double[] r, int n) {
@@ -226,10 +245,15 @@ final class NewtonKernel {
         return bal <= opt.balanceTolerance() && pot <= opt.potentialTolerance();
     }
 
-    private double stepLimit(double[] d) {
+    private double stepLimit(double[] d, Iterate it) {
         double big = 0;
         for (int j = 0; j <= m; j++) {
             big = Math.max(big, Math.abs(d[j]));
+        }
+        for (int q = 0; q < it.active.length; q++) {
+            if (sys.phase(it.active[q]).kind == PhaseKind.SOLUTION) {
+                big = Math.max(big, Math.abs(d[m + 1 + q]));
+            }
         }
         return big > opt.maxPotentialStep() ? opt.maxPotentialStep() / big : 1.0;
     }

@@ -29,11 +29,26 @@ final class PhaseSelection {
         Iterate backup = null;
         int lastAdded = -1;
         while (changes <= opt.maxPhaseChanges()) {
-            if (!kernel.converge(it)) {
+            boolean ok = kernel.converge(it);
+            int vanished = kernel.vanishing(it);
+            if (vanished >= 0) {
+                it.remove(vanished);
+                changes++;
+                lastAdded = -1;
+                blocked.clear();
+                continue;
+            }
+            if (!ok) {
                 if (lastAdded >= 0 && backup != null) {
                     restore(backup, it);
                     blocked.add(lastAdded);
                     lastAdded = -1;
+                    changes++;
+                    continue;
+                }
+                int weakest = smallestSolution(it);
+                if (weakest >= 0) {
+                    it.remove(weakest);
                     changes++;
                     continue;
                 }
@@ -54,7 +69,9 @@ final class PhaseSelection {
                 return null;
             }
             backup = it.copy();
-            if (sys.phaseKind(cand) != PhaseKind.PURE || !exchange(it, cand)) {
+            if (sys.phaseKind(cand) == PhaseKind.SOLUTION) {
+                it.add(cand, NewtonKernel.START_LN);
+            } else if (!exchange(it, cand)) {
                 it.add(cand, 0.0);
             }
             lastAdded = cand;
@@ -70,16 +87,27 @@ final class PhaseSelection {
         to.u = from.u.clone();
     }
 
-    private static int mostNegative(Iterate it) {
+    private int mostNegative(Iterate it) {
         int worst = -1;
         double wv = 0;
         for (int q = 0; q < it.u.length; q++) {
-            if (it.u[q] < wv) {
+            if (sys.phaseKind(it.active[q]) == PhaseKind.PURE && it.u[q] < wv) {
                 wv = it.u[q];
                 worst = q;
             }
         }
         return worst;
+    }
+
+    /** @return the active index of the solution with the smallest scaled amount, or -1 */
+    private int smallestSolution(Iterate it) {
+        int best = -1;
+        for (int q = 0; q < it.active.length; q++) {
+            if (sys.phaseKind(it.active[q]) == PhaseKind.SOLUTION && (best < 0 || it.u[q] < it.u[best])) {
+                best = q;
+            }
+        }
+        return best;
     }
 
     /** Driving force per atom of absent phase p [RT]; positive means supersaturated. */

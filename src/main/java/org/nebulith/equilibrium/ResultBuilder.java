@@ -22,17 +22,17 @@ final class ResultBuilder {
         fillMixture(0, Math.exp(it.lnGas), kernel, it, phaseMoles, memberMoles);
         for (int q = 0; q < it.active.length; q++) {
             int p = it.active[q];
-            double n = it.u[q] * st.scale[p];
             if (sys.phaseKind(p) == PhaseKind.PURE) {
+                double n = it.u[q] * st.scale[p];
                 phaseMoles[p] = n;
                 memberMoles[p][0] = n;
             } else {
-                fillMixture(p, n, kernel, it, phaseMoles, memberMoles);
+                fillMixture(p, Math.exp(it.u[q]) * st.scale[p], kernel, it, phaseMoles, memberMoles);
             }
         }
         ResultChecks.Measures ms = ResultChecks.measure(problem, st, kernel, it, phaseMoles, memberMoles);
         EquilibriumResult.Diagnostics d = new EquilibriumResult.Diagnostics(kernel.iterations, changes,
-                ms.balance(), ms.potential(), ms.minAffinity(), ms.minAffinityPhase(), st.excludedGas, cold);
+                ms.balance(), ms.potential(), ms.worstMember(), ms.minAffinity(), ms.minAffinityPhase(), st.excludedGas, cold);
         return new EquilibriumResult(problem, it.lambda.clone(), phaseMoles, memberMoles, memberSpecies, d, it.copy());
     }
 
@@ -53,7 +53,7 @@ final class ResultBuilder {
     static EquilibriumResult markCold(EquilibriumResult r, int totalIterations) {
         EquilibriumResult.Diagnostics d = r.diagnostics();
         EquilibriumResult.Diagnostics nd = new EquilibriumResult.Diagnostics(totalIterations, d.phaseChanges(),
-                d.maxBalanceError(), d.maxPotentialResidual(), d.minAbsentAffinity(), d.minAffinityPhase(),
+                d.maxBalanceError(), d.maxPotentialResidual(), d.worstMember(), d.minAbsentAffinity(), d.minAffinityPhase(),
                 d.excludedGasSpecies(), true);
         return r.withDiagnostics(nd);
     }

@@ -16,10 +16,12 @@ public final class ResultChecks {
     /** Most negative accepted affinity per atom of an absent phase [RT]. */
     public static final double AFFINITY_LIMIT = -1e-6;
 
+    private static final double TINY_FRACTION = 1e-250;
+
     private ResultChecks() {
     }
 
-    record Measures(double balance, double potential, double minAffinity, String minAffinityPhase) {
+    record Measures(double balance, double potential, String worstMember, double minAffinity, String minAffinityPhase) {
     }
 
     static Measures measure(EquilibriumProblem problem, StateData st, NewtonKernel kernel, Iterate it,
@@ -28,6 +30,7 @@ public final class ResultChecks {
         int m = sys.elementCount();
         double[] sum = new double[m];
         double pot = 0;
+        String worst = "";
         for (int p = 0; p < sys.phaseCount(); p++) {
             if (phaseMoles[p] <= 0 && p != 0) {
                 continue;
@@ -43,10 +46,17 @@ public final class ResultChecks {
                     sum[c.nzIndex[a]] += n * c.nzCount[a];
                 }
                 double mu = st.c[p][k];
+                if (ph.kind != PhaseKind.PURE && n < TINY_FRACTION * phaseMoles[p]) {
+                    continue; // below the normal double range: ln x carries no precision there
+                }
                 if (ph.kind != PhaseKind.PURE) {
                     mu += c.multiplicity * Math.log(n / phaseMoles[p]);
                 }
-                pot = Math.max(pot, Math.abs(mu - c.dot(it.lambda)));
+                double res = Math.abs(mu - c.dot(it.lambda));
+                if (res > pot) {
+                    pot = res;
+                    worst = ph.name + ":" + c.name;
+                }
             }
         }
         double bal = 0;
@@ -65,7 +75,7 @@ public final class ResultChecks {
                 }
             }
         }
-        return new Measures(bal, pot, minA == Double.POSITIVE_INFINITY ? 0 : minA, minP);
+        return new Measures(bal, pot, worst, minA == Double.POSITIVE_INFINITY ? 0 : minA, minP);
     }
 
     /**
@@ -79,7 +89,8 @@ public final class ResultChecks {
             return String.format(Locale.ROOT, "element balance error %.3g exceeds %.1g", d.maxBalanceError(), BALANCE_LIMIT);
         }
         if (!(d.maxPotentialResidual() <= POTENTIAL_LIMIT)) {
-            return String.format(Locale.ROOT, "equilibrium residual %.3g RT exceeds %.1g", d.maxPotentialResidual(), POTENTIAL_LIMIT);
+            return String.format(Locale.ROOT, "equilibrium residual %.3g RT of %s exceeds %.1g", d.maxPotentialResidual(),
+                    d.worstMember(), POTENTIAL_LIMIT);
         }
         if (!(d.minAbsentAffinity() >= AFFINITY_LIMIT)) {
             return String.format(Locale.ROOT, "absent phase %s is supersaturated (affinity %.3g RT per atom)",

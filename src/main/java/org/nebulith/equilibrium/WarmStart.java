@@ -48,7 +48,8 @@ public final class WarmStart {
             int qb = b.indexOf(a.active[q]);
             if (qb >= 0) {
                 double v = a.u[q] + w * (a.u[q] - b.u[qb]);
-                a.u[q] = v > 0 ? v : a.u[q];
+                boolean logAmount = last.system().phaseKind(a.active[q]) == PhaseKind.SOLUTION;
+                a.u[q] = logAmount || v > 0 ? v : a.u[q];
             }
         }
         return new WarmStart(a, t1);

@@ -1,0 +1,122 @@
+package org.nebulith.condensation;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.EquilibriumProblem;
+import org.nebulith.equilibrium.EquilibriumResult;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.equilibrium.WarmStart;
+
+/**
+ * Runs a condensation sequence on cooling: equilibrium at each grid temperature, warm-started by
+ * extrapolation from the two previous steps. With an isolation fraction phi &gt; 0, after each
+ * step a fraction phi of the solids that condensed during that step (the increase of every
+ * condensed member over what stayed reacting) is removed from the reacting system; isolated
+ * solids no longer react. Phase boundaries and 50% points are then bisected
+ * ({@link SequenceRefiner}).
+ */
+public final class SequenceRunner {
+    private final EquilibriumSolver solver;
+
+    /** @param solver the equilibrium solver */
+    public SequenceRunner(EquilibriumSolver solver) {
+        this.solver = solver;
+    }
+
+    /**
+     * @param system   the chemical system
+     * @param totals   input element totals [mol], in the system's element order
+     * @param settings grid, pressure and isolation
+     * @return the sequence
+     */
+    public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+        List<SequenceStep> steps = new ArrayList<>();
+        double[] b = totals.clone();
+        double[][] kept = settings.isFractional() ? zeros(system) : null;
+        double[][] isolated = settings.isFractional() ? zeros(system) : null;
+        EquilibriumResult last = null;
+        EquilibriumResult prev = null;
+        for (double t : grid(settings)) {
+            EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
+            EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            steps.add(new SequenceStep(r, copy(isolated), totals));
+            if (settings.isFractional()) {
+                b = isolate(r, settings.isolation(), kept, isolated, b);
+            }
+            prev = last;
+            last = r;
+        }
+        SequenceRefiner refiner = new SequenceRefiner(solver, settings);
+        List<PhaseEvent> events = refiner.phaseEvents(steps);
+        List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
+        return new CondensationSequence(system, totals, settings, steps, events, temps, isolated, b);
+    }
+
+    /** @return the grid from T-max down to T-min, both included */
+    static double[] grid(SequenceSettings s) {
+        int n = (int) Math.floor((s.tMaxK() - s.tMinK()) / s.tStepK() + 1e-9);
+        boolean exact = Math.abs(s.tMaxK() - n * s.tStepK() - s.tMinK()) < 1e-9;
+        double[] g = new double[n + (exact ? 1 : 2)];
+        for (int i = 0; i <= n; i++) {
+            g[i] = s.tMaxK() - i * s.tStepK();
+        }
+        g[g.length - 1] = s.tMinK();
+        return g;
+    }
+
+    /**
+     * Removes phi of each member's increase; returns the new reacting totals, summed from the gas
+     * and the solids kept (not as a difference, which would cancel for elements that are almost
+     * entirely condensed).
+     */
+    private static double[] isolate(EquilibriumResult r, double phi, double[][] kept, double[][] isolated, double[] b) {
+        ChemicalSystem sys = r.system();
+        double[] nb = new double[b.length];
+        addMembers(sys, 0, r, null, nb);
+        for (int p = 1; p < sys.phaseCount(); p++) {
+            for (int k = 0; k < kept[p].length; k++) {
+                double n = r.memberMoles(p, k);
+                double increase = n - kept[p][k];
+                double removed = increase > 0 ? phi * increase : 0;
+                kept[p][k] = n - removed;
+                isolated[p][k] += removed;
+            }
+            addMembers(sys, p, r, kept[p], nb);
+        }
+        return nb;
+    }
+
+    private static void addMembers(ChemicalSystem sys, int p, EquilibriumResult r, double[] amounts, double[] nb) {
+        int nk = sys.memberNames(p).size();
+        for (int k = 0; k < nk; k++) {
+            double n = amounts == null ? r.memberMoles(p, k) : amounts[k];
+            if (n > 0) {
+                double[] a = sys.memberStoichiometry(p, k);
+                for (int j = 0; j < nb.length; j++) {
+                    nb[j] += n * a[j];
+                }
+            }
+        }
+    }
+
+    private static double[][] zeros(ChemicalSystem sys) {
+        double[][] z = new double[sys.phaseCount()][];
+        for (int p = 0; p < z.length; p++) {
+            z[p] = new double[sys.memberNames(p).size()];
+        }
+        return z;
+    }
+
+    private static double[][] copy(double[][] a) {
+        if (a == null) {
+            return null;
+        }
+        double[][] c = new double[a.length][];
+        for (int i = 0; i < a.length; i++) {
+            c[i] = a[i].clone();
+        }
+        return c;
+    }
+}

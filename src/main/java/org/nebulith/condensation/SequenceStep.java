@@ -1,0 +1,81 @@
+package org.nebulith.condensation;
+
+import org.nebulith.equilibrium.EquilibriumResult;
+import org.nebulith.thermo.Element;
+
+/**
+ * One temperature of a condensation sequence: the equilibrium of the still-reacting system and
+ * the solids isolated so far (all zero in equilibrium mode).
+ */
+public final class SequenceStep {
+    private final EquilibriumResult result;
+    private final double[][] isolated;
+    private final double[] inputTotals;
+
+    SequenceStep(EquilibriumResult result, double[][] isolated, double[] inputTotals) {
+        this.result = result;
+        this.isolated = isolated;
+        this.inputTotals = inputTotals;
+    }
+
+    /** @return temperature [K] */
+    public double temperatureK() {
+        return result.problem().temperatureK();
+    }
+
+    /** @return pressure [bar] */
+    public double pressureBar() {
+        return result.problem().pressureBar();
+    }
+
+    /** @return the equilibrium of the reacting system at this step */
+    public EquilibriumResult result() {
+        return result;
+    }
+
+    /**
+     * @param p phase @param k member
+     * @return moles of member k of phase p isolated at or before this step [mol, input basis]
+     */
+    public double isolatedMoles(int p, int k) {
+        return isolated == null ? 0 : isolated[p][k];
+    }
+
+    /** @param p phase @param k member @return reacting plus isolated moles of the member */
+    public double totalMoles(int p, int k) {
+        return result.memberMoles(p, k) + isolatedMoles(p, k);
+    }
+
+    /** @param e an element @return moles of e in the solids isolated before this step */
+    public double isolatedElementMoles(Element e) {
+        int j = result.system().elementIndex(e);
+        if (j < 0 || isolated == null) {
+            return 0;
+        }
+        double iso = 0;
+        for (int p = 1; p < isolated.length; p++) {
+            for (int k = 0; k < isolated[p].length; k++) {
+                if (isolated[p][k] > 0) {
+                    iso += isolated[p][k] * result.system().memberStoichiometry(p, k)[j];
+                }
+            }
+        }
+        return iso;
+    }
+
+    /** @param e an element @return input amount of e [mol] (0 if not in the system) */
+    public double inputTotal(Element e) {
+        int j = result.system().elementIndex(e);
+        return j < 0 ? 0 : inputTotals[j];
+    }
+
+    /** @param e an element @return fraction of the input amount of e that is condensed (reacting or isolated) */
+    public double condensedFraction(Element e) {
+        int j = result.system().elementIndex(e);
+        if (j < 0) {
+            return 0;
+        }
+        double f = (result.condensedMoles(e) + isolatedElementMoles(e)) / inputTotals[j];
+        return Math.min(1, Math.max(0, f));
+    }
+}
