@@ -5,22 +5,32 @@ import java.util.Objects;
 /**
  * One species of the database: a gas or one condensed polymorph, with its provenance.
  *
- * <p>Validity policy: a condensed species exists only inside its data range,
- * {@code tMin < T <= tMax} (as NASA CEA treats polymorph entries), and is simply absent outside.
- * A gas species may be evaluated down to {@link #GAS_EXTRAPOLATION_BELOW_K} below its lowest
- * data temperature (its polynomials are smooth there and trace gases at such temperatures carry
- * no mass); further out it is refused.
+ * <p>Validity policy ({@link #isValidAt(double)}):
+ * <ul>
+ * <li>A NASA condensed entry exists only inside its data range, {@code tMin < T <= tMax} (as NASA
+ *     CEA treats polymorph entries), and is simply absent outside.</li>
+ * <li>A gas may be evaluated down to {@link #GAS_EXTRAPOLATION_BELOW_K} below its lowest data
+ *     temperature (its polynomials are smooth there and trace gases at such temperatures carry
+ *     no mass) and up to its highest data temperature.</li>
+ * <li>A mineral row may be used between {@link ThermoModel#usableMinK()} and
+ *     {@link ThermoModel#usableMaxK()}, which may extend beyond the source data range by a documented
+ *     margin (see {@code org.nebulith.thermo.mineral.MineralModel}); {@link #isExtrapolatedAt(double)}
+ *     flags such temperatures so that reports can show the caution.</li>
+ * </ul>
  *
  * @param id         unique id: the NASA name for NASA entries, the mineral name for mineral rows
+ *                   ({@code name/VARIANT} for alternative rows of a mineral)
  * @param state      gas, solid or liquid
  * @param formula    element composition per formula unit
  * @param source     key of the publication (see the database header)
- * @param sourceRow  the source's own identifier for the row
+ * @param sourceRow  the source's own identifier for the row (file and line)
  * @param role       {@code primary}, {@code alternative} or {@code extra} (NASA rows are primary)
  * @param thermo     the standard-state functions
+ * @param variant    the variant tag of an alternative row ({@code B88}, {@code ds62}, ...), empty for
+ *                   primary rows
  */
 public record Species(String id, State state, Formula formula, String source, String sourceRow,
-                      String role, ThermoModel thermo) {
+                      String role, ThermoModel thermo, String variant) {
 
     /** How far below its data a gas may be evaluated [K]. */
     public static final double GAS_EXTRAPOLATION_BELOW_K = 150.0;
@@ -33,11 +43,23 @@ public record Species(String id, State state, Formula formula, String source, St
         Objects.requireNonNull(state);
         Objects.requireNonNull(formula);
         Objects.requireNonNull(thermo);
+        variant = variant == null ? "" : variant;
+    }
+
+    /** A species without variant tag (primary row). */
+    public Species(String id, State state, Formula formula, String source, String sourceRow,
+                   String role, ThermoModel thermo) {
+        this(id, state, formula, source, sourceRow, role, thermo, "");
     }
 
     /** @return true for gas species */
     public boolean isGas() {
         return state == State.GAS;
+    }
+
+    /** @return true for solids and liquids */
+    public boolean isCondensed() {
+        return state != State.GAS;
     }
 
     /** @return molar mass [g/mol] */
@@ -53,6 +75,15 @@ public record Species(String id, State state, Formula formula, String source, St
         if (isGas()) {
             return tK >= thermo.tMinK() - GAS_EXTRAPOLATION_BELOW_K && tK <= thermo.tMaxK();
         }
-        return tK > thermo.tMinK() && tK <= thermo.tMaxK();
+        return tK > thermo.usableMinK() && tK <= thermo.usableMaxK();
+    }
+
+    /**
+     * @param tK temperature [K]
+     * @return true if tK is usable ({@link #isValidAt}) but outside the source's own data range,
+     *         so that values there are an extrapolation
+     */
+    public boolean isExtrapolatedAt(double tK) {
+        return isValidAt(tK) && (tK < thermo.tMinK() || tK > thermo.tMaxK());
     }
 }

@@ -21,6 +21,22 @@ public interface ThermoModel {
     /** @return highest temperature of the data [K] */
     double tMaxK();
 
+    /**
+     * @return lowest temperature at which the model may be used [K]; equal to {@link #tMinK()}
+     *         unless the model documents an extrapolation margin
+     */
+    default double usableMinK() {
+        return tMinK();
+    }
+
+    /**
+     * @return highest temperature at which the model may be used [K]; equal to {@link #tMaxK()}
+     *         unless the model documents an extrapolation margin
+     */
+    default double usableMaxK() {
+        return tMaxK();
+    }
+
     /** @param tK temperature [K] @return Cp/R [-] */
     double cpOverR(double tK);
 

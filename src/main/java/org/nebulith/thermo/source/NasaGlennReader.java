@@ -31,10 +31,19 @@ public final class NasaGlennReader {
      * @param hf298       heat of formation at 298.15 K [J/mol]
      * @param intervals   temperature intervals with coefficients
      * @param lineNumber  line of the name record (1-based)
+     * @param intervalLines for each interval, the line of the name record it was read from (1-based)
      */
     public record Entry(String name, String comment, String dateCode, Map<String, Double> elements,
                         boolean condensed, double molarMass, double hf298, List<Nasa9Model.Interval> intervals,
-                        int lineNumber) {
+                        int lineNumber, List<Integer> intervalLines) {
+        /** An entry whose intervals all come from the record at {@code lineNumber}. */
+        public Entry(String name, String comment, String dateCode, Map<String, Double> elements,
+                     boolean condensed, double molarMass, double hf298, List<Nasa9Model.Interval> intervals,
+                     int lineNumber) {
+            this(name, comment, dateCode, elements, condensed, molarMass, hf298, intervals, lineNumber,
+                    java.util.Collections.nCopies(intervals.size(), lineNumber));
+        }
+
         /** @return true for ions (electron in the formula) */
         public boolean isIon() {
             return elements.containsKey("E");
@@ -112,8 +121,10 @@ public final class NasaGlennReader {
                 if (prev != null) {
                     List<Nasa9Model.Interval> all = new ArrayList<>(prev.intervals());
                     all.addAll(ivs);
+                    List<Integer> recLines = new ArrayList<>(prev.intervalLines());
+                    recLines.addAll(java.util.Collections.nCopies(ivs.size(), first + 1));
                     out.put(species, new Entry(species, prev.comment(), prev.dateCode(), prev.elements(),
-                            prev.condensed(), prev.molarMass(), prev.hf298(), all, prev.lineNumber()));
+                            prev.condensed(), prev.molarMass(), prev.hf298(), all, prev.lineNumber(), recLines));
                 } else {
                     out.put(species, new Entry(species, comment, date, el, condensed, mw, hf, ivs, first + 1));
                 }
