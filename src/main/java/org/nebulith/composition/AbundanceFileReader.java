@@ -1,0 +1,107 @@
+package org.nebulith.composition;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+
+import org.nebulith.thermo.Element;
+
+/**
+ * Reads the project's abundance file format: {@code #} lines (the citation, kept as provenance),
+ * then the header {@code element,value,unit} exactly, then one row per element. All rows of a file
+ * use one unit ({@link AbundanceUnit}). Blank lines are ignored. Unknown elements, repeated
+ * elements, non-numeric or negative values and mixed units are errors naming file, line and field.
+ */
+public final class AbundanceFileReader {
+    /** The exact header line. */
+    public static final String HEADER = "element,value,unit";
+
+    private AbundanceFileReader() {
+    }
+
+    /**
+     * @param in   the file contents (closed by this method)
+     * @param name file or preset name for messages
+     * @return the composition with its provenance
+     * @throws IOException on read failure
+     * @throws AbundanceFormatException on malformed content
+     */
+    public static AbundanceSet read(Reader in, String name) throws IOException {
+        List<String> provenance = new ArrayList<>();
+        EnumMap<Element, Double> amounts = new EnumMap<>(Element.class);
+        AbundanceUnit unit = null;
+        boolean headerSeen = false;
+        try (BufferedReader br = new BufferedReader(in)) {
+            int lineNo = 0;
+            for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
+                lineNo++;
+                String line = raw.strip();
+                if (line.isEmpty()) {
+                    continue;
+                }
+                if (line.startsWith("#")) {
+                    provenance.add(line.substring(1).strip());
+                } else if (!headerSeen) {
+                    if (!line.equals(HEADER)) {
+                        throw new AbundanceFormatException(name, lineNo, "header",
+                                "expected exactly '" + HEADER + "', found '" + line + "'");
+                    }
+                    headerSeen = true;
+                } else {
+                    unit = readRow(line, lineNo, name, unit, amounts);
+                }
+            }
+        }
+        if (!headerSeen || amounts.isEmpty()) {
+            throw new AbundanceFormatException(name, 0, "element",
+                    "no data rows; expected header '" + HEADER + "' and one row per element");
+        }
+        return new AbundanceSet(name, provenance, ElementAbundances.of(amounts));
+    }
+
+    private static AbundanceUnit readRow(String line, int lineNo, String name, AbundanceUnit unit,
+                                         EnumMap<Element, Double> amounts) {
+        String[] f = line.split(",", -1);
+        if (f.length != 3) {
+            throw new AbundanceFormatException(name, lineNo, "row",
+                    "expected 3 fields (element,value,unit), found " + f.length);
+        }
+        Element el = Element.fromSymbol(f[0]);
+        if (el == null) {
+            throw new AbundanceFormatException(name, lineNo, "element",
+                    "unknown element '" + f[0].strip() + "'; accepted: " + java.util.Arrays.toString(Element.values()));
+        }
+        AbundanceUnit u = AbundanceUnit.fromToken(f[2]);
+        if (u == null) {
+            throw new AbundanceFormatException(name, lineNo, "unit",
+                    "unknown unit '" + f[2].strip() + "'; accepted: " + AbundanceUnit.accepted());
+        }
+        if (unit != null && u != unit) {
+            throw new AbundanceFormatException(name, lineNo, "unit",
+                    "unit '" + u.token() + "' differs from earlier rows ('" + unit.token() + "'); use one unit per file");
+        }
+        double v = parseValue(f[1], u, name, lineNo);
+        if (amounts.put(el, u.toRelativeMoles(v, el)) != null) {
+            throw new AbundanceFormatException(name, lineNo, "element", "element " + el + " appears twice");
+        }
+        return u;
+    }
+
+    private static double parseValue(String s, AbundanceUnit u, String name, int lineNo) {
+        double v;
+        try {
+            v = Double.parseDouble(s.strip());
+        } catch (NumberFormatException ex) {
+            throw new AbundanceFormatException(name, lineNo, "value", "'" + s.strip() + "' is not a number");
+        }
+        boolean ok = Double.isFinite(v) && (u == AbundanceUnit.LOG_EPS || v >= 0);
+        if (!ok) {
+            throw new AbundanceFormatException(name, lineNo, "value", "'" + s.strip()
+                    + "' must be finite" + (u == AbundanceUnit.LOG_EPS ? "" : " and >= 0"));
+        }
+        return v;
+    }
+}

@@ -1,0 +1,113 @@
+package org.nebulith.zones;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.OptionalDouble;
+
+import org.apache.commons.math3.special.Erf;
+import org.junit.jupiter.api.Test;
+import org.nebulith.disk.DiskConstants;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.disk.PowerLawDisk;
+
+/**
+ * Convergence against analytic integrals. The test disk has Sigma = 1000 g cm^-2 (r/AU)^-1, so
+ * Sigma x 2 pi r dr = 2 pi 1000 AU^2 dr is constant in r and the integrals are elementary.
+ */
+class RadialIntegratorTest {
+    private static final double C = 2 * Math.PI * 1000 * DiskConstants.AU_CM * DiskConstants.AU_CM;
+    private final DiskModel disk = new PowerLawDisk(300, 0.5, 1e-5, 3, 1000, 1.0, 0.1, 10, "test disk (invented)");
+    private final FeedingZone tophat = new FeedingZone("t", KernelShape.TOPHAT, 1.0, 0.4, OptionalDouble.empty());
+    private final FeedingZone gauss = new FeedingZone("g", KernelShape.GAUSSIAN, 2.0, 0.3, OptionalDouble.empty());
+    private static final double STEP_R = 1.137;
+
+    /** f = (step at STEP_R, r^2, 0). */
+    private final RadialIntegrand f = new RadialIntegrand() {
+        @Override
+        public int dimension() {
+            return 3;
+        }
+
+        @Override
+        public void evaluate(org.nebulith.disk.DiskState s, double[] out) {
+            out[0] = s.rAU() < STEP_R ? 1.0 : 0.0;
+            out[1] = s.rAU() * s.rAU();
+            out[2] = 0.0;
+        }
+    };
+
+    private static double rel(double a, double b) {
+        return Math.abs(a - b) / Math.abs(b);
+    }
+
+    @Test
+    void tophatStepAndSmoothAgreeWithAnalyticAndUnderDoubling() {
+        double stepExact = C * (STEP_R - 0.6);
+        double smoothExact = C * (Math.pow(1.4, 3) - Math.pow(0.6, 3)) / 3;
+        for (List<Double> breaks : List.of(List.of(STEP_R), List.<Double>of())) {
+            ZoneIntegral one = new RadialIntegrator(1e-9, 8, 1, 200_000).integrate(tophat, disk, f, breaks);
+            ZoneIntegral two = new RadialIntegrator(1e-9, 8, 2, 200_000).integrate(tophat, disk, f, breaks);
+            for (int i = 0; i < 2; i++) {
+                assertTrue(rel(one.total(i), two.total(i)) < 1e-6, "doubling changed component " + i);
+            }
+            assertTrue(rel(two.total(0), stepExact) < 1e-8, "step, breaks " + breaks + ": " + rel(two.total(0), stepExact));
+            assertTrue(rel(two.total(1), smoothExact) < 1e-12);
+            assertEquals(0.0, two.total(2), 0.0);
+            assertEquals(C * 0.8, two.gasMassG(), 1e-12 * C);
+        }
+    }
+
+    @Test
+    void announcedFrontsAreCheapAndExact() {
+        ZoneIntegral withBreak = RadialIntegrator.defaults().integrate(tophat, disk, f, List.of(STEP_R, 5.0, -1.0));
+        ZoneIntegral without = RadialIntegrator.defaults().integrate(tophat, disk, f, List.of());
+        assertEquals(List.of(0.6, STEP_R, 1.4), withBreak.segmentEdges().stream().map(d -> Math.rint(d * 1e12) / 1e12).toList());
+        assertTrue(withBreak.evaluations() < without.evaluations() / 3,
+                withBreak.evaluations() + " vs " + without.evaluations());
+        assertTrue(rel(withBreak.total(0), C * (STEP_R - 0.6)) < 1e-13);
+    }
+
+    /** Truncated Gaussian: integral of exp(-x^2/2 sigma^2) over +-3 sigma = sigma sqrt(2 pi) erf(3/sqrt 2). */
+    @Test
+    void gaussianKernelMatchesTheErrorFunction() {
+        double exact = C * 0.3 * Math.sqrt(2 * Math.PI) * Erf.erf(3 / Math.sqrt(2));
+        ZoneIntegral one = new RadialIntegrator(1e-9, 8, 1, 200_000).integrate(gauss, disk, f, List.of());
+        ZoneIntegral two = new RadialIntegrator(1e-9, 8, 2, 200_000).integrate(gauss, disk, f, List.of());
+        assertTrue(rel(one.gasMassG(), two.gasMassG()) < 1e-6);
+        assertTrue(rel(two.gasMassG(), exact) < 1e-10, "" + rel(two.gasMassG(), exact));
+        assertEquals(1.1, gauss.rInnerAU(), 1e-12);
+        assertEquals(2.9, gauss.rOuterAU(), 1e-12);
+    }
+
+    @Test
+    void nonFiniteIntegrandAndExhaustedBudgetAreErrors() {
+        RadialIntegrand bad = new RadialIntegrand() {
+            @Override
+            public int dimension() {
+                return 1;
+            }
+
+            @Override
+            public void evaluate(org.nebulith.disk.DiskState s, double[] out) {
+                out[0] = s.rAU() > 1.2 ? Double.NaN : 1;
+            }
+        };
+        String m = assertThrows(IllegalStateException.class,
+                () -> RadialIntegrator.defaults().integrate(tophat, disk, bad, List.of())).getMessage();
+        assertTrue(m.contains("T = ") && m.contains("not finite"), m);
+        m = assertThrows(IllegalStateException.class,
+                () -> new RadialIntegrator(1e-9, 8, 1, 50).integrate(tophat, disk, f, List.of())).getMessage();
+        assertTrue(m.contains("zone 't'"), m);
+    }
+
+    @Test
+    void frontFinderLocatesASignatureChange() {
+        List<Double> fronts = FrontFinder.find(0.1, 10, 50, r -> r < STEP_R, 1e-10);
+        assertEquals(1, fronts.size());
+        assertEquals(STEP_R, fronts.get(0), 1e-10);
+        assertTrue(FrontFinder.find(0.1, 10, 50, r -> 1, 1e-10).isEmpty());
+    }
+}
