@@ -1,0 +1,114 @@
+package org.nebulith.cli;
+
+import java.io.FileNotFoundException;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.NoSuchFileException;
+
+import org.nebulith.errors.InputException;
+import org.nebulith.errors.InternalException;
+import org.nebulith.errors.NebulithException;
+import org.nebulith.errors.NumericalException;
+
+import picocli.CommandLine;
+
+/**
+ * Maps a failure to an exit code and one line of text. The mapping, in order:
+ * <ol>
+ * <li>an {@link InputException} anywhere in the cause chain: 2; a {@link NumericalException}: 3;
+ *     an {@link InternalException}: 1;</li>
+ * <li>a picocli {@link CommandLine.ParameterException} (unknown option, bad value): 2;</li>
+ * <li>an exception whose class, or a superclass, is named in {@link #INPUT_ERROR_CLASSES}
+ *     (by name, so that data-reader exceptions added later map without a change here): 2;</li>
+ * <li>any other {@link IllegalArgumentException} (until every reader throws
+ *     {@link InputException}, readers report malformed files this way): 2;</li>
+ * <li>a missing or unreadable file ({@link NoSuchFileException}, {@link AccessDeniedException},
+ *     {@link FileNotFoundException}) in the cause chain: 2;</li>
+ * <li>other I/O failures: 1; anything else: 1, reported as an internal error.</li>
+ * </ol>
+ * The stack trace is printed only with {@code --verbose}.
+ */
+final class FailureReport {
+
+    /** Exception classes (by fully qualified name) that mean a malformed data file. */
+    static final java.util.Set<String> INPUT_ERROR_CLASSES = java.util.Set.of(
+            "org.nebulith.thermo.DataFormatException");
+
+    /**
+     * @param exitCode the exit code
+     * @param message  the one line shown to the user
+     */
+    record Outcome(int exitCode, String message) {
+    }
+
+    private FailureReport() {
+    }
+
+    /**
+     * @param failure what was thrown
+     * @return exit code and message
+     */
+    static Outcome classify(final Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof NebulithException) {
+                return new Outcome(exitCodeOf((NebulithException) t), t.getMessage());
+            }
+        }
+        if (failure instanceof CommandLine.ParameterException) {
+            return new Outcome(ExitCodes.BAD_INPUT, failure.getMessage());
+        }
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (isNamedInputError(t.getClass()) || t instanceof IllegalArgumentException) {
+                return new Outcome(ExitCodes.BAD_INPUT, t.getMessage());
+            }
+            if (t instanceof NoSuchFileException || t instanceof AccessDeniedException
+                    || t instanceof FileNotFoundException) {
+                return new Outcome(ExitCodes.BAD_INPUT, "cannot read " + t.getMessage());
+            }
+        }
+        if (failure instanceof IOException || failure instanceof UncheckedIOException) {
+            return new Outcome(ExitCodes.FAILURE, "I/O error: " + failure.getMessage());
+        }
+        return new Outcome(ExitCodes.FAILURE, "internal error: " + failure
+                + "; please report it together with the command line (rerun with --verbose for details)");
+    }
+
+    /**
+     * Prints the failure as one line (plus the stack trace when verbose) and returns its exit code.
+     *
+     * @param failure what was thrown
+     * @param err     the error stream
+     * @param verbose whether to print the stack trace
+     * @return the exit code
+     */
+    static int report(final Throwable failure, final PrintWriter err, final boolean verbose) {
+        Outcome outcome = classify(failure);
+        err.println("nebulith: " + outcome.message());
+        if (verbose) {
+            failure.printStackTrace(err);
+        }
+        err.flush();
+        return outcome.exitCode();
+    }
+
+    private static int exitCodeOf(final NebulithException e) {
+        if (e instanceof InputException) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (e instanceof NumericalException) {
+            return ExitCodes.NUMERICAL;
+        }
+        return ExitCodes.FAILURE;
+    }
+
+    private static boolean isNamedInputError(final Class<?> type) {
+        for (Class<?> c = type; c != null; c = c.getSuperclass()) {
+            if (INPUT_ERROR_CLASSES.contains(c.getName())) {
+                return true;
+            }
+        }
+        return false;
+    }
+}

@@ -1,0 +1,232 @@
+package org.nebulith.cli;
+
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collection;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.stream.Collectors;
+
+import org.nebulith.progress.Progress;
+import org.nebulith.progress.ProgressMode;
+import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.RunInputs;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
+
+/**
+ * What a running sub-command gets from the command-line plumbing: streams, verbosity, progress,
+ * the registry of its input files, the effective settings with their origin (for the report),
+ * and its output location.
+ */
+public final class RunContext {
+
+    /** Options a preset may not set. */
+    private static final Set<String> NOT_FROM_PRESET = Set.of("preset", "force", "help", "version");
+
+    /**
+     * One effective setting of the run.
+     *
+     * @param key    the option name without dashes
+     * @param value  its value as text
+     * @param origin {@code command line}, {@code preset FILE:LINE} or {@code default}
+     */
+    public record Setting(String key, String value, String origin) {
+    }
+
+    private final String command;
+    private final Verbosity verbosity;
+    private final RunOptions runOptions;
+    private final PrintStream out;
+    private final PrintStream err;
+    private final RunInputs inputs = new RunInputs();
+    private final Instant started = Instant.now();
+    private final List<Setting> settings;
+    private final Optional<PresetFile> preset;
+
+    private RunContext(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions,
+                       final Optional<PresetFile> preset) {
+        this.command = spec.name();
+        this.verbosity = verbosity;
+        this.runOptions = runOptions;
+        NebulithCommand root = (NebulithCommand) spec.root().userObject();
+        this.out = root.out();
+        this.err = root.err();
+        this.preset = preset;
+        this.settings = collectSettings(spec, preset);
+    }
+
+    /**
+     * @param spec       the running command
+     * @param verbosity  the run's verbosity
+     * @param runOptions its output options
+     * @return the context; the preset (if any) is checked against the command and registered as an input
+     */
+    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions) {
+        Optional<PresetFile> preset = Optional.empty();
+        if (spec.defaultValueProvider() instanceof PresetDefaults) {
+            preset = ((PresetDefaults) spec.defaultValueProvider()).preset();
+        }
+        preset.ifPresent(p -> p.checkFor(spec.name(), presetKeys(spec)));
+        RunContext context = new RunContext(spec, verbosity, runOptions, preset);
+        preset.ifPresent(p -> context.inputs.add(p.file(), "preset"));
+        return context;
+    }
+
+    /** @return the sub-command name, e.g. {@code planet} */
+    public String command() {
+        return command;
+    }
+
+    /** @return the verbosity */
+    public Verbosity verbosity() {
+        return verbosity;
+    }
+
+    /** @return the stream for results (CSV to standard output, for instance) */
+    public PrintStream out() {
+        return out;
+    }
+
+    /** @param note a line for the user, shown unless --quiet */
+    public void info(final String note) {
+        if (verbosity != Verbosity.QUIET) {
+            err.println(note);
+        }
+    }
+
+    /** @param note a detail, shown only with --verbose */
+    public void detail(final String note) {
+        if (verbosity == Verbosity.VERBOSE) {
+            err.println(note);
+        }
+    }
+
+    /** @param caution a warning, always shown (also with --quiet) */
+    public void warn(final String caution) {
+        err.println("warning: " + caution);
+    }
+
+    /**
+     * @param task  short task name
+     * @param total number of steps
+     * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
+     */
+    public Progress progress(final String task, final long total) {
+        return Progress.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
+                task, total, err);
+    }
+
+    /**
+     * Registers an input file: it is checksummed for the report and protected from being overwritten.
+     *
+     * @param file the file
+     * @param role what it is for
+     * @return file
+     */
+    public Path input(final Path file, final String role) {
+        inputs.add(file, role);
+        return file;
+    }
+
+    /** @return the registered inputs */
+    public RunInputs inputs() {
+        return inputs;
+    }
+
+    /** @return whether --force was given */
+    public boolean force() {
+        return runOptions.force();
+    }
+
+    /** @return the --out value, if given (commands writing a single file use it as that file) */
+    public Optional<Path> outOption() {
+        return Optional.ofNullable(runOptions.out());
+    }
+
+    /**
+     * @param defaultRunName run name used when neither --out nor --run-name is given
+     * @return the output folder: --out, or reports/&lt;run-name&gt;
+     */
+    public Path outputFolder(final String defaultRunName) {
+        return runOptions.outputFolder(defaultRunName);
+    }
+
+    /**
+     * Register all inputs first: the folder may not be or contain one.
+     *
+     * @param defaultRunName run name used when neither --out nor --run-name is given
+     * @return an open run folder (commit it at the end; close it in any case)
+     */
+    public RunFolder openRunFolder(final String defaultRunName) {
+        return AtomicOutput.openRunFolder(outputFolder(defaultRunName), force(), inputs);
+    }
+
+    /** @return when the run started */
+    public Instant started() {
+        return started;
+    }
+
+    /** @return the tool version */
+    public String toolVersion() {
+        return ToolVersion.get();
+    }
+
+    /** @return the preset used, if any */
+    public Optional<PresetFile> preset() {
+        return preset;
+    }
+
+    /** @return every option that has a value, with where the value came from */
+    public List<Setting> settings() {
+        return settings;
+    }
+
+    private static Collection<String> presetKeys(final CommandSpec spec) {
+        TreeSet<String> keys = new TreeSet<>();
+        for (OptionSpec option : spec.options()) {
+            String key = PresetDefaults.key(option);
+            if (!NOT_FROM_PRESET.contains(key)) {
+                keys.add(key);
+            }
+        }
+        return keys;
+    }
+
+    private static List<Setting> collectSettings(final CommandSpec spec, final Optional<PresetFile> preset) {
+        CommandLine.ParseResult parsed = spec.commandLine().getParseResult();
+        List<Setting> list = new ArrayList<>();
+        for (OptionSpec option : spec.options()) {
+            if (option.usageHelp() || option.versionHelp() || option.getValue() == null) {
+                continue;
+            }
+            String key = PresetDefaults.key(option);
+            String origin = "default";
+            if (parsed != null && parsed.hasMatchedOption(option)) {
+                origin = "command line";
+            } else if (preset.isPresent() && preset.get().get(key).isPresent()) {
+                origin = "preset " + preset.get().file() + ":" + preset.get().get(key).get().line();
+            }
+            list.add(new Setting(key, text(option.getValue()), origin));
+        }
+        return List.copyOf(list);
+    }
+
+    private static String text(final Object value) {
+        if (value instanceof Object[]) {
+            return Arrays.stream((Object[]) value).map(String::valueOf).collect(Collectors.joining(","));
+        }
+        if (value instanceof Collection<?>) {
+            return ((Collection<?>) value).stream().map(String::valueOf).collect(Collectors.joining(","));
+        }
+        return String.valueOf(value);
+    }
+}

@@ -1,0 +1,94 @@
+package org.nebulith.errors;
+
+import java.text.MessageFormat;
+import java.util.Locale;
+
+import org.nebulith.format.Decimal;
+
+/**
+ * The one catalogue of user-facing error messages. Each template uses {@link MessageFormat}
+ * placeholders {@code {0}..{n-1}} and declares how many parameters it takes; a test checks that
+ * every template formats with exactly that many. Numbers are formatted with {@link Locale#ROOT}.
+ *
+ * <p>Input messages follow one shape so that a user can fix the input without a debugger:
+ * where (file, line, field), what is wrong, what is accepted.
+ */
+public enum Messages {
+
+    /** A bad value in an input file: file, line, field, what is wrong, what is accepted. */
+    BAD_INPUT_FIELD(5, "{0}: line {1}: field \"{2}\": {3}; accepted: {4}"),
+    /** A bad input file as a whole (no line): file, what is wrong, what is accepted. */
+    BAD_INPUT_FILE(3, "{0}: {1}; accepted: {2}"),
+    /** A bad command-line value: option, value, what is wrong, what is accepted. */
+    BAD_OPTION_VALUE(4, "option {0}: value \"{1}\": {2}; accepted: {3}"),
+    /** An input file that cannot be found or read: file, reason. */
+    INPUT_NOT_READABLE(2, "{0}: cannot read input file ({1})"),
+    /** A preset name that resolves to no file: name, searched folders, available names. */
+    UNKNOWN_PRESET(3, "preset \"{0}\" not found in {1}; available presets: {2}"),
+    /** An output folder or file exists: path. */
+    OUTPUT_EXISTS(1, "{0}: output already exists; use --force to replace it, or choose another --out or --run-name"),
+    /** An output would overwrite or replace an input of the same run: output, input. */
+    OUTPUT_IS_INPUT(2, "{0}: refusing to write here because it would overwrite the input file {1}"),
+    /** An output name that is not a plain file or folder name: name, accepted. */
+    BAD_OUTPUT_NAME(2, "output name \"{0}\" is not allowed; accepted: {1}"),
+    /** The equilibrium iteration did not converge: T [K], P [bar], composition, iterations, residual. */
+    NO_CONVERGENCE(5, "equilibrium did not converge at T = {0} K, P = {1} bar, composition {2} after {3} iterations"
+            + " (residual {4})"),
+    /** A numerical result is unusable: what, T [K], P [bar], composition. */
+    NUMERICAL_FAILURE(4, "{0} at T = {1} K, P = {2} bar, composition {3}"),
+    /** A non-finite number reached an output table: table, column, row (1-based, header excluded), value. */
+    NON_FINITE_OUTPUT(4, "{0}: column \"{1}\", row {2}: value {3} is not a finite number; nothing was written"),
+    /** A sub-command that the build does not provide yet: command name. */
+    NOT_YET_AVAILABLE(1, "the \"{0}\" command is not yet available in this build"),
+    /** A branch that should be impossible: description. */
+    INTERNAL(1, "internal error: {0}; please report it together with the command line");
+
+    private final int parameterCount;
+    private final String template;
+
+    Messages(final int parameterCount, final String template) {
+        this.parameterCount = parameterCount;
+        this.template = template;
+    }
+
+    /** @return the number of parameters the template expects */
+    public int parameterCount() {
+        return parameterCount;
+    }
+
+    /** @return the raw {@link MessageFormat} template */
+    public String template() {
+        return template;
+    }
+
+    /**
+     * Formats the template. Numbers are rendered with {@link Locale#ROOT} and no grouping;
+     * doubles keep their shortest round-trip representation so that a state can be reproduced.
+     *
+     * @param parts exactly {@link #parameterCount()} values
+     * @return the formatted message
+     * @throws IllegalArgumentException if the number of parts does not match
+     */
+    public String format(final Object... parts) {
+        if (parts.length != parameterCount) {
+            throw new IllegalArgumentException(name() + " expects " + parameterCount + " parameters, got "
+                    + parts.length);
+        }
+        Object[] shown = new Object[parts.length];
+        for (int i = 0; i < parts.length; i++) {
+            shown[i] = render(parts[i]);
+        }
+        return new MessageFormat(template, Locale.ROOT).format(shown);
+    }
+
+    private static Object render(final Object part) {
+        if (part instanceof Double || part instanceof Float) {
+            double value = ((Number) part).doubleValue();
+            return Double.isFinite(value) ? Decimal.format(value) : Double.toString(value);
+        }
+        if (part instanceof Number) {
+            return part.toString();
+        }
+        return String.valueOf(part);
+    }
+}

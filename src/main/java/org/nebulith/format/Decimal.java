@@ -1,0 +1,80 @@
+package org.nebulith.format;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+
+/**
+ * The one way Nebulith writes a floating-point number in its outputs (CSV cells, messages,
+ * report tables): the <em>shortest round-trip decimal</em>.
+ *
+ * <p>Rule: take the fewest significant digits p (1 to 17) such that the exact decimal value of
+ * the double, rounded half-even to p digits, parses back to the same double. That p is found by
+ * bisection (if p digits round-trip, so do p + 1). The digits are written in plain notation when
+ * the decimal exponent is in [-4, 7) ({@code 1500}, {@code 0.00012}, {@code 2.5}) and otherwise as
+ * {@code d.ddde-N} / {@code d.dddeN} ({@code 1.5e-7}, {@code 6.02214076e23}). Negative zero is
+ * written {@code 0}. The result depends only on the double, not on the JDK version or the
+ * default locale, so identical numbers give byte-identical files. NaN and infinities are
+ * refused: callers must not write them.
+ */
+public final class Decimal {
+
+    private static final int MAX_DIGITS = 17;
+    private static final int PLAIN_MIN_EXPONENT = -4;
+    private static final int PLAIN_MAX_EXPONENT = 7;
+
+    private Decimal() {
+    }
+
+    /**
+     * @param value a finite double
+     * @return its shortest round-trip decimal text (see class rule)
+     * @throws IllegalArgumentException for NaN or infinite values
+     */
+    public static String format(final double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("not a finite number: " + value);
+        }
+        if (value == 0.0) {
+            return "0";
+        }
+        BigDecimal shortest = shortestDigits(value);
+        int exponent = shortest.precision() - shortest.scale() - 1;
+        if (exponent >= PLAIN_MIN_EXPONENT && exponent < PLAIN_MAX_EXPONENT) {
+            return shortest.toPlainString();
+        }
+        return scientific(shortest, exponent);
+    }
+
+    private static BigDecimal shortestDigits(final double value) {
+        BigDecimal exact = new BigDecimal(value);
+        int low = 1;
+        int high = MAX_DIGITS;
+        while (low < high) {
+            int mid = (low + high) >>> 1;
+            if (round(exact, mid).doubleValue() == value) {
+                high = mid;
+            } else {
+                low = mid + 1;
+            }
+        }
+        return round(exact, low).stripTrailingZeros();
+    }
+
+    private static BigDecimal round(final BigDecimal exact, final int digits) {
+        return exact.round(new MathContext(digits, RoundingMode.HALF_EVEN));
+    }
+
+    private static String scientific(final BigDecimal digits, final int exponent) {
+        String unscaled = digits.unscaledValue().abs().toString();
+        StringBuilder text = new StringBuilder(unscaled.length() + 8);
+        if (digits.signum() < 0) {
+            text.append('-');
+        }
+        text.append(unscaled.charAt(0));
+        if (unscaled.length() > 1) {
+            text.append('.').append(unscaled, 1, unscaled.length());
+        }
+        return text.append('e').append(exponent).toString();
+    }
+}

@@ -1,0 +1,102 @@
+package org.nebulith.report;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+
+import org.nebulith.errors.InputException;
+import org.nebulith.errors.InternalException;
+import org.nebulith.errors.Messages;
+
+/**
+ * The input files of one run, in the order they were registered, each with its SHA-256
+ * checksum and size. Used twice: the report lists them (so a reader can check that the same
+ * files were used), and every output path is checked against them so that a run never writes
+ * onto, or replaces a folder holding, one of its own inputs.
+ */
+public final class RunInputs {
+
+    /**
+     * One input file.
+     *
+     * @param path   the path as the user gave it
+     * @param role   what the file is for, e.g. {@code preset}, {@code feeding zones}
+     * @param sha256 lower-case hex SHA-256 of the content
+     * @param bytes  size [bytes]
+     */
+    public record InputFile(Path path, String role, String sha256, long bytes) {
+    }
+
+    private final List<InputFile> files = new ArrayList<>();
+
+    /**
+     * Registers an input file, reading it once to compute its checksum. Registering the same
+     * file twice keeps the first entry.
+     *
+     * @param file the file
+     * @param role what it is for
+     * @return this
+     * @throws InputException if the file cannot be read
+     */
+    public synchronized RunInputs add(final Path file, final String role) {
+        for (InputFile known : files) {
+            if (PathIdentity.same(known.path(), file)) {
+                return this;
+            }
+        }
+        try {
+            files.add(new InputFile(file, role, sha256(file), Files.size(file)));
+        } catch (IOException e) {
+            throw new InputException(Messages.INPUT_NOT_READABLE, e, file, e.getClass().getSimpleName());
+        }
+        return this;
+    }
+
+    /** @return the registered files, in registration order */
+    public synchronized List<InputFile> files() {
+        return List.copyOf(files);
+    }
+
+    /**
+     * Refuses an output path that is an input or (for a folder that will be replaced) contains one.
+     *
+     * @param output an output file or folder
+     * @throws InputException naming the output and the input
+     */
+    public synchronized void checkNotInput(final Path output) {
+        for (InputFile input : files) {
+            if (PathIdentity.same(input.path(), output) || PathIdentity.contains(output, input.path())) {
+                throw new InputException(Messages.OUTPUT_IS_INPUT, null, output, input.path());
+            }
+        }
+    }
+
+    /**
+     * @param file a readable file
+     * @return lower-case hex SHA-256 of its content
+     * @throws IOException if it cannot be read
+     */
+    public static String sha256(final Path file) throws IOException {
+        MessageDigest digest = newDigest();
+        try (InputStream in = new DigestInputStream(Files.newInputStream(file), digest)) {
+            in.transferTo(OutputStream.nullOutputStream());
+        }
+        return HexFormat.of().formatHex(digest.digest());
+    }
+
+    private static MessageDigest newDigest() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new InternalException("SHA-256 missing from the Java runtime", e);
+        }
+    }
+}
