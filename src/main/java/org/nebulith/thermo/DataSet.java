@@ -140,7 +140,8 @@ public final class DataSet {
     /**
      * Replaces every selected row that has an alternative {@code id/variant} by that alternative. A
      * mineral whose default representation is a set of NASA entries (iron, nickel, cobalt: their
-     * crystalline NASA phases) has those entries replaced. Other selected mineral rows of a composition
+     * crystalline NASA phases) has those entries replaced whose temperature range overlaps the usable
+     * range of the alternative (RH95 hcp cobalt, valid to 700 K, replaces Co(a) but not Co(b)). Other selected mineral rows of a composition
      * the variant provides, but which have no row of that variant, are dropped (for example ds62
      * tridymite with {@code B88}), so that one composition is not described by two calibrations.
      * Phases the variant does not cover keep their rows: {@code B88} still contains ds62 rows for
@@ -166,7 +167,9 @@ public final class DataSet {
             if (!applies && primary != null && isNasaForm(primary) && isMineralRow(primary)) {
                 List<String> nasa = new ArrayList<>();
                 sel.values().forEach(s -> {
-                    if (isNasaEntry(s) && s.state() == Species.State.SOLID && s.formula().equals(primary.formula())) {
+                    if (isNasaEntry(s) && s.state() == Species.State.SOLID && s.formula().equals(primary.formula())
+                            && s.thermo().tMinK() < alt.thermo().usableMaxK()
+                            && s.thermo().tMaxK() > alt.thermo().usableMinK()) {
                         nasa.add(s.id());
                     }
                 });

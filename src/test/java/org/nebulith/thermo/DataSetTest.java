@@ -67,6 +67,8 @@ class DataSetTest {
         DataSet ds62 = DataSet.named(DataSet.DEFAULT).withVariant("ds62");
         assertTrue(ids(ds62).containsAll(List.of("iron/ds62", "nickel/ds62", "Fe(L)")));
         assertFalse(ids(ds62).contains("Fe(a)"));
+        Set<String> rh = ids(DataSet.named(DataSet.DEFAULT).withVariant("RH95"));
+        assertTrue(rh.contains("cobalt/RH95") && rh.contains("Co(b)") && !rh.contains("Co(a)"));
         assertThrows(IllegalArgumentException.class, () -> DataSet.named(DataSet.DEFAULT).withVariant("nonsense"));
     }
 }
