@@ -85,7 +85,7 @@ public final class EquilibriumSolver {
             a.failure = failure;
             return a;
         }
-        EquilibriumResult r = ResultBuilder.build(problem, st, kernel, it, sel.changes, false);
+        EquilibriumResult r = ResultBuilder.build(problem, st, kernel, sel, it, false);
         String bad = ResultChecks.failure(r, options);
         if (bad != null) {
             a.failure = bad;

@@ -27,6 +27,8 @@ final class NewtonKernel {
     private final int m;
     private final SolverOptions opt;
     int iterations;
+    /** mole fractions (not normalised) of the mixture members from the latest evaluation */
+    final double[][] lastX;
     double lastBalance;
     double lastPotential;
 
@@ -36,6 +38,7 @@ final class NewtonKernel {
         this.b = totals;
         this.m = sys.elementCount();
         this.opt = opt;
+        this.lastX = new double[sys.phaseCount()][];
     }
 
     /** Mole fraction of member k of phase p (not normalised). */
@@ -136,8 +139,14 @@ final class NewtonKernel {
         double sum = 0;
         double colScale = n;
         double[] grad = jac == null ? null : jac[row];
+        double[] xs = lastX[p];
+        if (xs == null) {
+            xs = new double[ph.members.length];
+            lastX[p] = xs;
+        }
         for (int k = 0; k < ph.members.length; k++) {
             double xk = x(p, k, lambda);
+            xs[k] = xk;
             if (xk == 0) {
                 continue;
             }
@@ -182,12 +191,13 @@ final class NewtonKernel {
         double[] r = new double[n];
         double[] rTrial = new double[n];
         double[][] jac = new double[n][n];
+        double[][] jacTrial = new double[n][n];
+        double[] d = new double[n];
         double f = evaluate(it, r, jac);
         for (int iter = 0; iter < opt.maxNewtonIterations(); iter++) {
             if (converged(r, n)) {
                 return true;
             }
-            double[] d = new double[n];
             for (int i = 0; i < n; i++) {
                 d[i] = -r[i];
             }
@@ -200,20 +210,27 @@ final class NewtonKernel {
             double fTrial = Double.POSITIVE_INFINITY;
             for (int ls = 0; ls < 40; ls++) {
                 trial = step(it, d, alpha);
-                fTrial = evaluate(trial, rTrial, null);
+                fTrial = evaluate(trial, rTrial, jacTrial);
                 if (fTrial <= (1 - 1e-4 * alpha) * f || fTrial < 1e-28) {
                     break;
                 }
                 alpha *= 0.5;
             }
             if (!(fTrial < f) && !(fTrial < 1e-28)) {
+                evaluate(it, r, jac);
                 return converged(r, n);
             }
             copyInto(trial, it);
             if (vanishing(it) >= 0) {
                 return false;
             }
-            f = evaluate(it, r, jac);
+            double[] tr = r;
+            r = rTrial;
+            rTrial = tr;
+            double[][] tj = jac;
+            jac = jacTrial;
+            jacTrial = tj;
+            f = fTrial;
         }
         return converged(r, n);
     }

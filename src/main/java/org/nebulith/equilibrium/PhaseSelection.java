@@ -15,6 +15,9 @@ final class PhaseSelection {
     private final SolverOptions opt;
     private final ChemicalSystem sys;
     int changes;
+    /** smallest affinity per atom of an absent available phase at the end of the last scan [RT] */
+    double minAffinity;
+    String minAffinityPhase = "";
 
     PhaseSelection(StateData st, NewtonKernel kernel, SolverOptions opt) {
         this.st = st;
@@ -40,10 +43,12 @@ final class PhaseSelection {
             }
             if (!ok) {
                 if (lastAdded >= 0 && backup != null) {
-                    restore(backup, it);
-                    blocked.add(lastAdded);
-                    lastAdded = -1;
                     changes++;
+                    if (!swapIn(lastAdded, backup, it)) {
+                        restore(backup, it);
+                        blocked.add(lastAdded);
+                    }
+                    lastAdded = -1;
                     continue;
                 }
                 int weakest = smallestSolution(it);
@@ -99,6 +104,65 @@ final class PhaseSelection {
         return worst;
     }
 
+    /**
+     * A phase whose addition made the Newton system fail is often nearly dependent on a present
+     * phase (a solution taking over from its pure end-member at a polymorph change): tries to
+     * replace each of the most similar present phases by it, keeping the first state that converges.
+     *
+     * @return true if a swap succeeded (it then holds the new state)
+     */
+    private boolean swapIn(int cand, Iterate backup, Iterate it) {
+        double[] target = dominantStoichiometry(cand, backup.lambda);
+        Integer[] order = new Integer[backup.active.length];
+        double[] sim = new double[backup.active.length];
+        for (int q = 0; q < order.length; q++) {
+            order[q] = q;
+            sim[q] = cosine(target, dominantStoichiometry(backup.active[q], backup.lambda));
+        }
+        java.util.Arrays.sort(order, (a, b) -> Double.compare(sim[b], sim[a]));
+        for (int i = 0; i < Math.min(3, order.length); i++) {
+            if (sim[order[i]] <= 0) {
+                break;
+            }
+            Iterate trial = backup.copy();
+            trial.remove(order[i]);
+            trial.add(cand, sys.phaseKind(cand) == PhaseKind.SOLUTION ? NewtonKernel.START_LN : 0.0);
+            if (kernel.converge(trial) && kernel.vanishing(trial) < 0) {
+                restore(trial, it);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private double[] dominantStoichiometry(int p, double[] lambda) {
+        PhaseDef ph = sys.phase(p);
+        int best = 0;
+        double bv = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k < ph.members.length; k++) {
+            double c = st.c[p][k];
+            double v = c == Double.POSITIVE_INFINITY ? Double.NEGATIVE_INFINITY
+                    : (ph.members[k].dot(lambda) - c) / ph.members[k].multiplicity;
+            if (v > bv) {
+                bv = v;
+                best = k;
+            }
+        }
+        return ph.members[best].a;
+    }
+
+    private static double cosine(double[] a, double[] b) {
+        double ab = 0;
+        double aa = 0;
+        double bb = 0;
+        for (int j = 0; j < a.length; j++) {
+            ab += a[j] * b[j];
+            aa += a[j] * a[j];
+            bb += b[j] * b[j];
+        }
+        return ab / Math.sqrt(aa * bb);
+    }
+
     /** @return the active index of the solution with the smallest scaled amount, or -1 */
     private int smallestSolution(Iterate it) {
         int best = -1;
@@ -128,11 +192,20 @@ final class PhaseSelection {
     private int mostSupersaturated(Iterate it, Set<Integer> blocked) {
         int best = -1;
         double bv = opt.affinityTolerance();
+        minAffinity = Double.POSITIVE_INFINITY;
+        minAffinityPhase = "";
         for (int p = 1; p < sys.phaseCount(); p++) {
-            if (!st.available[p] || blocked.contains(p) || it.indexOf(p) >= 0) {
+            if (!st.available[p] || it.indexOf(p) >= 0) {
                 continue;
             }
             double d = drivingForce(p, it.lambda);
+            if (-d < minAffinity) {
+                minAffinity = -d;
+                minAffinityPhase = sys.phaseName(p);
+            }
+            if (blocked.contains(p)) {
+                continue;
+            }
             if (d > bv) {
                 bv = d;
                 best = p;

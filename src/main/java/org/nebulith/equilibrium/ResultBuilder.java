@@ -5,8 +5,9 @@ final class ResultBuilder {
     private ResultBuilder() {
     }
 
-    static EquilibriumResult build(EquilibriumProblem problem, StateData st, NewtonKernel kernel, Iterate it,
-                                   int changes, boolean cold) {
+    static EquilibriumResult build(EquilibriumProblem problem, StateData st, NewtonKernel kernel,
+                                   PhaseSelection selection, Iterate it, boolean cold) {
+        int changes = selection.changes;
         ChemicalSystem sys = st.system;
         int np = sys.phaseCount();
         double[] phaseMoles = new double[np];
@@ -30,7 +31,7 @@ final class ResultBuilder {
                 fillMixture(p, Math.exp(it.u[q]) * st.scale[p], kernel, it, phaseMoles, memberMoles);
             }
         }
-        ResultChecks.Measures ms = ResultChecks.measure(problem, st, kernel, it, phaseMoles, memberMoles);
+        ResultChecks.Measures ms = ResultChecks.measure(problem, st, selection, it, phaseMoles, memberMoles);
         EquilibriumResult.Diagnostics d = new EquilibriumResult.Diagnostics(kernel.iterations, changes,
                 ms.balance(), ms.potential(), ms.worstMember(), ms.minAffinity(), ms.minAffinityPhase(), st.excludedGas, cold);
         return new EquilibriumResult(problem, it.lambda.clone(), phaseMoles, memberMoles, memberSpecies, d, it.copy());
@@ -40,8 +41,9 @@ final class ResultBuilder {
                                     double[][] memberMoles) {
         double sum = 0;
         double[] x = memberMoles[p];
+        double[] known = kernel.lastX[p];
         for (int k = 0; k < x.length; k++) {
-            x[k] = kernel.x(p, k, it.lambda);
+            x[k] = known != null ? known[k] : kernel.x(p, k, it.lambda);
             sum += x[k];
         }
         for (int k = 0; k < x.length; k++) {

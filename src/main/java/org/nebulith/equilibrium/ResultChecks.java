@@ -24,7 +24,7 @@ public final class ResultChecks {
     record Measures(double balance, double potential, String worstMember, double minAffinity, String minAffinityPhase) {
     }
 
-    static Measures measure(EquilibriumProblem problem, StateData st, NewtonKernel kernel, Iterate it,
+    static Measures measure(EquilibriumProblem problem, StateData st, PhaseSelection selection, Iterate it,
                             double[] phaseMoles, double[][] memberMoles) {
         ChemicalSystem sys = st.system;
         int m = sys.elementCount();
@@ -63,18 +63,8 @@ public final class ResultChecks {
         for (int j = 0; j < m; j++) {
             bal = Math.max(bal, Math.abs(sum[j] - problem.total(j)) / problem.total(j));
         }
-        PhaseSelection probe = new PhaseSelection(st, kernel, SolverOptions.defaults());
-        double minA = Double.POSITIVE_INFINITY;
-        String minP = "";
-        for (int p = 1; p < sys.phaseCount(); p++) {
-            if (st.available[p] && phaseMoles[p] <= 0) {
-                double aff = -probe.drivingForce(p, it.lambda);
-                if (aff < minA) {
-                    minA = aff;
-                    minP = sys.phaseName(p);
-                }
-            }
-        }
+        double minA = selection.minAffinity;
+        String minP = selection.minAffinityPhase;
         return new Measures(bal, pot, worst, minA == Double.POSITIVE_INFINITY ? 0 : minA, minP);
     }
 
