@@ -1,0 +1,194 @@
+package org.nebulith.cli;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import org.nebulith.composition.AbundancePresets;
+import org.nebulith.composition.AbundanceSet;
+import org.nebulith.composition.CarbonToOxygen;
+import org.nebulith.composition.DustEnrichment;
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.equilibrium.SolutionModel;
+import org.nebulith.equilibrium.SolutionModels;
+import org.nebulith.equilibrium.SystemSpec;
+import org.nebulith.errors.InputException;
+import org.nebulith.thermo.DataSet;
+import org.nebulith.thermo.Element;
+import org.nebulith.thermo.SpeciesDatabase;
+import org.nebulith.thermo.SpeciesListReader;
+
+import picocli.CommandLine.Option;
+
+/**
+ * The options shared by every command that builds a gas composition and a chemical system:
+ * composition (preset, file or inline), dust enrichment, C/O, data set, alternative mineral rows,
+ * user species, species restrictions and solutions.
+ */
+public final class ChemistryOptions {
+
+    @Option(names = "--composition", paramLabel = "NAME|FILE",
+            description = "Gas composition: a preset (protosolar-lodders2003, photosphere-asplund2009, "
+                    + "ci-chondrite) or an abundance file. Default: ${DEFAULT-VALUE}.",
+            defaultValue = AbundancePresets.PROTOSOLAR_LODDERS2003)
+    private String composition;
+
+    @Option(names = "--elements", paramLabel = "X=n,...",
+            description = "Inline composition in moles, e.g. H=1,He=0.085,O=4.9e-4 (replaces --composition).")
+    private String elements;
+
+    @Option(names = "--dust-enrichment", paramLabel = "F", defaultValue = "1",
+            description = "Add (F-1) times the CI-chondrite dust per Si of the gas; 1 means none. Default: ${DEFAULT-VALUE}.")
+    private double dustEnrichment;
+
+    @Option(names = "--C-O", paramLabel = "RATIO",
+            description = "Set the C/O atom ratio by changing C only.")
+    private Double carbonToOxygen;
+
+    @Option(names = "--data", paramLabel = "SET", defaultValue = DataSet.DEFAULT,
+            description = "Thermodynamic data set: default, nasa, reference-pure. Default: ${DEFAULT-VALUE}.")
+    private String dataSet;
+
+    @Option(names = "--variant", paramLabel = "TAG",
+            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) for a sensitivity run; repeatable.")
+    private List<String> variants = new ArrayList<>();
+
+    @Option(names = "--species-file", paramLabel = "FILE",
+            description = "Add species from a file in the project's species format.")
+    private Path speciesFile;
+
+    @Option(names = "--gases", paramLabel = "FILE", description = "Use only the gas ids listed in FILE, one per line.")
+    private Path gasList;
+
+    @Option(names = "--condensed", paramLabel = "FILE",
+            description = "Use only the condensed ids listed in FILE, one per line.")
+    private Path condensedList;
+
+    @Option(names = "--solutions", paramLabel = "LIST",
+            description = "Ideal solutions: 'all', 'none' (pure phases) or a comma list of metal, olivine, "
+                    + "orthopyroxene, melilite, plagioclase, spinel-hercynite. Default: all for the default "
+                    + "data set, none otherwise.")
+    private String solutions;
+
+    /**
+     * @param context the run (inputs are registered with it)
+     * @return the gas composition after dust enrichment and C/O override [mol]
+     */
+    public ElementAbundances composition(RunContext context) {
+        ElementAbundances base = baseComposition(context).abundances();
+        if (!(dustEnrichment >= 1)) {
+            throw InputException.atOption("--dust-enrichment", Double.toString(dustEnrichment),
+                    "enrichment below 1 would remove dust", "a factor >= 1");
+        }
+        if (dustEnrichment > 1) {
+            base = DustEnrichment.enrich(base, AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances(),
+                    dustEnrichment);
+        }
+        if (carbonToOxygen != null) {
+            if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
+                throw InputException.atOption("--C-O", carbonToOxygen.toString(), "not a positive ratio",
+                        "a number > 0");
+            }
+            base = CarbonToOxygen.withCarbonToOxygen(base, carbonToOxygen);
+        }
+        return base;
+    }
+
+    /** @param context the run @return the composition as given, with its provenance */
+    public AbundanceSet baseComposition(RunContext context) {
+        try {
+            if (elements != null) {
+                return AbundancePresets.resolve(elements);
+            }
+            Path p = Path.of(composition);
+            if (!AbundancePresets.NAMES.contains(composition) && Files.exists(p)) {
+                context.input(p, "composition");
+            }
+            return AbundancePresets.resolve(composition);
+        } catch (IOException e) {
+            throw InputException.atOption("--composition", composition, "cannot be read (" + e.getMessage() + ")",
+                    "a preset name, a readable abundance file, or Element=amount pairs");
+        }
+    }
+
+    /** @return a one-line description of the composition options, for reports */
+    public String describeComposition() {
+        StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : composition);
+        if (dustEnrichment != 1) {
+            sb.append("; dust enrichment ").append(dustEnrichment);
+        }
+        if (carbonToOxygen != null) {
+            sb.append("; C/O set to ").append(carbonToOxygen);
+        }
+        return sb.toString();
+    }
+
+    /**
+     * @param context the run (list and species files are registered as inputs)
+     * @return the system specification
+     */
+    public SystemSpec systemSpec(RunContext context) throws IOException {
+        if (!DataSet.NAMES.contains(dataSet)) {
+            throw InputException.atOption("--data", dataSet, "unknown data set", String.join(", ", DataSet.NAMES));
+        }
+        DataSet ds = DataSet.named(dataSet);
+        Optional<SpeciesDatabase> user = Optional.empty();
+        if (speciesFile != null) {
+            Path f = context.input(speciesFile, "species file");
+            user = Optional.of(SpeciesDatabase.load(f.toString(), () -> Files.newInputStream(f)));
+            ds = ds.plus(user.get());
+        }
+        Optional<Set<String>> gases = readList(context, gasList, ds, true);
+        Optional<Set<String>> condensed = readList(context, condensedList, ds, false);
+        return new SystemSpec(dataSet, variants, user, gases, condensed, solutionModels());
+    }
+
+    private static Optional<Set<String>> readList(RunContext context, Path file, DataSet ds, boolean gas)
+            throws IOException {
+        if (file == null) {
+            return Optional.empty();
+        }
+        Path f = context.input(file, gas ? "gas list" : "condensed list");
+        try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
+            return Optional.of(SpeciesListReader.read(r, file.toString(), ds, gas));
+        }
+    }
+
+    private List<SolutionModel> solutionModels() {
+        String s = solutions != null ? solutions : (DataSet.DEFAULT.equals(dataSet) ? "all" : "none");
+        if (s.equalsIgnoreCase("all")) {
+            return SolutionModels.all();
+        }
+        if (s.equalsIgnoreCase("none")) {
+            return List.of();
+        }
+        List<SolutionModel> out = new ArrayList<>();
+        for (String name : s.split(",")) {
+            try {
+                out.add(SolutionModels.byName(name.trim()));
+            } catch (IllegalArgumentException e) {
+                throw InputException.atOption("--solutions", s, "unknown solution '" + name.trim() + "'",
+                        "all, none, or a comma list of metal, olivine, orthopyroxene, melilite, plagioclase, spinel-hercynite");
+            }
+        }
+        return out;
+    }
+
+    /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */
+    public static Set<Element> elementsOf(ElementAbundances comp) {
+        Set<Element> e = EnumSet.noneOf(Element.class);
+        for (Element el : comp.elements()) {
+            if (comp.moles(el) > 0) {
+                e.add(el);
+            }
+        }
+        return e;
+    }
+}
