@@ -51,10 +51,20 @@ public final class PlanetFormation {
         LocalCondensation local = localCondensation(gas);
         List<ZonePlanet> planets = new ArrayList<>();
         for (FeedingZone z : zones) {
-            ZoneInventory inv = settings.integration().integrate(z, disk, local);
-            planets.add(new ZonePlanet(inv, PlanetModel.build(phases(inv), settings.core())));
+            planets.add(zonePlanet(z, disk, local));
         }
         return new Formation(gas, planets, local);
+    }
+
+    /**
+     * @param zone  a feeding zone
+     * @param disk  the disk
+     * @param local the local condensation of the gas (shared between zones of one run)
+     * @return the zone's planet
+     */
+    public ZonePlanet zonePlanet(FeedingZone zone, DiskModel disk, LocalCondensation local) {
+        ZoneInventory inv = settings.integration().integrate(zone, disk, local);
+        return new ZonePlanet(inv, PlanetModel.build(condensedPhases(inv), settings.core()));
     }
 
     /**
@@ -77,8 +87,8 @@ public final class PlanetFormation {
         return new LocalCondensation(sys, b, solver, settings.floorK());
     }
 
-    /** @param inv a zone inventory @return its condensed phases for the planet model */
-    static List<CondensedPhase> phases(ZoneInventory inv) {
+    /** @param inv a zone inventory @return its condensed phases for the planet model (solution members as "phase:member") */
+    public static List<CondensedPhase> condensedPhases(ZoneInventory inv) {
         ChemicalSystem sys = inv.system();
         List<CondensedPhase> out = new ArrayList<>();
         for (int p = 1; p < sys.phaseCount(); p++) {
