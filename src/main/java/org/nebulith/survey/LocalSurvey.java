@@ -158,6 +158,10 @@ public final class LocalSurvey {
         if (problems.size() > SHOWN_PROBLEMS) {
             log.warn("... and " + (problems.size() - SHOWN_PROBLEMS) + " more problems");
         }
+        if (problems.isEmpty() && check.goodRows() == 0) {
+            throw InputException.inFile(request.shownName(), "the catalogue has no star rows",
+                    "a header line and one row per star");
+        }
         if (problems.isEmpty()) {
             return;
         }

@@ -27,6 +27,8 @@ final class SurveyNotes {
                 Method
                 - Each draw takes [X/H] ~ Normal(value, error) for every measured element (independent errors,
                   or a common correlation err_corr where the catalogue gives one) and runs the planet estimate.
+                  Draws come in antithetic pairs (the second of a pair mirrors the first about the catalogue
+                  values), which keeps every draw Normal and makes medians converge faster.
                 - median, p16, p84: 50th, 16th and 84th percentiles of the draws, by linear interpolation of
                   order statistics (Hyndman & Fan 1996, definition 7); nominal: the estimate at the catalogue
                   values. Zone 'host' holds the star's own molar ratios.
