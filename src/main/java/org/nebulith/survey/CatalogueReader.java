@@ -130,6 +130,7 @@ public final class CatalogueReader implements Closeable {
                     "[Fe/H] with its error for every star"));
         }
         double correlation = readCorrelation(cells, star, problems);
+        problems.sort(java.util.Comparator.comparingInt(p -> columnIndex(p.column())));
         if (!problems.isEmpty()) {
             return new Parsed(line, star, null, problems);
         }
@@ -186,6 +187,15 @@ public final class CatalogueReader implements Closeable {
             return null;
         }
         return v;
+    }
+
+    private int columnIndex(String column) {
+        for (int i = 0; i < columns.names.size(); i++) {
+            if (columns.names.get(i).trim().equalsIgnoreCase(column)) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     private static String optional(List<String> cells, int index) {
