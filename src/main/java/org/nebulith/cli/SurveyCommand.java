@@ -33,7 +33,7 @@ import picocli.CommandLine.Spec;
             "Catalogue CSV: star, X_H and X_H_err ([X/H] and 1-sigma error in dex) for any",
             "elements X (Fe_H required; elements a star lacks follow its [Fe/H]); optional",
             "disk, zones (the star's own) and err_corr (common error correlation, 0..1).",
-            "Writes survey.csv, survey-stars.csv (per star) and survey-notes.txt.",
+            "Writes survey.csv, survey-stars.csv (per star), survey-notes.txt and survey-chart.png/.svg.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
@@ -137,7 +137,7 @@ public class SurveyCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
                 + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
                 seconds, workers));
-        context.info("wrote " + r.survey() + " with survey-stars.csv and survey-notes.txt");
+        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt and survey-chart.png/.svg");
         return ExitCodes.OK;
     }
 

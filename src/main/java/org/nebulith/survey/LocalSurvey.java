@@ -28,8 +28,8 @@ import org.nebulith.report.RunInputs;
  * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into the hidden {@code .survey.csv.partial}
  *     (flushed after every star) and renamed at the end; an interrupted or failed run leaves the
  *     partial file for {@code --resume} and nothing under the final name;</li>
- * <li>{@code survey-stars.csv} ({@link StarsTable}) and {@code survey-notes.txt} (settings, counts,
- *     cautions), written at the end.</li>
+ * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
+ *     cautions) and {@code survey-chart.png/.svg} ({@link SurveyChart}), written at the end.</li>
  * </ul>
  * The files do not depend on the thread count.
  */
@@ -146,6 +146,7 @@ public final class LocalSurvey {
         AtomicOutput.writeText(folder.resolve(NOTES), SurveyNotes.text(request, counter.stars, skipped, counter.failed),
                 true, inputs);
         Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        SurveyChart.write(partial, folder, inputs);
         Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, survey);
     }

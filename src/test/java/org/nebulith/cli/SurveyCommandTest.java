@@ -58,6 +58,7 @@ class SurveyCommandTest {
         assertTrue(lines.get(1).startsWith("NDC Alder,host,Mg_Si_molar,"), lines.get(1));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("NDC Tamarack,cold,Fe_Si_molar,")));
         assertTrue(Files.exists(outDir.resolve("survey-stars.csv")) && Files.exists(outDir.resolve("survey-notes.txt")));
+        assertTrue(Files.size(outDir.resolve("survey-chart.png")) > 1000 && Files.exists(outDir.resolve("survey-chart.svg")));
         assertTrue(err().contains("survey: 20 stars"), err());
     }
 
