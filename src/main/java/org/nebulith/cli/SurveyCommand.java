@@ -89,8 +89,11 @@ public class SurveyCommand extends RunCommand {
      * @return a pure, thread-safe estimator
      */
     public static PlanetEstimator estimator(final SurveySettings settings) {
-        // To be wired by the lead: the planet estimate of the planet command (composition + disk + zones).
-        throw new InputException(Messages.NOT_YET_AVAILABLE, null, "survey");
+        try {
+            return org.nebulith.survey.PlanetSurveyEstimator.create(settings);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     /**

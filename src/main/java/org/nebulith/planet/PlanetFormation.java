@@ -72,6 +72,16 @@ public final class PlanetFormation {
      * @return a fresh local-condensation evaluator for one gram of this gas
      */
     public LocalCondensation localCondensation(ElementAbundances gas) {
+        return localCondensation(gas, java.util.Collections.emptyNavigableMap());
+    }
+
+    /**
+     * @param gas       the gas composition
+     * @param reference warm-start states of another composition with the same elements
+     * @return a fresh local-condensation evaluator for one gram of this gas
+     */
+    public LocalCondensation localCondensation(ElementAbundances gas,
+                                               java.util.NavigableMap<Double, LocalCondensation.Local> reference) {
         Set<Element> els = EnumSet.noneOf(Element.class);
         for (Element e : gas.elements()) {
             if (gas.moles(e) > 0) {
@@ -84,7 +94,10 @@ public final class PlanetFormation {
         for (int j = 0; j < b.length; j++) {
             b[j] = gas.moles(sys.elements().get(j)) / mass;
         }
-        return new LocalCondensation(sys, b, solver, settings.floorK());
+        if (!reference.isEmpty() && reference.firstEntry().getValue().result().system() != sys) {
+            throw new IllegalArgumentException("warm-start reference belongs to another chemical system");
+        }
+        return new LocalCondensation(sys, b, solver, settings.floorK(), reference);
     }
 
     /** @param inv a zone inventory @return its condensed phases for the planet model (solution members as "phase:member") */

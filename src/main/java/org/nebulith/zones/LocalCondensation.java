@@ -1,6 +1,7 @@
 package org.nebulith.zones;
 
 import java.util.Map;
+import java.util.NavigableMap;
 import java.util.TreeMap;
 
 import org.nebulith.disk.DiskState;
@@ -26,6 +27,7 @@ public final class LocalCondensation {
     private final double floorK;
     private final int waterIndex;
     private final TreeMap<Double, Local> cache = new TreeMap<>();
+    private final NavigableMap<Double, Local> reference;
     private int solved;
 
     /**
@@ -46,6 +48,21 @@ public final class LocalCondensation {
      * @param floorK        lowest equilibrium temperature [K]
      */
     public LocalCondensation(ChemicalSystem system, double[] totalsPerGram, EquilibriumSolver solver, double floorK) {
+        this(system, totalsPerGram, solver, floorK, java.util.Collections.emptyNavigableMap());
+    }
+
+    /**
+     * @param system        the chemical system
+     * @param totalsPerGram element totals of one gram of gas [mol/g], in the system's element order
+     * @param solver        the solver
+     * @param floorK        lowest equilibrium temperature [K]
+     * @param reference     states of another composition of the same system (see {@link #snapshot()}),
+     *                      used as warm starts until this instance has solved a radius of its own;
+     *                      results then do not depend on what was solved before on the same thread
+     */
+    public LocalCondensation(ChemicalSystem system, double[] totalsPerGram, EquilibriumSolver solver, double floorK,
+                             NavigableMap<Double, Local> reference) {
+        this.reference = reference;
         this.system = system;
         this.totalsPerGram = totalsPerGram.clone();
         this.solver = solver;
@@ -91,9 +108,15 @@ public final class LocalCondensation {
         return l;
     }
 
+    /** @return an unmodifiable copy of the states solved so far, by radius (a warm-start reference) */
+    public NavigableMap<Double, Local> snapshot() {
+        return java.util.Collections.unmodifiableNavigableMap(new TreeMap<>(cache));
+    }
+
     private Local nearest(double r) {
-        Map.Entry<Double, Local> lo = cache.floorEntry(r);
-        Map.Entry<Double, Local> hi = cache.ceilingEntry(r);
+        NavigableMap<Double, Local> from = cache.isEmpty() ? reference : cache;
+        Map.Entry<Double, Local> lo = from.floorEntry(r);
+        Map.Entry<Double, Local> hi = from.ceilingEntry(r);
         if (lo == null) {
             return hi == null ? null : hi.getValue();
         }
