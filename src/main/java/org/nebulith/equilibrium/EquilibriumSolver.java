@@ -19,6 +19,8 @@ import java.util.Set;
  */
 public final class EquilibriumSolver {
     private final SolverOptions options;
+    /** Largest continuation step of a cold start in 1/T [1/K] (15 K at 550 K). */
+    private static final double MAX_COLD_STEP = 5e-5;
 
     /** @param options solver settings */
     public EquilibriumSolver(SolverOptions options) {
@@ -64,7 +66,45 @@ public final class EquilibriumSolver {
         if (a.result != null) {
             return a.result;
         }
-        return coldSolve(problem);
+        EquilibriumResult walked = continueFrom(problem, start);
+        return walked != null ? walked : coldSolve(problem);
+    }
+
+    /**
+     * Continuation from the warm start's state to the target along a straight path in (1/T, ln P),
+     * with adaptive steps; null if it stalls.
+     */
+    private EquilibriumResult continueFrom(EquilibriumProblem problem, WarmStart start) {
+        double inv0 = 1.0 / start.fromTK;
+        double inv1 = 1.0 / problem.temperatureK();
+        double lp0 = Math.log(start.fromPBar);
+        double lp1 = Math.log(problem.pressureBar());
+        Iterate good = start.iterate.copy();
+        double s = 0;
+        double ds = 0.25;
+        int iterations = 0;
+        while (s < 1) {
+            double next = Math.min(1.0, s + ds);
+            EquilibriumProblem pr = next == 1.0 ? problem
+                    : problem.at(1.0 / (inv0 + next * (inv1 - inv0)), Math.exp(lp0 + next * (lp1 - lp0)));
+            StateData st = new StateData(pr);
+            Attempt a = attempt(pr, st, adapt(good.copy(), st));
+            iterations += a.iterations;
+            if (a.result == null) {
+                ds *= 0.5;
+                if (ds < 1e-4) {
+                    return null;
+                }
+                continue;
+            }
+            s = next;
+            good = a.iterate;
+            if (s == 1.0) {
+                return ResultBuilder.withIterations(a.result, iterations);
+            }
+            ds = Math.min(0.5, ds * 1.5);
+        }
+        return null;
     }
 
     private static final class Attempt {
@@ -146,7 +186,7 @@ public final class EquilibriumSolver {
         Iterate good = a.iterate;
         double invT = 1.0 / t0;
         double invTarget = 1.0 / target;
-        double h = 1.0e-4;
+        double h = 2.0e-5;
         EquilibriumResult last = a.result;
         while (invT < invTarget) {
             double next = Math.min(invTarget, invT + h);
@@ -170,7 +210,7 @@ public final class EquilibriumSolver {
             invT = next;
             good = s.iterate;
             last = s.result;
-            h = Math.min(h * 1.5, 4e-4);
+            h = Math.min(h * 1.5, MAX_COLD_STEP);
         }
         return ResultBuilder.markCold(last, totalIterations);
     }

@@ -29,9 +29,19 @@ final class PhaseSelection {
     /** @return null on success, else what failed */
     String run(Iterate it) {
         Set<Integer> blocked = new HashSet<>();
+        Set<String> visited = new HashSet<>();
         Iterate backup = null;
         int lastAdded = -1;
         while (changes <= opt.maxPhaseChanges()) {
+            if (!visited.add(key(it)) && lastAdded >= 0 && backup != null) {
+                // this addition leads back to an assemblage already tried: a cycle between nearly
+                // degenerate phases; keep the earlier assemblage and stop offering this phase
+                restore(backup, it);
+                blocked.add(lastAdded);
+                lastAdded = -1;
+                changes++;
+                continue;
+            }
             boolean ok = kernel.converge(it);
             int vanished = kernel.vanishing(it);
             if (vanished >= 0) {
@@ -83,6 +93,12 @@ final class PhaseSelection {
             changes++;
         }
         return "phase selection did not settle after " + opt.maxPhaseChanges() + " changes (phases " + names(it) + ")";
+    }
+
+    private static String key(Iterate it) {
+        int[] a = it.active.clone();
+        java.util.Arrays.sort(a);
+        return java.util.Arrays.toString(a);
     }
 
     private static void restore(Iterate from, Iterate to) {
