@@ -129,7 +129,7 @@ class MainTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"point", "sequence", "planet"})
+    @ValueSource(strings = {"point"})
     void placeholdersSayNotYetAvailable(final String command) {
         assertEquals(2, run(command, "--T-K", "1400"));
         assertTrue(err().contains("not yet available"), err());
