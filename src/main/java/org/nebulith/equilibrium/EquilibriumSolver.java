@@ -71,8 +71,8 @@ public final class EquilibriumSolver {
     }
 
     /**
-     * Continuation from the warm start's state to the target along a straight path in (1/T, ln P),
-     * with adaptive steps; null if it stalls.
+     * Continuation from the warm start's state to the target along a straight path in (1/T, ln P,
+     * ln b), with adaptive steps; null if it stalls.
      */
     private EquilibriumResult continueFrom(EquilibriumProblem problem, WarmStart start) {
         double inv0 = 1.0 / start.fromTK;
@@ -85,8 +85,9 @@ public final class EquilibriumSolver {
         int iterations = 0;
         while (s < 1) {
             double next = Math.min(1.0, s + ds);
-            EquilibriumProblem pr = next == 1.0 ? problem
-                    : problem.at(1.0 / (inv0 + next * (inv1 - inv0)), Math.exp(lp0 + next * (lp1 - lp0)));
+            EquilibriumProblem pr = next == 1.0 ? problem : new EquilibriumProblem(problem.system(),
+                    1.0 / (inv0 + next * (inv1 - inv0)), Math.exp(lp0 + next * (lp1 - lp0)),
+                    between(start.fromTotals, problem, next));
             StateData st = new StateData(pr);
             Attempt a = attempt(pr, st, adapt(good.copy(), st));
             iterations += a.iterations;
@@ -213,6 +214,14 @@ public final class EquilibriumSolver {
             h = Math.min(h * 1.5, MAX_COLD_STEP);
         }
         return ResultBuilder.markCold(last, totalIterations);
+    }
+
+    private static double[] between(double[] from, EquilibriumProblem to, double s) {
+        double[] b = new double[from.length];
+        for (int j = 0; j < b.length; j++) {
+            b[j] = Math.exp((1 - s) * Math.log(from[j]) + s * Math.log(to.total(j)));
+        }
+        return b;
     }
 
     static ConvergenceException failure(EquilibriumProblem problem, String what) {

@@ -15,6 +15,11 @@ final class PhaseSelection {
     private final SolverOptions opt;
     private final ChemicalSystem sys;
     int changes;
+    /**
+     * Newton iterations one attempt may spend; beyond it the solver switches to a continuation in
+     * small steps, which costs less than a long search from a distant start.
+     */
+    static final int ITERATION_BUDGET = 300;
     /** smallest affinity per atom of an absent available phase at the end of the last scan [RT] */
     double minAffinity;
     String minAffinityPhase = "";
@@ -33,6 +38,10 @@ final class PhaseSelection {
         Iterate backup = null;
         int lastAdded = -1;
         while (changes <= opt.maxPhaseChanges()) {
+            if (kernel.iterations > ITERATION_BUDGET) {
+                return "phase selection used more than " + ITERATION_BUDGET + " Newton iterations (phases "
+                        + names(it) + ")";
+            }
             if (!visited.add(key(it)) && lastAdded >= 0 && backup != null) {
                 // this addition leads back to an assemblage already tried: a cycle between nearly
                 // degenerate phases; keep the earlier assemblage and stop offering this phase

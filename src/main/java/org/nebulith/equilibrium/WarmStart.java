@@ -10,16 +10,18 @@ public final class WarmStart {
     final Iterate iterate;
     final double fromTK;
     final double fromPBar;
+    final double[] fromTotals;
 
-    private WarmStart(Iterate iterate, double fromTK, double fromPBar) {
+    private WarmStart(Iterate iterate, EquilibriumProblem from) {
         this.iterate = iterate;
-        this.fromTK = fromTK;
-        this.fromPBar = fromPBar;
+        this.fromTK = from.temperatureK();
+        this.fromPBar = from.pressureBar();
+        this.fromTotals = from.totals();
     }
 
     /** @param r an earlier result @return a start that reuses it as is */
     public static WarmStart of(EquilibriumResult r) {
-        return new WarmStart(r.iterate.copy(), r.problem().temperatureK(), r.problem().pressureBar());
+        return new WarmStart(r.iterate.copy(), r.problem());
     }
 
     /**
@@ -37,7 +39,27 @@ public final class WarmStart {
         if (t1 == t0) {
             return of(last);
         }
-        double w = (newTK - t1) / (t1 - t0);
+        return linear(last, previous, (newTK - t1) / (t1 - t0), newTK);
+    }
+
+    /**
+     * A start on the straight line through two earlier states of the same system, at parameter w:
+     * w = 0 gives {@code last}, w = -1 gives {@code previous}, w &gt; 0 extrapolates beyond
+     * {@code last}. Chemical potentials mu = lambda RT and amounts are interpolated; use it along any
+     * path (radius in a disk, composition) that moves T and P smoothly.
+     *
+     * @param last     one state
+     * @param previous another state of the same system
+     * @param w        the parameter
+     * @param newTK    temperature at the new state [K]
+     * @return the start
+     */
+    public static WarmStart linear(EquilibriumResult last, EquilibriumResult previous, double w, double newTK) {
+        if (previous == null || last.system() != previous.system()) {
+            return of(last);
+        }
+        double t1 = last.problem().temperatureK();
+        double t0 = previous.problem().temperatureK();
         Iterate a = last.iterate.copy();
         Iterate b = previous.iterate;
         for (int j = 0; j < a.lambda.length; j++) {
@@ -54,6 +76,6 @@ public final class WarmStart {
                 a.u[q] = logAmount || v > 0 ? v : a.u[q];
             }
         }
-        return new WarmStart(a, t1, last.problem().pressureBar());
+        return new WarmStart(a, last.problem());
     }
 }

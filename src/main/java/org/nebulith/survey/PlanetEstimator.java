@@ -25,6 +25,18 @@ public interface PlanetEstimator {
     LinkedHashMap<String, List<Quantity>> estimate(ElementAbundances gas);
 
     /**
+     * An estimator for compositions close to {@code nominal} (one star's draws): it may prepare
+     * warm starts from the nominal composition, so that each draw converges faster. Its results must
+     * remain a pure function of (nominal, draw composition).
+     *
+     * @param nominal the star's nominal composition
+     * @return an estimator for this star (this one by default)
+     */
+    default PlanetEstimator near(ElementAbundances nominal) {
+        return this;
+    }
+
+    /**
      * Optional counter hook for the benchmark.
      *
      * @return the number of equilibrium solutions computed by this estimator since it was made

@@ -51,18 +51,30 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     private final DiskModel disk;
     private final List<FeedingZone> zones;
     private final NavigableMap<Double, LocalCondensation.Local> reference;
-    private final AtomicLong equilibria = new AtomicLong();
+    private final AtomicLong equilibria;
 
     private PlanetSurveyEstimator(PlanetFormation formation, DiskModel disk, List<FeedingZone> zones,
-                                  ElementAbundances nominal) {
+                                  ElementAbundances nominal, NavigableMap<Double, LocalCondensation.Local> start,
+                                  AtomicLong equilibria) {
         this.formation = formation;
         this.disk = disk;
         this.zones = zones;
-        LocalCondensation ref = formation.localCondensation(nominal);
+        this.equilibria = equilibria;
+        LocalCondensation ref = formation.localCondensation(nominal, start);
         for (FeedingZone z : zones) {
             formation.zonePlanet(z, disk, ref);
         }
+        equilibria.addAndGet(ref.equilibriaSolved());
         this.reference = ref.snapshot();
+    }
+
+    /**
+     * The estimator for one star: reference states of the star's nominal composition (reached by
+     * warm starts from the solar references), from which its draws start.
+     */
+    @Override
+    public PlanetEstimator near(ElementAbundances nominal) {
+        return new PlanetSurveyEstimator(formation, disk, zones, nominal, reference, equilibria);
     }
 
     /**
@@ -75,7 +87,8 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         List<FeedingZone> z = readZones(settings.zones(), d);
         PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
                 new EquilibriumSolver());
-        return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances());
+        return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
+                java.util.Collections.emptyNavigableMap(), new AtomicLong());
     }
 
     private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {

@@ -63,12 +63,14 @@ public final class StarJob {
      * @return the star's rows: host ratios, then every zone's quantities
      * @throws StarJobException if an estimate fails or its layout changes between draws
      */
-    public static List<SurveyRow> run(StarRow row, SurveySettings settings, PlanetEstimator estimator) {
+    public static List<SurveyRow> run(StarRow row, SurveySettings settings, PlanetEstimator general) {
         ElementAbundances solar = SOLAR.get(settings.solar());
         Map<Element, Double> nominalDex = new EnumMap<>(Element.class);
         row.abundances().forEach((el, m) -> nominalDex.put(el, m.dex()));
         List<Key> keys = new ArrayList<>();
-        double[] nominal = evaluate(row, StarJobException.NOMINAL, compose(solar, nominalDex), estimator, keys);
+        ElementAbundances nominalGas = compose(solar, nominalDex);
+        PlanetEstimator estimator = near(row, general, nominalGas);
+        double[] nominal = evaluate(row, StarJobException.NOMINAL, nominalGas, estimator, keys);
         int n = settings.draws();
         double[][] values = new double[nominal.length][n];
         double rho = row.errorCorrelation();
@@ -112,6 +114,14 @@ public final class StarJob {
 
     private static ElementAbundances compose(ElementAbundances solar, Map<Element, Double> dex) {
         return StellarAbundances.apply(solar, dex).abundances();
+    }
+
+    private static PlanetEstimator near(StarRow row, PlanetEstimator general, ElementAbundances nominal) {
+        try {
+            return general.near(nominal);
+        } catch (RuntimeException e) {
+            throw new StarJobException(row.star(), row.line(), StarJobException.NOMINAL, e);
+        }
     }
 
     /** Runs one estimate; fills keys on the first call and checks them on later ones. */

@@ -96,8 +96,7 @@ public final class LocalCondensation {
         }
         double tEq = Math.max(s.temperatureK(), floorK);
         EquilibriumProblem pr = new EquilibriumProblem(system, tEq, s.pressureBar(), totalsPerGram);
-        Local near = nearest(s.rAU());
-        EquilibriumResult r = near == null ? solver.solve(pr) : solver.solve(pr, WarmStart.of(near.result()));
+        EquilibriumResult r = solver.solve(pr, warmStart(s.rAU(), tEq));
         solved++;
         double ice = 0;
         if (s.temperatureK() < floorK && waterIndex >= 0) {
@@ -111,6 +110,32 @@ public final class LocalCondensation {
     /** @return an unmodifiable copy of the states solved so far, by radius (a warm-start reference) */
     public NavigableMap<Double, Local> snapshot() {
         return java.util.Collections.unmodifiableNavigableMap(new TreeMap<>(cache));
+    }
+
+    /**
+     * Interpolates between the cached radii on either side, or extrapolates from the two nearest on
+     * one side; falls back to the nearest state (own or reference); null (cold start) if none.
+     */
+    private WarmStart warmStart(double r, double tEq) {
+        if (cache.size() >= 2) {
+            Map.Entry<Double, Local> lo = cache.lowerEntry(r);
+            Map.Entry<Double, Local> hi = cache.higherEntry(r);
+            Map.Entry<Double, Local> a;
+            Map.Entry<Double, Local> b;
+            if (lo != null && hi != null) {
+                a = r - lo.getKey() <= hi.getKey() - r ? lo : hi;
+                b = a == lo ? hi : lo;
+            } else {
+                a = lo != null ? lo : hi;
+                b = lo != null ? cache.lowerEntry(lo.getKey()) : cache.higherEntry(hi.getKey());
+            }
+            if (b != null) {
+                double w = (r - a.getKey()) / (a.getKey() - b.getKey());
+                return WarmStart.linear(a.getValue().result(), b.getValue().result(), w, tEq);
+            }
+        }
+        Local near = nearest(r);
+        return near == null ? null : WarmStart.of(near.result());
     }
 
     private Local nearest(double r) {

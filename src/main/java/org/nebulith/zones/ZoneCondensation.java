@@ -16,6 +16,7 @@ public final class ZoneCondensation {
     private final RadialIntegrator integrator;
     private final int frontSamples;
     private final double frontTolRel;
+    private final int fixedPanels;
 
     /**
      * @param integrator   the radial integrator
@@ -23,9 +24,23 @@ public final class ZoneCondensation {
      * @param frontTolRel  width to which fronts are bisected, relative to the zone's full width
      */
     public ZoneCondensation(RadialIntegrator integrator, int frontSamples, double frontTolRel) {
+        this(integrator, frontSamples, frontTolRel, 0);
+    }
+
+    private ZoneCondensation(RadialIntegrator integrator, int frontSamples, double frontTolRel, int fixedPanels) {
         this.integrator = integrator;
         this.frontSamples = frontSamples;
         this.frontTolRel = frontTolRel;
+        this.fixedPanels = fixedPanels;
+    }
+
+    /**
+     * @param panels number of equal panels
+     * @param points Gauss-Legendre points per panel
+     * @return a fixed composite rule without front search ({@link RadialIntegrator#integrateFixed})
+     */
+    public static ZoneCondensation fixed(int panels, int points) {
+        return new ZoneCondensation(new RadialIntegrator(1e-3, points, 1, 1_000_000), 2, 1e-3, panels);
     }
 
     /** @return settings for reports: 1e-7 relative, 8-point panels, 48 front samples */
@@ -33,9 +48,15 @@ public final class ZoneCondensation {
         return new ZoneCondensation(new RadialIntegrator(1e-7, 8, 2, 200_000), 48, 1e-7);
     }
 
-    /** @return faster settings for Monte Carlo surveys: 1e-5 relative, 4-point panels, 12 samples */
+    /**
+     * @return the settings for Monte Carlo surveys: 4 panels of 3 Gauss-Legendre points, no front
+     *         search. On the default survey zone the core mass fraction and mantle Mg# differ from
+     *         the adaptive integration by under 1e-4 relative and Mg/Si, Fe/Si by under 1e-7 (measured),
+     *         far below the spread from the abundance errors; zones that straddle major condensation
+     *         fronts do worse (a kink inside a panel gives a second-order error).
+     */
     public static ZoneCondensation fast() {
-        return new ZoneCondensation(new RadialIntegrator(1e-5, 4, 1, 200_000), 12, 1e-5);
+        return fixed(4, 3);
     }
 
     /**
@@ -49,7 +70,7 @@ public final class ZoneCondensation {
         double hi = zone.rOuterAU();
         disk.checkRange(lo);
         disk.checkRange(hi);
-        List<Double> fronts = FrontFinder.find(lo, hi, frontSamples,
+        List<Double> fronts = fixedPanels > 0 ? List.of() : FrontFinder.find(lo, hi, frontSamples,
                 r -> LocalCondensation.signature(local.at(disk.stateAt(r))), frontTolRel * (hi - lo));
         ChemicalSystem sys = local.system();
         int[][] index = new int[sys.phaseCount()][];
@@ -80,7 +101,8 @@ public final class ZoneCondensation {
                 out[iceIndex] = l.iceMoles();
             }
         };
-        ZoneIntegral zi = integrator.integrate(zone, disk, f, fronts);
+        ZoneIntegral zi = fixedPanels > 0 ? integrator.integrateFixed(zone, disk, f, fixedPanels)
+                : integrator.integrate(zone, disk, f, fronts);
         double[][] moles = new double[sys.phaseCount()][];
         moles[0] = new double[sys.memberNames(0).size()];
         for (int p = 1; p < sys.phaseCount(); p++) {
