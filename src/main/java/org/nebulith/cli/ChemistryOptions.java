@@ -36,9 +36,20 @@ public final class ChemistryOptions {
 
     @Option(names = "--composition", paramLabel = "NAME|FILE",
             description = "Gas composition: a preset (protosolar-lodders2003, photosphere-asplund2009, "
-                    + "ci-chondrite) or an abundance file. Default: ${DEFAULT-VALUE}.",
-            defaultValue = AbundancePresets.PROTOSOLAR_LODDERS2003)
+                    + "ci-chondrite, star-tessaly) or an abundance file. Default: protosolar-lodders2003 "
+                    + "(planet: the invented demo star star-tessaly).")
     private String composition;
+
+    private String defaultComposition = AbundancePresets.PROTOSOLAR_LODDERS2003;
+
+    /** @param preset the composition used when neither --composition nor --elements is given */
+    public void defaultComposition(String preset) {
+        this.defaultComposition = preset;
+    }
+
+    private String compositionArg() {
+        return composition != null ? composition : defaultComposition;
+    }
 
     @Option(names = "--elements", paramLabel = "X=n,...",
             description = "Inline composition in moles, e.g. H=1,He=0.085,O=4.9e-4 (replaces --composition).")
@@ -107,20 +118,21 @@ public final class ChemistryOptions {
             if (elements != null) {
                 return AbundancePresets.resolve(elements);
             }
-            Path p = Path.of(composition);
-            if (!AbundancePresets.NAMES.contains(composition) && Files.exists(p)) {
+            String arg = compositionArg();
+            Path p = Path.of(arg);
+            if (!AbundancePresets.NAMES.contains(arg) && Files.exists(p)) {
                 context.input(p, "composition");
             }
-            return AbundancePresets.resolve(composition);
+            return AbundancePresets.resolve(arg);
         } catch (IOException e) {
-            throw InputException.atOption("--composition", composition, "cannot be read (" + e.getMessage() + ")",
+            throw InputException.atOption("--composition", compositionArg(), "cannot be read (" + e.getMessage() + ")",
                     "a preset name, a readable abundance file, or Element=amount pairs");
         }
     }
 
     /** @return a one-line description of the composition options, for reports */
     public String describeComposition() {
-        StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : composition);
+        StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : compositionArg());
         if (dustEnrichment != 1) {
             sb.append("; dust enrichment ").append(dustEnrichment);
         }

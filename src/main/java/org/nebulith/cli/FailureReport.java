@@ -60,6 +60,11 @@ final class FailureReport {
             return new Outcome(ExitCodes.BAD_INPUT, failure.getMessage());
         }
         for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof org.nebulith.equilibrium.ConvergenceException) {
+                return new Outcome(ExitCodes.NUMERICAL, t.getMessage());
+            }
+        }
+        for (Throwable t = failure; t != null; t = t.getCause()) {
             if (isNamedInputError(t.getClass()) || t instanceof IllegalArgumentException) {
                 return new Outcome(ExitCodes.BAD_INPUT, t.getMessage());
             }

@@ -26,6 +26,7 @@ import picocli.CommandLine.Spec;
             SequenceCommand.class,
             PlanetCommand.class,
             SurveyCommand.class,
+            SurveyBenchCommand.class,
             PresetsCommand.class,
             CompletionCommand.class,
             CommandLine.HelpCommand.class,

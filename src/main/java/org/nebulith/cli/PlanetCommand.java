@@ -1,42 +1,188 @@
 package org.nebulith.cli;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
+import org.nebulith.composition.AbundancePresets;
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.disk.DiskPresets;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.errors.Messages;
+import org.nebulith.planet.CoreOptions;
+import org.nebulith.planet.FormationSettings;
+import org.nebulith.planet.PlanetFormation;
+import org.nebulith.planet.ZonePlanet;
+import org.nebulith.progress.Progress;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.html.Report;
+import org.nebulith.report.planet.PlanetReportWriter;
+import org.nebulith.thermo.SpeciesDatabase;
+import org.nebulith.zones.FeedingZone;
+import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.RadialScan;
+import org.nebulith.zones.ZoneCondensation;
+import org.nebulith.zones.ZoneFileReader;
 
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Unmatched;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
 
-// placeholder: wired by the engine work
 /**
- * PLACEHOLDER registration of {@code nebulith planet}: help text and examples only. It accepts any
- * arguments and fails with "not yet available" (exit code 2). The engine work replaces this class
- * with the real command (same name, extending {@link RunCommand}).
+ * {@code nebulith planet}: bulk composition of the rocky planets of one or more feeding zones in a
+ * disk, with their core-mantle split and a comparison with the host star and reference bodies.
  */
 @Command(name = "planet",
         description = {
-            "Bulk composition of a rocky planet formed from its feeding zone in a disk.",
-            "Integrates what condenses across the zone; core/mantle split; key ratios beside",
+            "Bulk composition of rocky planets formed from their feeding zones in a disk.",
+            "Integrates what condenses across each zone; core/mantle split; key ratios beside",
             "the host star, bulk Earth and CI chondrite. Without arguments it runs the",
-            "built-in demo scenario (an invented star, disk and planet).",
+            "built-in demo scenario (the invented star Tessaly, its disk and three planets).",
         },
         footerHeading = "%nExamples:%n",
         footer = {
-            "  nebulith planet                  demo scenario, report in reports/",
-            "  nebulith planet --composition protosolar-lodders2003 --disk NAME \\",
-            "      --zones feeding-zones/FILE.csv",
-            "  nebulith planet --preset NAME --out reports/my-planet --force",
+            "  nebulith planet                  demo scenario, report in reports/planet-<time>/",
+            "  nebulith planet --composition protosolar-lodders2003 --disk mmsn-hayashi1981 \\",
+            "      --zones feeding-zones/demo-system.csv --out reports/mmsn-demo",
+            "  nebulith planet --sulfide-in-mantle --core-Si-wt-pct 5 --variant B88",
         })
 public final class PlanetCommand extends RunCommand {
+    /** The demo zones, shipped on the classpath. */
+    static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
 
-    // placeholder: wired by the engine work (swallows the future options so that examples reach execute)
-    @Unmatched
-    private List<String> notYetParsed;
+    @Mixin
+    private ChemistryOptions chemistry;
+
+    @Option(names = "--disk", paramLabel = "NAME|FILE", defaultValue = DiskPresets.STEADY_VISCOUS_DEFAULT,
+            description = "Disk model: a preset (mmsn-hayashi1981, hot-early-disk, steady-viscous-default) or a "
+                    + "disk file (parameter,value or r_AU,T_K,P_bar,sigma_gas_g_cm2). Default: ${DEFAULT-VALUE}.")
+    private String disk;
+
+    @Option(names = "--zones", paramLabel = "FILE",
+            description = "Feeding zones (zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]). "
+                    + "Default: the demo system " + DEMO_ZONES + ".")
+    private Path zones;
+
+    @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
+    private boolean sulfideInMantle;
+
+    @Option(names = "--core-Si-wt-pct", paramLabel = "X", defaultValue = "0",
+            description = "Si in the core [wt% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
+    private double coreSi;
+
+    @Option(names = "--core-O-wt-pct", paramLabel = "X", defaultValue = "0",
+            description = "O in the core [wt% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
+    private double coreO;
+
+    @Option(names = "--floor-K", paramLabel = "T", defaultValue = "300",
+            description = "Lowest equilibrium temperature [K]; colder gas keeps its rock and adds water ice. "
+                    + "Default: ${DEFAULT-VALUE}.")
+    private double floorK;
+
+    @Option(names = "--profile-points", paramLabel = "N", defaultValue = "160",
+            description = "Radii of the radial profile. Default: ${DEFAULT-VALUE}.")
+    private int profilePoints;
 
     @Override
-    protected int execute(final RunContext context) {
-        // placeholder: wired by the engine work
-        throw new InputException(Messages.NOT_YET_AVAILABLE, null, "planet");
+    protected int execute(final RunContext context) throws IOException {
+        chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        ElementAbundances gas = chemistry.composition(context);
+        SystemSpec spec = chemistry.systemSpec(context);
+        DiskModel diskModel = readDisk(context);
+        List<FeedingZone> zoneList = readZones(context, diskModel);
+        if (profilePoints < 2) {
+            throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
+        }
+        FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
+                new CoreOptions(!sulfideInMantle, coreSi, coreO));
+        PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
+        List<ZonePlanet> planets = new ArrayList<>();
+        LocalCondensation local = formation.localCondensation(gas);
+        try (Progress progress = context.progress("zones", zoneList.size() + 1)) {
+            for (FeedingZone z : zoneList) {
+                planets.add(formation.zonePlanet(z, diskModel, local));
+                progress.step();
+            }
+            List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
+                    scanMax(diskModel, zoneList), profilePoints);
+            progress.step();
+            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+        }
+    }
+
+    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
+                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
+                .format(context.started());
+        try (RunFolder run = context.openRunFolder(runName)) {
+            List<Report.Setting> settings = new ArrayList<>();
+            context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
+            List<Report.Citation> sources = new ArrayList<>();
+            for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
+                sources.add(new Report.Citation(e.getKey(), e.getValue()));
+            }
+            PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
+                    "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
+                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
+            PlanetReportWriter.write(run, data);
+            Path done = run.commit();
+            for (ZonePlanet zp : planets) {
+                context.out().println(PlanetReportWriter.summary(zp));
+            }
+            context.out().println("report: " + done.resolve("report.html"));
+            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+        }
+        return ExitCodes.OK;
+    }
+
+    private DiskModel readDisk(RunContext context) throws IOException {
+        Path p = Path.of(disk);
+        if (!DiskPresets.NAMES.contains(disk) && Files.exists(p)) {
+            context.input(p, "disk");
+        }
+        return DiskPresets.resolve(disk);
+    }
+
+    private List<FeedingZone> readZones(RunContext context, DiskModel diskModel) throws IOException {
+        if (zones != null) {
+            Path f = context.input(zones, "feeding zones");
+            try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
+                return ZoneFileReader.read(r, zones.toString(), diskModel);
+            }
+        }
+        InputStream in = PlanetCommand.class.getResourceAsStream("/" + DEMO_ZONES);
+        if (in == null) {
+            throw new IllegalStateException("demo zones missing from the classpath: " + DEMO_ZONES);
+        }
+        try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
+            return ZoneFileReader.read(r, DEMO_ZONES, diskModel);
+        }
+    }
+
+    private static double scanMin(DiskModel d, List<FeedingZone> zs) {
+        double lo = Double.POSITIVE_INFINITY;
+        for (FeedingZone z : zs) {
+            lo = Math.min(lo, z.rInnerAU());
+        }
+        return Math.max(d.rMinAU(), lo / 2);
+    }
+
+    private static double scanMax(DiskModel d, List<FeedingZone> zs) {
+        double hi = 0;
+        for (FeedingZone z : zs) {
+            hi = Math.max(hi, z.rOuterAU());
+        }
+        return Math.min(d.rMaxAU(), hi * 2);
     }
 }

@@ -1,39 +1,161 @@
 package org.nebulith.cli;
 
-import java.util.List;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
 
+import org.nebulith.composition.SolarReference;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
+import org.nebulith.survey.EstimatorCache;
+import org.nebulith.survey.LocalSurvey;
+import org.nebulith.survey.PlanetEstimator;
+import org.nebulith.survey.SurveyRunner;
+import org.nebulith.survey.SurveySettings;
 
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Unmatched;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
-// placeholder: wired by the engine work
 /**
- * PLACEHOLDER registration of {@code nebulith survey}: help text and examples only. It accepts any
- * arguments and fails with "not yet available" (exit code 2). The engine work replaces this class
- * with the real command (same name, extending {@link RunCommand}).
+ * {@code nebulith survey}: predicted rocky planets for a catalogue of host stars, with Monte Carlo
+ * uncertainties (see {@link LocalSurvey}).
+ *
+ * <p>The science of each draw comes from {@link #estimator(SurveySettings)}: the one seam where the
+ * planet estimate is plugged in.
  */
 @Command(name = "survey",
         description = {
             "Host-star survey: predicted rocky planets for a catalogue of stars.",
             "Monte Carlo over the abundance errors: median, 16th and 84th percentiles of",
             "every quantity; parallel, and reproducible for a given seed.",
+            "Catalogue CSV: star, X_H and X_H_err ([X/H] and 1-sigma error in dex) for any",
+            "elements X (Fe_H required; elements a star lacks follow its [Fe/H]); optional",
+            "disk, zones (the star's own) and err_corr (common error correlation, 0..1).",
+            "Writes survey.csv, survey-stars.csv (per star), survey-notes.txt and survey-chart.png/.svg.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
-            "  nebulith survey --catalogue CATALOGUE.csv --draws 1000 --seed 7",
+            "  nebulith survey --catalogue presets/demo-catalogue.csv --draws 1000 --seed 7",
             "  nebulith survey --catalogue CATALOGUE.csv --threads 2 --out reports/survey-demo",
+            "  nebulith survey --catalogue CATALOGUE.csv --out reports/survey-demo --resume",
         })
-public final class SurveyCommand extends RunCommand {
+public class SurveyCommand extends RunCommand {
 
-    // placeholder: wired by the engine work (swallows the future options so that examples reach execute)
-    @Unmatched
-    private List<String> notYetParsed;
+    @Option(names = "--catalogue", required = true, paramLabel = "FILE",
+            description = "Star catalogue (CSV; see above).")
+    private Path catalogue;
+
+    @Option(names = "--draws", paramLabel = "N", defaultValue = "1000",
+            description = "Monte Carlo draws per star (default: ${DEFAULT-VALUE}).")
+    private int draws;
+
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
+            description = "Seed of the draws (default: ${DEFAULT-VALUE}); same seed, same results.")
+    private long seed;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Worker threads (default: all processors); results do not depend on it.")
+    private Integer threads;
+
+    @Option(names = "--disk", paramLabel = "NAME|FILE", description = "Disk preset or file (default: the planet estimate's).")
+    private String disk;
+
+    @Option(names = "--zones", paramLabel = "FILE", description = "Feeding-zone file (default: the planet estimate's zone).")
+    private String zones;
+
+    @Option(names = "--solar-reference", paramLabel = "REF", defaultValue = "asplund2009",
+            description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
+    private String solarReference;
+
+    @Option(names = "--skip-bad", description = "Skip bad catalogue rows and failing stars (listed) instead of stopping.")
+    private boolean skipBad;
+
+    @Option(names = "--resume", description = "Continue an earlier or interrupted run in the output folder.")
+    private boolean resume;
+
+    @Spec
+    private CommandSpec spec;
+
+    /**
+     * THE SEAM: builds the planet estimate that every draw runs.
+     *
+     * @param settings the effective settings of a star: {@link SurveySettings#disk()} (preset name or
+     *                 file, null for the default disk), {@link SurveySettings#zones()} (feeding-zone file,
+     *                 null for the default zone) and the solar reference; called once per distinct
+     *                 disk/zones, before anything is computed (an {@link InputException} for a bad disk
+     *                 or zone file is reported against the catalogue row that names it)
+     * @return a pure, thread-safe estimator
+     */
+    public static PlanetEstimator estimator(final SurveySettings settings) {
+        try {
+            return org.nebulith.survey.PlanetSurveyEstimator.create(settings);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /**
+     * @param settings effective settings
+     * @return the estimator (tests override this to run the command with a stand-in)
+     */
+    protected PlanetEstimator estimatorFor(final SurveySettings settings) {
+        return estimator(settings);
+    }
 
     @Override
-    protected int execute(final RunContext context) {
-        // placeholder: wired by the engine work
-        throw new InputException(Messages.NOT_YET_AVAILABLE, null, "survey");
+    protected int execute(final RunContext context) throws Exception {
+        if (draws < 1) {
+            throw InputException.atOption("--draws", draws, "must be at least 1", "an integer >= 1");
+        }
+        int workers = threads == null ? SurveyRunner.defaultThreads() : threads;
+        if (workers < 1) {
+            throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
+        }
+        context.input(catalogue, "catalogue");
+        registerIfFile(context, disk, "disk");
+        registerIfFile(context, zones, "feeding zones");
+        SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones);
+        String base = catalogue.getFileName().toString().replaceFirst("\\.csv$", "");
+        Path folder = context.outputFolder("survey-" + (base.matches("[A-Za-z0-9._-]+") ? base : "catalogue"));
+        LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,
+                skipBad, resume, context.force());
+        NebulithCommand root = (NebulithCommand) spec.root().userObject();
+        LocalSurvey.Log log = new LocalSurvey.Log() {
+            @Override
+            public void info(final String line) {
+                context.info(line);
+            }
+
+            @Override
+            public void warn(final String line) {
+                root.err().println(line);
+            }
+        };
+        long start = System.nanoTime();
+        LocalSurvey.Result r = LocalSurvey.run(request, new EstimatorCache(this::estimatorFor), context.inputs(),
+                total -> context.progress("survey", total), log);
+        double seconds = (System.nanoTime() - start) / 1e9;
+        context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
+                + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
+                seconds, workers));
+        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt and survey-chart.png/.svg");
+        return ExitCodes.OK;
+    }
+
+    private SolarReference solar() {
+        switch (solarReference.toLowerCase(Locale.ROOT)) {
+            case "asplund2009": return SolarReference.ASPLUND2009;
+            case "lodders2003": return SolarReference.LODDERS2003;
+            default: throw InputException.atOption("--solar-reference", solarReference, "unknown solar reference",
+                    "asplund2009, lodders2003");
+        }
+    }
+
+    private static void registerIfFile(final RunContext context, final String value, final String role) {
+        if (value != null && Files.isRegularFile(Path.of(value))) {
+            context.input(Path.of(value), role);
+        }
     }
 }

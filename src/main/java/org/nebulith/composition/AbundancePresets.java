@@ -24,7 +24,11 @@ public final class AbundancePresets {
     /** CI chondrite (Lodders, Palme &amp; Gail 2009 via Asplund et al. 2009 Table 1), for dust. */
     public static final String CI_CHONDRITE = "ci-chondrite";
     /** All abundance presets. */
-    public static final List<String> NAMES = List.of(PROTOSOLAR_LODDERS2003, PHOTOSPHERE_ASPLUND2009, CI_CHONDRITE);
+    /** The invented host star of the demo scenario (not a real star). */
+    public static final String DEMO_STAR = "star-tessaly";
+    /** The preset names. */
+    public static final List<String> NAMES = List.of(PROTOSOLAR_LODDERS2003, PHOTOSPHERE_ASPLUND2009, CI_CHONDRITE,
+            DEMO_STAR);
 
     private AbundancePresets() {
     }

@@ -17,10 +17,11 @@ public final class CondensationSequence {
     private final List<ElementCondensation> temperatures;
     private final double[][] finalIsolated;
     private final double[] finalReactingTotals;
+    private final double[] floorAdded;
 
     CondensationSequence(ChemicalSystem system, double[] inputTotals, SequenceSettings settings,
                          List<SequenceStep> steps, List<PhaseEvent> events, List<ElementCondensation> temperatures,
-                         double[][] finalIsolated, double[] finalReactingTotals) {
+                         double[][] finalIsolated, double[] finalReactingTotals, double[] floorAdded) {
         this.system = system;
         this.inputTotals = inputTotals.clone();
         this.settings = settings;
@@ -29,6 +30,15 @@ public final class CondensationSequence {
         this.temperatures = List.copyOf(temperatures);
         this.finalIsolated = finalIsolated;
         this.finalReactingTotals = finalReactingTotals.clone();
+        this.floorAdded = floorAdded.clone();
+    }
+
+    /**
+     * @return moles of each element added over the run to keep reacting totals at
+     *         {@link SequenceRunner#REACTING_FLOOR} of the input (isolation mode only; zero otherwise)
+     */
+    public double[] floorAddedMoles() {
+        return floorAdded.clone();
     }
 
     /** @return the chemical system */

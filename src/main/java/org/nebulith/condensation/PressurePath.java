@@ -62,6 +62,21 @@ public final class PressurePath {
         return Math.pow(10, logP[lo] + w * (logP[hi] - logP[lo]));
     }
 
+    /** @return lowest tabulated temperature [K] (0 for a constant pressure) */
+    public double tableMinK() {
+        return tK[0];
+    }
+
+    /** @return highest tabulated temperature [K] (0 for a constant pressure) */
+    public double tableMaxK() {
+        return tK[tK.length - 1];
+    }
+
+    /** @return number of tabulated points (1 for a constant pressure) */
+    public int points() {
+        return tK.length;
+    }
+
     /** @return true for a constant pressure */
     public boolean isConstant() {
         return tK.length == 1;

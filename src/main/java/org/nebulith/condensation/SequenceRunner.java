@@ -18,6 +18,9 @@ import org.nebulith.equilibrium.WarmStart;
  * ({@link SequenceRefiner}).
  */
 public final class SequenceRunner {
+    /** Smallest reacting total kept in isolation mode, relative to the element's input total. */
+    public static final double REACTING_FLOOR = 1e-20;
+
     private final EquilibriumSolver solver;
 
     /** @param solver the equilibrium solver */
@@ -36,14 +39,17 @@ public final class SequenceRunner {
         double[] b = totals.clone();
         double[][] kept = settings.isFractional() ? zeros(system) : null;
         double[][] isolated = settings.isFractional() ? zeros(system) : null;
+        double[] floorAdded = new double[totals.length];
+        Stoichiometry stoich = new Stoichiometry(system);
         EquilibriumResult last = null;
         EquilibriumResult prev = null;
         for (double t : grid(settings)) {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
             EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
-            steps.add(new SequenceStep(r, copy(isolated), totals));
+            steps.add(new SequenceStep(r, copy(isolated), totals, stoich));
             if (settings.isFractional()) {
-                b = isolate(r, settings.isolation(), kept, isolated, b);
+                b = isolate(r, stoich, settings.isolation(), kept, isolated);
+                floorReacting(b, totals, floorAdded);
             }
             prev = last;
             last = r;
@@ -51,7 +57,22 @@ public final class SequenceRunner {
         SequenceRefiner refiner = new SequenceRefiner(solver, settings);
         List<PhaseEvent> events = refiner.phaseEvents(steps);
         List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
-        return new CondensationSequence(system, totals, settings, steps, events, temps, isolated, b);
+        return new CondensationSequence(system, totals, settings, steps, events, temps, isolated, b, floorAdded);
+    }
+
+    /**
+     * Keeps every reacting total at least {@link #REACTING_FLOOR} of its input, so that the solver never
+     * sees totals spread over more orders of magnitude than double precision can balance; the moles
+     * added are recorded (at most steps x 1e-20 of the input, far below the 1e-10 balance target).
+     */
+    private static void floorReacting(double[] b, double[] totals, double[] added) {
+        for (int j = 0; j < b.length; j++) {
+            double floor = REACTING_FLOOR * totals[j];
+            if (b[j] < floor) {
+                added[j] += floor - b[j];
+                b[j] = floor;
+            }
+        }
     }
 
     /** @return the grid from T-max down to T-min, both included */
@@ -71,10 +92,11 @@ public final class SequenceRunner {
      * and the solids kept (not as a difference, which would cancel for elements that are almost
      * entirely condensed).
      */
-    private static double[] isolate(EquilibriumResult r, double phi, double[][] kept, double[][] isolated, double[] b) {
+    private static double[] isolate(EquilibriumResult r, Stoichiometry stoich, double phi, double[][] kept,
+                                    double[][] isolated) {
         ChemicalSystem sys = r.system();
-        double[] nb = new double[b.length];
-        addMembers(sys, 0, r, null, nb);
+        double[] nb = new double[sys.elementCount()];
+        addMembers(stoich, 0, r, null, nb);
         for (int p = 1; p < sys.phaseCount(); p++) {
             for (int k = 0; k < kept[p].length; k++) {
                 double n = r.memberMoles(p, k);
@@ -83,17 +105,17 @@ public final class SequenceRunner {
                 kept[p][k] = n - removed;
                 isolated[p][k] += removed;
             }
-            addMembers(sys, p, r, kept[p], nb);
+            addMembers(stoich, p, r, kept[p], nb);
         }
         return nb;
     }
 
-    private static void addMembers(ChemicalSystem sys, int p, EquilibriumResult r, double[] amounts, double[] nb) {
-        int nk = sys.memberNames(p).size();
+    private static void addMembers(Stoichiometry stoich, int p, EquilibriumResult r, double[] amounts, double[] nb) {
+        int nk = stoich.members(p);
         for (int k = 0; k < nk; k++) {
             double n = amounts == null ? r.memberMoles(p, k) : amounts[k];
             if (n > 0) {
-                double[] a = sys.memberStoichiometry(p, k);
+                double[] a = stoich.of(p, k);
                 for (int j = 0; j < nb.length; j++) {
                     nb[j] += n * a[j];
                 }

@@ -11,11 +11,18 @@ public final class SequenceStep {
     private final EquilibriumResult result;
     private final double[][] isolated;
     private final double[] inputTotals;
+    private final double[] isolatedElements;
 
-    SequenceStep(EquilibriumResult result, double[][] isolated, double[] inputTotals) {
+    /**
+     * @param isolated    moles isolated per phase and member (null in equilibrium mode); kept, not copied
+     * @param inputTotals element totals of the input (shared, not modified)
+     * @param stoich      the system's stoichiometry, to sum the isolated element moles once
+     */
+    SequenceStep(EquilibriumResult result, double[][] isolated, double[] inputTotals, Stoichiometry stoich) {
         this.result = result;
         this.isolated = isolated;
         this.inputTotals = inputTotals;
+        this.isolatedElements = isolated == null ? null : stoich.condensedElements(isolated);
     }
 
     /** @return temperature [K] */
@@ -49,18 +56,7 @@ public final class SequenceStep {
     /** @param e an element @return moles of e in the solids isolated before this step */
     public double isolatedElementMoles(Element e) {
         int j = result.system().elementIndex(e);
-        if (j < 0 || isolated == null) {
-            return 0;
-        }
-        double iso = 0;
-        for (int p = 1; p < isolated.length; p++) {
-            for (int k = 0; k < isolated[p].length; k++) {
-                if (isolated[p][k] > 0) {
-                    iso += isolated[p][k] * result.system().memberStoichiometry(p, k)[j];
-                }
-            }
-        }
-        return iso;
+        return j < 0 || isolatedElements == null ? 0 : isolatedElements[j];
     }
 
     /** @param e an element @return input amount of e [mol] (0 if not in the system) */

@@ -20,10 +20,11 @@ import java.util.Set;
 public final class EquilibriumSolver {
     private final SolverOptions options;
     /**
-     * Largest continuation step in 1/T [1/K] of a cold start (about 100 K at 1400 K, 5 K at 300 K):
-     * larger steps change many phases at once, and phase selection then often cycles.
+     * Largest continuation step of a cold start in 1/T [1/K] (about 100 K at 1400 K, 15 K at
+     * 550 K, 5 K at 300 K): larger steps change many phases at once, and phase selection then
+     * often cycles.
      */
-    static final double MAX_COLD_STEP = 5e-5;
+    private static final double MAX_COLD_STEP = 5e-5;
 
     /** @param options solver settings */
     public EquilibriumSolver(SolverOptions options) {
@@ -69,7 +70,45 @@ public final class EquilibriumSolver {
         if (a.result != null) {
             return a.result;
         }
-        return coldSolve(problem);
+        EquilibriumResult walked = continueFrom(problem, start);
+        return walked != null ? walked : coldSolve(problem);
+    }
+
+    /**
+     * Continuation from the warm start's state to the target along a straight path in (1/T, ln P),
+     * with adaptive steps; null if it stalls.
+     */
+    private EquilibriumResult continueFrom(EquilibriumProblem problem, WarmStart start) {
+        double inv0 = 1.0 / start.fromTK;
+        double inv1 = 1.0 / problem.temperatureK();
+        double lp0 = Math.log(start.fromPBar);
+        double lp1 = Math.log(problem.pressureBar());
+        Iterate good = start.iterate.copy();
+        double s = 0;
+        double ds = 0.25;
+        int iterations = 0;
+        while (s < 1) {
+            double next = Math.min(1.0, s + ds);
+            EquilibriumProblem pr = next == 1.0 ? problem
+                    : problem.at(1.0 / (inv0 + next * (inv1 - inv0)), Math.exp(lp0 + next * (lp1 - lp0)));
+            StateData st = new StateData(pr);
+            Attempt a = attempt(pr, st, adapt(good.copy(), st));
+            iterations += a.iterations;
+            if (a.result == null) {
+                ds *= 0.5;
+                if (ds < 1e-4) {
+                    return null;
+                }
+                continue;
+            }
+            s = next;
+            good = a.iterate;
+            if (s == 1.0) {
+                return ResultBuilder.withIterations(a.result, iterations);
+            }
+            ds = Math.min(0.5, ds * 1.5);
+        }
+        return null;
     }
 
     private static final class Attempt {
@@ -152,7 +191,7 @@ public final class EquilibriumSolver {
         int totalIterations = a.iterations;
         double invT = 1.0 / t0;
         double invTarget = 1.0 / target;
-        double h = MAX_COLD_STEP;
+        double h = 2.0e-5;
         EquilibriumResult last = a.result;
         EquilibriumResult previous = null;
         while (invT < invTarget) {

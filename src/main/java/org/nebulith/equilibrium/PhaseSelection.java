@@ -34,9 +34,19 @@ final class PhaseSelection {
     String run(Iterate it) {
         Set<Integer> blocked = new HashSet<>();
         Set<List<Integer>> settled = new HashSet<>();
+        Set<String> visited = new HashSet<>();
         Iterate backup = null;
         int lastAdded = -1;
         while (changes <= opt.maxPhaseChanges()) {
+            if (!visited.add(key(it)) && lastAdded >= 0 && backup != null) {
+                // this addition leads back to an assemblage already tried: a cycle between nearly
+                // degenerate phases; keep the earlier assemblage and stop offering this phase
+                restore(backup, it);
+                blocked.add(lastAdded);
+                lastAdded = -1;
+                changes++;
+                continue;
+            }
             boolean ok = kernel.converge(it);
             int vanished = kernel.vanishing(it);
             if (vanished >= 0) {
@@ -96,6 +106,12 @@ final class PhaseSelection {
             changes++;
         }
         return "phase selection did not settle after " + opt.maxPhaseChanges() + " changes (phases " + names(it) + ")";
+    }
+
+    private static String key(Iterate it) {
+        int[] a = it.active.clone();
+        Arrays.sort(a);
+        return Arrays.toString(a);
     }
 
     private static void restore(Iterate from, Iterate to) {

@@ -52,6 +52,13 @@ final class ResultBuilder {
         phaseMoles[p] = n;
     }
 
+    static EquilibriumResult withIterations(EquilibriumResult r, int totalIterations) {
+        EquilibriumResult.Diagnostics d = r.diagnostics();
+        return r.withDiagnostics(new EquilibriumResult.Diagnostics(totalIterations, d.phaseChanges(),
+                d.maxBalanceError(), d.maxPotentialResidual(), d.worstMember(), d.minAbsentAffinity(),
+                d.minAffinityPhase(), d.excludedGasSpecies(), d.coldStart()));
+    }
+
     static EquilibriumResult markCold(EquilibriumResult r, int totalIterations) {
         EquilibriumResult.Diagnostics d = r.diagnostics();
         EquilibriumResult.Diagnostics nd = new EquilibriumResult.Diagnostics(totalIterations, d.phaseChanges(),

@@ -25,9 +25,14 @@ public final class SolutionModels {
             new SolutionModel.EndMember("forsterite", 2, List.of("forsterite")),
             new SolutionModel.EndMember("fayalite", 2, List.of("fayalite"))));
 
-    /** Orthopyroxene, enstatite-ferrosilite (Mg2Si2O6-Fe2Si2O6), two M sites. */
+    /**
+     * Orthopyroxene, enstatite-ferrosilite (Mg2Si2O6-Fe2Si2O6), two M sites. The Mg end-member takes
+     * the most stable Mg2Si2O6 polymorph at each temperature (orthoenstatite, protoenstatite or
+     * clinoenstatite): otherwise a pure Mg polymorph and the Fe-poor solution are nearly degenerate
+     * and the phase rule cannot decide between them.
+     */
     public static final SolutionModel ORTHOPYROXENE = new SolutionModel("orthopyroxene", List.of(
-            new SolutionModel.EndMember("enstatite", 2, List.of("enstatite")),
+            new SolutionModel.EndMember("enstatite", 2, List.of("enstatite", "protoenstatite", "clinoenstatite")),
             new SolutionModel.EndMember("ferrosilite", 2, List.of("ferrosilite"))));
 
     /** Melilite, gehlenite-akermanite, one site. */

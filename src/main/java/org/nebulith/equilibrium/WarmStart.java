@@ -9,15 +9,17 @@ package org.nebulith.equilibrium;
 public final class WarmStart {
     final Iterate iterate;
     final double fromTK;
+    final double fromPBar;
 
-    private WarmStart(Iterate iterate, double fromTK) {
+    private WarmStart(Iterate iterate, double fromTK, double fromPBar) {
         this.iterate = iterate;
         this.fromTK = fromTK;
+        this.fromPBar = fromPBar;
     }
 
     /** @param r an earlier result @return a start that reuses it as is */
     public static WarmStart of(EquilibriumResult r) {
-        return new WarmStart(r.iterate.copy(), r.problem().temperatureK());
+        return new WarmStart(r.iterate.copy(), r.problem().temperatureK(), r.problem().pressureBar());
     }
 
     /**
@@ -52,6 +54,6 @@ public final class WarmStart {
                 a.u[q] = logAmount || v > 0 ? v : a.u[q];
             }
         }
-        return new WarmStart(a, t1);
+        return new WarmStart(a, t1, last.problem().pressureBar());
     }
 }

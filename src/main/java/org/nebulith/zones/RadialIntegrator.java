@@ -28,6 +28,12 @@ public final class RadialIntegrator {
     public static final double DEFAULT_REL_TOL = 1e-9;
     /** Default Gauss-Legendre points per panel. */
     public static final int DEFAULT_POINTS = 8;
+    /**
+     * Components below this fraction of the largest integrand component (the last component, the
+     * gas mass, excepted) are resolved to relTol of that floor rather than of themselves: trace
+     * phases need not drive the refinement.
+     */
+    static final double TRACE_FLOOR = 1e-6;
     private static final double AREA_FACTOR = 2 * Math.PI * DiskConstants.AU_CM * DiskConstants.AU_CM;
 
     private final double relTol;
@@ -139,8 +145,13 @@ public final class RadialIntegrator {
                 tol[i] += Math.abs(p.fine[i]);
             }
         }
+        double largest = 0;
+        for (int i = 0; i < dim - 1; i++) {
+            largest = Math.max(largest, tol[i]);
+        }
         for (int i = 0; i < dim; i++) {
-            tol[i] *= relTol;
+            double scale = i < dim - 1 ? Math.max(tol[i], TRACE_FLOOR * largest) : tol[i];
+            tol[i] = relTol * scale;
         }
         return tol;
     }

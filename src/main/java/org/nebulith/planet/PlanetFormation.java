@@ -1,0 +1,143 @@
+package org.nebulith.planet;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.thermo.Element;
+import org.nebulith.thermo.Formula;
+import org.nebulith.zones.FeedingZone;
+import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
+
+/**
+ * From a gas composition, a disk and feeding zones to planets: equilibrium condensation at every
+ * radius of each zone, integration of the condensates over the zone, and the bulk planet with its
+ * core-mantle split. Chemical systems are built once per set of elements and shared; each call of
+ * {@link #run} is a pure function of its arguments and the settings, and is thread-safe.
+ */
+public final class PlanetFormation {
+    private final FormationSettings settings;
+    private final EquilibriumSolver solver;
+    private final ConcurrentHashMap<Set<Element>, ChemicalSystem> systems = new ConcurrentHashMap<>();
+
+    /**
+     * @param settings the settings
+     * @param solver   the equilibrium solver
+     */
+    public PlanetFormation(FormationSettings settings, EquilibriumSolver solver) {
+        this.settings = settings;
+        this.solver = solver;
+    }
+
+    /** @return the settings */
+    public FormationSettings settings() {
+        return settings;
+    }
+
+    /**
+     * @param gas   the gas composition (any normalisation)
+     * @param disk  the disk
+     * @param zones feeding zones inside the disk's range
+     * @return the planets, in zone order, and the local condensation used (for radial profiles)
+     */
+    public Formation run(ElementAbundances gas, DiskModel disk, List<FeedingZone> zones) {
+        LocalCondensation local = localCondensation(gas);
+        List<ZonePlanet> planets = new ArrayList<>();
+        for (FeedingZone z : zones) {
+            planets.add(zonePlanet(z, disk, local));
+        }
+        return new Formation(gas, planets, local);
+    }
+
+    /**
+     * @param zone  a feeding zone
+     * @param disk  the disk
+     * @param local the local condensation of the gas (shared between zones of one run)
+     * @return the zone's planet
+     */
+    public ZonePlanet zonePlanet(FeedingZone zone, DiskModel disk, LocalCondensation local) {
+        ZoneInventory inv = settings.integration().integrate(zone, disk, local);
+        return new ZonePlanet(inv, PlanetModel.build(condensedPhases(inv), settings.core()));
+    }
+
+    /**
+     * @param gas the gas composition
+     * @return a fresh local-condensation evaluator for one gram of this gas
+     */
+    public LocalCondensation localCondensation(ElementAbundances gas) {
+        return localCondensation(gas, java.util.Collections.emptyNavigableMap());
+    }
+
+    /**
+     * @param gas       the gas composition
+     * @param reference warm-start states of another composition with the same elements
+     * @return a fresh local-condensation evaluator for one gram of this gas
+     */
+    public LocalCondensation localCondensation(ElementAbundances gas,
+                                               java.util.NavigableMap<Double, LocalCondensation.Local> reference) {
+        Set<Element> els = EnumSet.noneOf(Element.class);
+        for (Element e : gas.elements()) {
+            if (gas.moles(e) > 0) {
+                els.add(e);
+            }
+        }
+        ChemicalSystem sys = systems.computeIfAbsent(els, k -> settings.system().build(k));
+        double mass = gas.massGrams();
+        double[] b = new double[sys.elementCount()];
+        for (int j = 0; j < b.length; j++) {
+            b[j] = gas.moles(sys.elements().get(j)) / mass;
+        }
+        if (!reference.isEmpty() && reference.firstEntry().getValue().result().system() != sys) {
+            throw new IllegalArgumentException("warm-start reference belongs to another chemical system");
+        }
+        return new LocalCondensation(sys, b, solver, settings.floorK(), reference);
+    }
+
+    /** @param inv a zone inventory @return its condensed phases for the planet model (solution members as "phase:member") */
+    public static List<CondensedPhase> condensedPhases(ZoneInventory inv) {
+        ChemicalSystem sys = inv.system();
+        List<CondensedPhase> out = new ArrayList<>();
+        for (int p = 1; p < sys.phaseCount(); p++) {
+            for (int k = 0; k < inv.memberMoles()[p].length; k++) {
+                double n = inv.memberMoles()[p][k];
+                if (n > 0) {
+                    Formula f = formulaOf(sys, p, k);
+                    String name = sys.phaseName(p) + (sys.memberNames(p).size() > 1 ? ":" + sys.memberNames(p).get(k) : "");
+                    out.add(new CondensedPhase(name, f, n, PhaseClassifier.classify(sys.phaseName(p), f)));
+                }
+            }
+        }
+        if (inv.iceMoles() > 0) {
+            out.add(new CondensedPhase("water ice", Formula.parse("H:2 O:1"), inv.iceMoles(), PhaseKind.ICE));
+        }
+        return out;
+    }
+
+    private static Formula formulaOf(ChemicalSystem sys, int p, int k) {
+        double[] a = sys.memberStoichiometry(p, k);
+        java.util.Map<Element, Double> m = new java.util.EnumMap<>(Element.class);
+        for (int j = 0; j < a.length; j++) {
+            if (a[j] > 0) {
+                m.put(sys.elements().get(j), a[j]);
+            }
+        }
+        return Formula.of(m);
+    }
+
+    /**
+     * The result of {@link #run}.
+     *
+     * @param gas     the gas composition used
+     * @param planets one planet per zone
+     * @param local   the local condensation (its cache holds every radius solved)
+     */
+    public record Formation(ElementAbundances gas, List<ZonePlanet> planets, LocalCondensation local) {
+    }
+}

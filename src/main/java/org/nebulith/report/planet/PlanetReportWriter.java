@@ -1,0 +1,156 @@
+package org.nebulith.report.planet;
+
+import java.time.Instant;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.ZonePlanet;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.RunInputs;
+import org.nebulith.report.Table;
+import org.nebulith.report.chart.ChartFormat;
+import org.nebulith.report.chart.ChartRenderer;
+import org.nebulith.report.chart.ChartSize;
+import org.nebulith.report.html.HtmlReportWriter;
+import org.nebulith.report.html.MarkdownSummaryWriter;
+import org.nebulith.report.html.Report;
+import org.nebulith.zones.LocalCondensation;
+
+/** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
+public final class PlanetReportWriter {
+    /** The cautions every planet report carries. */
+    public static final List<String> CAUTIONS = List.of(
+            "Equilibrium condensation with ideal solutions and no kinetics: real nebular solids may have formed "
+                    + "out of equilibrium, and non-ideal mixing shifts minor-element condensation.",
+            "Silicate and oxide liquids are not modelled; they can be stable at high pressure or strong dust "
+                    + "enrichment, where these results do not apply.",
+            "Results depend on the thermodynamic data (see the sources below); rerun with --variant for a "
+                    + "sensitivity test. No phosphide (schreibersite) data exist in the data set, so P condenses "
+                    + "late as phosphate; Mn has no silicate solution and condenses as metal.",
+            "Below the floor temperature the rock assemblage is frozen at its floor equilibrium; only water ice "
+                    + "is added there (from the ice vapour pressure); CO, CO2, CH4 and NH3 ices are not modelled.",
+            "The core-mantle split is bookkeeping of condensates (metal and sulfide to the core), not a model of "
+                    + "metal-silicate equilibration during differentiation; accretion is assumed to collect the "
+                    + "local solids in proportion to the zone weights, without radial drift.",
+            "The mass-radius relation (Zeng et al. 2016) is valid for 1-8 Earth masses and core mass fractions "
+                    + "0-0.4; values outside are extrapolations.");
+
+    /**
+     * Everything the report shows.
+     *
+     * @param title        report title
+     * @param command      the command line
+     * @param version      tool version
+     * @param started      start time
+     * @param composition  description of the gas composition
+     * @param host         the host star's composition
+     * @param disk         the disk
+     * @param chemistry    description of the chemical system
+     * @param planets      the zone planets
+     * @param scan         the radial scan, inner first
+     * @param settings     effective settings (key, value, origin)
+     * @param inputs       the run's input files
+     * @param sources      data sources (key, citation)
+     */
+    public record RunData(String title, String command, String version, Instant started, String composition,
+                          ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
+                          List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
+                          List<Report.Citation> sources) {
+    }
+
+    private PlanetReportWriter() {
+    }
+
+    /**
+     * @param run  the open run folder (committed by the caller)
+     * @param data the run's data
+     * @return the report (for printing a summary)
+     */
+    public static Report write(RunFolder run, RunData data) {
+        Table bulk = PlanetTables.bulkComposition(data.planets());
+        Table comparison = PlanetTables.comparison(data.planets(), data.host());
+        Table phases = PlanetTables.zonePhases(data.planets());
+        Table profile = PlanetTables.radialProfile(data.scan());
+        run.writeCsv("bulk-composition.csv", bulk);
+        run.writeCsv("comparison.csv", comparison);
+        run.writeCsv("zone-phases.csv", phases);
+        run.writeCsv("radial-profile.csv", profile);
+        Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
+        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets())
+                .chart(ChartSize.PAGE), run, "radial-map", formats);
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host())
+                .chart(ChartSize.PAGE), run, "planet-comparison", formats);
+        Report report = new Report(data.title(), data.command(), data.version(), data.started());
+        report.section("Scenario")
+                .paragraph("Composition: " + data.composition() + ".")
+                .paragraph("Disk: " + data.disk().description() + ".")
+                .paragraph("Chemistry: " + data.chemistry() + ".");
+        Report.Section planets = report.section("Planets");
+        for (ZonePlanet zp : data.planets()) {
+            planets.paragraph(summary(zp));
+        }
+        planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
+        report.section("Comparison with the host star and reference bodies")
+                .chart(compare, "Molar ratios and core mass fraction of the predicted planets beside the host star, "
+                        + "bulk Earth and CI chondrites (log scale).")
+                .table(comparison, "comparison.csv");
+        report.section("Radial structure of the disk")
+                .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
+                        + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
+                .table(phases, "zone-phases.csv: what each zone collected");
+        data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
+        CAUTIONS.forEach(report::caution);
+        data.sources().forEach(c -> report.citation(c.key(), c.source()));
+        report.inputs(data.inputs());
+        for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
+                "radial-map.png", "radial-map.svg", "radial-map.pdf", "planet-comparison.png", "planet-comparison.svg",
+                "planet-comparison.pdf", "summary.md")) {
+            report.outputFile(f);
+        }
+        report.finish(Instant.now());
+        run.writeText("report.html", HtmlReportWriter.write(report));
+        run.writeText("summary.md", MarkdownSummaryWriter.write(report));
+        return report;
+    }
+
+    /** @param zp a zone planet @return one sentence about it */
+    public static String summary(ZonePlanet zp) {
+        if (!zp.planet().hasSolids()) {
+            return zp.zoneName() + ": " + zp.planet().notice() + ".";
+        }
+        PlanetComposition c = zp.planet().require();
+        StringBuilder sb = new StringBuilder(zp.zoneName()).append(String.format(java.util.Locale.ROOT,
+                ": Mg/Si %.3f, Fe/Si %.3f (molar)", c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar")));
+        if (c.hasRock()) {
+            sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
+        }
+        if (c.oxides() != null && c.oxides().hasMgNumber()) {
+            sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
+        }
+        if (c.iceMassFraction() > 0) {
+            sb.append(String.format(java.util.Locale.ROOT, ", ice %.1f wt%%", 100 * c.iceMassFraction()));
+        }
+        sb.append('.');
+        return sb.toString();
+    }
+
+    private static Table keyRows(List<ZonePlanet> planets) {
+        Table t = Table.withColumns("key quantities", "zone", "Mg_Si_molar", "Fe_Si_molar", "core_mass_fraction",
+                "mantle_Mg_number", "ice_mass_fraction");
+        for (ZonePlanet zp : planets) {
+            if (!zp.planet().hasSolids()) {
+                t.row(zp.zoneName(), null, null, null, null, null);
+                continue;
+            }
+            PlanetComposition c = zp.planet().require();
+            t.row(zp.zoneName(), c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar"),
+                    c.hasRock() ? c.coreMassFraction() : null,
+                    c.oxides() != null && c.oxides().hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
+        }
+        return t;
+    }
+}

@@ -1,0 +1,171 @@
+package org.nebulith.report.planet;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.StringJoiner;
+
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.planet.MassRadius;
+import org.nebulith.planet.MolarRatios;
+import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.Quantity;
+import org.nebulith.planet.ReferenceBodies;
+import org.nebulith.planet.ZonePlanet;
+import org.nebulith.planet.LocalSolids;
+import org.nebulith.report.Table;
+import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
+
+/**
+ * The CSV tables of a planet run: bulk composition per zone, the comparison with the host star and
+ * reference bodies, the phases each zone collected, and the radial profile.
+ */
+public final class PlanetTables {
+    /** Ratios compared with the host star and the reference bodies. */
+    public static final List<String> COMPARED = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar", "Al_Si_molar",
+            "Ti_Si_molar", "Ni_Fe_molar");
+    /** Reference bodies in the comparison, by their ReferenceBodies names. */
+    public static final List<String> BODIES = List.of("bulk-earth", "bulk-silicate-earth", "ci-chondrite");
+
+    private PlanetTables() {
+    }
+
+    /**
+     * @param planets the zone planets
+     * @return {@code bulk-composition.csv}: zone,quantity,value,unit (plus radius where a mass is given)
+     */
+    public static Table bulkComposition(List<ZonePlanet> planets) {
+        Table t = Table.withColumns("bulk-composition.csv", "zone", "quantity", "value", "unit");
+        for (ZonePlanet zp : planets) {
+            if (!zp.planet().hasSolids()) {
+                continue;
+            }
+            PlanetComposition c = zp.planet().require();
+            for (Quantity q : c.quantities()) {
+                t.row(zp.zoneName(), q.name(), q.value(), q.unit());
+            }
+            t.row(zp.zoneName(), "solids_mass_g", c.bulk().massGrams(), "g");
+            zp.inventory().zone().planetMassMearth().ifPresent(m -> {
+                if (c.hasRock()) {
+                    t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
+                            "R_earth (for " + m + " M_earth)");
+                }
+            });
+        }
+        return t;
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's (gas) composition
+     * @return {@code comparison.csv}: zone,quantity,planet,host_star,bulk_earth,bulk_silicate_earth,ci_chondrite,unit
+     */
+    public static Table comparison(List<ZonePlanet> planets, ElementAbundances host) {
+        Table t = Table.withColumns("comparison.csv", "zone", "quantity", "planet", "host_star", "bulk_earth",
+                "bulk_silicate_earth", "ci_chondrite", "unit");
+        Map<String, Double> hostRatios = MolarRatios.of(host);
+        List<Map<String, Double>> refs = new ArrayList<>();
+        for (String b : BODIES) {
+            ElementAbundances e = ReferenceBodies.get(b).elements();
+            refs.add(e.isEmpty() ? Map.of() : MolarRatios.of(e));
+        }
+        for (ZonePlanet zp : planets) {
+            if (!zp.planet().hasSolids()) {
+                continue;
+            }
+            Map<String, Double> ratios = zp.planet().require().molarRatios();
+            for (String q : COMPARED) {
+                List<Object> row = new ArrayList<>(List.of(zp.zoneName(), q));
+                row.add(ratios.get(q));
+                row.add(hostRatios.get(q));
+                refs.forEach(r -> row.add(r.get(q)));
+                row.add("mol/mol");
+                t.row(row);
+            }
+            List<Object> cmf = new ArrayList<>(List.of(zp.zoneName(), "core_mass_fraction"));
+            PlanetComposition c = zp.planet().require();
+            cmf.add(c.hasRock() ? c.coreMassFraction() : null);
+            cmf.add(null);
+            for (String b : BODIES) {
+                ReferenceBodies.Body body = ReferenceBodies.get(b);
+                cmf.add(body.coreMassFraction().isPresent() ? body.coreMassFraction().getAsDouble() : null);
+            }
+            cmf.add("mass fraction of rock");
+            t.row(cmf);
+        }
+        return t;
+    }
+
+    /**
+     * @param planets the zone planets
+     * @return {@code zone-phases.csv}: what each zone collected, phase by phase
+     */
+    public static Table zonePhases(List<ZonePlanet> planets) {
+        Table t = Table.withColumns("zone-phases.csv", "zone", "phase", "member", "species", "moles", "mass_g",
+                "wt_pct_of_solids", "reservoir");
+        for (ZonePlanet zp : planets) {
+            ZoneInventory inv = zp.inventory();
+            double total = zp.planet().hasSolids() ? zp.planet().require().bulk().massGrams() : 0;
+            for (var p : org.nebulith.planet.PlanetFormation.condensedPhases(inv)) {
+                String[] parts = p.name().split(":", 2);
+                double mass = p.massGrams();
+                t.row(inv.zone().name(), parts[0], parts.length > 1 ? parts[1] : parts[0], p.formula().notation(),
+                        p.moles(), mass, total > 0 ? 100 * mass / total : null, p.kind().name().toLowerCase(java.util.Locale.ROOT));
+            }
+        }
+        return t;
+    }
+
+    /**
+     * @param scan the local states, inner first
+     * @return {@code radial-profile.csv}
+     */
+    public static Table radialProfile(List<LocalCondensation.Local> scan) {
+        Table t = Table.withColumns("radial-profile.csv", "r_AU", "T_K", "P_bar", "sigma_gas_g_cm2",
+                "T_equilibrium_K", "solids_per_gas_mass", "heavy_element_condensed_fraction", "ice_mass_fraction",
+                "Mg_Si_molar", "Fe_Si_molar", "phases");
+        for (LocalCondensation.Local l : scan) {
+            LocalSolids s = LocalSolids.of(l);
+            t.row(l.state().rAU(), l.state().temperatureK(), l.state().pressureBar(), l.state().sigmaGasGcm2(),
+                    l.equilibriumK(), s.solidsPerGasMass(), s.heavyElementCondensedFraction(), s.iceMassFraction(),
+                    finiteOrNull(s.mgSi()), finiteOrNull(s.feSi()), phases(l));
+        }
+        return t;
+    }
+
+    static Double finiteOrNull(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+
+    /** @param l a local state @return its condensed phases, ';'-separated */
+    static String phases(LocalCondensation.Local l) {
+        StringJoiner j = new StringJoiner(";");
+        for (String n : l.result().presentPhaseNames()) {
+            j.add(n);
+        }
+        if (l.iceMoles() > 0) {
+            j.add("water ice");
+        }
+        return j.toString();
+    }
+
+    /**
+     * @param scan the local states, inner first
+     * @return the radius where each tracked phase first appears going outwards, phase name to r [AU]
+     */
+    public static Map<String, Double> fronts(List<LocalCondensation.Local> scan) {
+        Map<String, Double> out = new LinkedHashMap<>();
+        for (LocalCondensation.Local l : scan) {
+            for (String n : phases(l).split(";")) {
+                String key = n.startsWith("FeS(") ? "troilite" : n;
+                if (!key.isEmpty() && (key.equals("metal") || key.equals("olivine") || key.equals("orthopyroxene")
+                        || key.equals("troilite") || key.equals("water ice"))) {
+                    out.putIfAbsent(key, l.state().rAU());
+                }
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,24 @@
+package org.nebulith.survey;
+
+import org.nebulith.errors.Messages;
+
+/**
+ * One problem of a catalogue: where (line, column), what is wrong, what is accepted.
+ *
+ * @param line     1-based line of the file
+ * @param column   the column (header name), or {@code (row)} for the row as a whole
+ * @param star     the row's star name, or empty (header problems, nameless rows)
+ * @param problem  what is wrong
+ * @param accepted what would be accepted
+ */
+public record CatalogueProblem(long line, String column, String star, String problem, String accepted) {
+
+    /**
+     * @param file the catalogue as the user named it
+     * @return the one-line message: {@code file: line L: field "C": [star 'S': ]problem; accepted: ...}
+     */
+    public String text(Object file) {
+        String what = star.isEmpty() ? problem : "star '" + star + "': " + problem;
+        return Messages.BAD_INPUT_FIELD.format(file, line, column, what, accepted);
+    }
+}

@@ -1,0 +1,36 @@
+package org.nebulith.survey;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.planet.Quantity;
+
+/**
+ * The science of one draw: a pure, thread-safe function of the composition and the settings.
+ *
+ * <p>Contract for implementations: the same composition gives the same result (bit for bit), on
+ * any thread; every composition of one star gives the same zones and quantities (names, units,
+ * order), so that draws can be compared quantity by quantity (a quantity that does not apply, such
+ * as an ice fraction in a hot zone, is reported as 0, not left out); the zone name {@code host} is
+ * reserved for the star's own ratios. Failures (non-convergence) are thrown, naming the state.
+ */
+public interface PlanetEstimator {
+
+    /**
+     * @param gas the star's element abundances (moles relative to H = 1, as built by
+     *            {@link org.nebulith.composition.StellarAbundances})
+     * @return per zone (zone name to quantities, in a fixed order), for one stellar composition
+     */
+    LinkedHashMap<String, List<Quantity>> estimate(ElementAbundances gas);
+
+    /**
+     * Optional counter hook for the benchmark.
+     *
+     * @return the number of equilibrium solutions computed by this estimator since it was made
+     *         (summed over all threads), or 0 if it does not count
+     */
+    default long equilibria() {
+        return 0;
+    }
+}

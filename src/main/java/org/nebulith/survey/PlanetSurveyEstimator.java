@@ -1,0 +1,150 @@
+package org.nebulith.survey;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.NavigableMap;
+import java.util.concurrent.atomic.AtomicLong;
+
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.disk.DiskPresets;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.planet.FormationSettings;
+import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.PlanetFormation;
+import org.nebulith.planet.Quantity;
+import org.nebulith.planet.ZonePlanet;
+import org.nebulith.zones.FeedingZone;
+import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneCondensation;
+import org.nebulith.zones.ZoneFileReader;
+
+/**
+ * The planet estimate of one survey draw: the same pipeline as {@code nebulith planet} (equilibrium
+ * condensation across each feeding zone, core-mantle split) with integration settings suited to
+ * Monte Carlo ({@link ZoneCondensation#fast()}). Every draw is warm-started from fixed reference
+ * states of the solar composition at the zone radii, never from an earlier draw, so a draw's result
+ * is a pure function of its composition whatever thread computes it.
+ */
+public final class PlanetSurveyEstimator implements PlanetEstimator {
+    /** Default disk of surveys. */
+    public static final String DEFAULT_DISK = DiskPresets.STEADY_VISCOUS_DEFAULT;
+    /** Default zone file of surveys (classpath copy of the top-level folder). */
+    public static final String DEFAULT_ZONES = "feeding-zones/survey-default.csv";
+    /** Quantities reported per zone, in this order (0 where one does not apply). */
+    public static final List<String> QUANTITIES = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar",
+            "Al_Si_molar", "Ti_Si_molar", "Ni_Fe_molar", "S_Si_molar", "O_Si_molar", "core_mass_fraction",
+            "mantle_Mg_number", "ice_mass_fraction", "mantle_SiO2_wt_pct", "mantle_MgO_wt_pct", "mantle_FeO_wt_pct",
+            "mantle_Al2O3_wt_pct", "mantle_CaO_wt_pct");
+
+    private final PlanetFormation formation;
+    private final DiskModel disk;
+    private final List<FeedingZone> zones;
+    private final NavigableMap<Double, LocalCondensation.Local> reference;
+    private final AtomicLong equilibria = new AtomicLong();
+
+    private PlanetSurveyEstimator(PlanetFormation formation, DiskModel disk, List<FeedingZone> zones,
+                                  ElementAbundances nominal) {
+        this.formation = formation;
+        this.disk = disk;
+        this.zones = zones;
+        LocalCondensation ref = formation.localCondensation(nominal);
+        for (FeedingZone z : zones) {
+            formation.zonePlanet(z, disk, ref);
+        }
+        this.reference = ref.snapshot();
+    }
+
+    /**
+     * @param settings the survey settings (disk and zones, null for the defaults; solar reference)
+     * @return the estimator
+     * @throws IOException if a disk or zone file cannot be read
+     */
+    public static PlanetSurveyEstimator create(SurveySettings settings) throws IOException {
+        DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
+        List<FeedingZone> z = readZones(settings.zones(), d);
+        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+                new EquilibriumSolver());
+        return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances());
+    }
+
+    private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {
+        if (file != null) {
+            try (Reader r = Files.newBufferedReader(Path.of(file), StandardCharsets.UTF_8)) {
+                return ZoneFileReader.read(r, file, d);
+            }
+        }
+        InputStream in = PlanetSurveyEstimator.class.getResourceAsStream("/" + DEFAULT_ZONES);
+        if (in == null) {
+            throw new UncheckedIOException(new IOException("default survey zones missing: " + DEFAULT_ZONES));
+        }
+        try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
+            return ZoneFileReader.read(r, DEFAULT_ZONES, d);
+        }
+    }
+
+    @Override
+    public LinkedHashMap<String, List<Quantity>> estimate(ElementAbundances gas) {
+        LocalCondensation local = formation.localCondensation(gas, reference);
+        LinkedHashMap<String, List<Quantity>> out = new LinkedHashMap<>();
+        for (FeedingZone z : zones) {
+            out.put(z.name(), quantities(formation.zonePlanet(z, disk, local)));
+        }
+        equilibria.addAndGet(local.equilibriaSolved());
+        return out;
+    }
+
+    /** @param zp a zone planet @return the fixed list of quantities (0 where one does not apply) */
+    static List<Quantity> quantities(ZonePlanet zp) {
+        Map<String, Quantity> have = new LinkedHashMap<>();
+        if (zp.planet().hasSolids()) {
+            PlanetComposition c = zp.planet().require();
+            for (Quantity q : c.quantities()) {
+                have.put(q.name(), q);
+            }
+        }
+        List<Quantity> out = new ArrayList<>();
+        for (String name : QUANTITIES) {
+            Quantity q = have.get(name);
+            out.add(q != null ? q : new Quantity(name, 0.0, unitOf(name)));
+        }
+        return out;
+    }
+
+    private static String unitOf(String name) {
+        if (name.endsWith("_molar")) {
+            return "mol/mol";
+        }
+        if (name.endsWith("_wt_pct")) {
+            return "wt_pct";
+        }
+        switch (name) {
+            case "core_mass_fraction":
+                return "mass fraction of rock";
+            case "mantle_Mg_number":
+                return "100 Mg/(Mg+Fe) molar";
+            default:
+                return "mass fraction of solids";
+        }
+    }
+
+    @Override
+    public long equilibria() {
+        return equilibria.get();
+    }
+
+    /** @return the zones */
+    public List<FeedingZone> zones() {
+        return zones;
+    }
+}

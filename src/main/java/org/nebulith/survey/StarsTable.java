@@ -1,0 +1,76 @@
+package org.nebulith.survey;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.Iterator;
+import java.util.Map;
+import java.util.Set;
+import java.util.StringJoiner;
+
+import org.nebulith.composition.SolarReference;
+import org.nebulith.report.CsvTableWriter;
+import org.nebulith.thermo.Element;
+
+/**
+ * The per-star notes, {@code survey-stars.csv}, streamed in catalogue order: for every catalogue
+ * row its status ({@code computed}, {@code skipped} for a bad row, {@code failed} for a star whose
+ * estimate failed under {@code --skip-bad}), the elements measured, the elements that followed
+ * [Fe/H] because the star lacks them, and the reason for a skip.
+ */
+final class StarsTable {
+
+    static final String FILE = "survey-stars.csv";
+    static final String HEADER = CsvTableWriter.FORMAT.format("star", "catalogue_line", "status", "measured",
+            "followed_FeH", "reason") + "\n";
+
+    private final Writer out;
+    private final Iterator<Map.Entry<Long, String>> bad;
+    private final Map<Long, String> reasons;
+    private final SolarReference solar;
+    private Map.Entry<Long, String> nextBad;
+
+    StarsTable(Writer out, Map<Long, String> badRows, Map<Long, String> reasons, SolarReference solar) throws IOException {
+        this.out = out;
+        this.bad = badRows.entrySet().iterator();
+        this.reasons = reasons;
+        this.solar = solar;
+        this.nextBad = bad.hasNext() ? bad.next() : null;
+        out.write(HEADER);
+    }
+
+    void computed(StarRow row) throws IOException {
+        skippedBefore(row.line());
+        line(row.star(), row.line(), "computed", elements(row.abundances().keySet()),
+                elements(StarJob.followedFeH(row, solar)), "");
+    }
+
+    void failed(StarRow row, StarJobException e) throws IOException {
+        skippedBefore(row.line());
+        line(row.star(), row.line(), "failed", elements(row.abundances().keySet()),
+                elements(StarJob.followedFeH(row, solar)), e.getMessage());
+    }
+
+    /** Writes the bad rows after the last good one. */
+    void finish() throws IOException {
+        skippedBefore(Long.MAX_VALUE);
+        out.flush();
+    }
+
+    private void skippedBefore(long line) throws IOException {
+        while (nextBad != null && nextBad.getKey() < line) {
+            line(nextBad.getValue(), nextBad.getKey(), "skipped", "", "", reasons.get(nextBad.getKey()));
+            nextBad = bad.hasNext() ? bad.next() : null;
+        }
+    }
+
+    private void line(String star, long line, String status, String measured, String followed, String reason)
+            throws IOException {
+        out.write(CsvTableWriter.FORMAT.format(star, Long.toString(line), status, measured, followed, reason) + "\n");
+    }
+
+    private static String elements(Set<Element> set) {
+        StringJoiner j = new StringJoiner(" ");
+        set.forEach(e -> j.add(e.symbol()));
+        return j.toString();
+    }
+}

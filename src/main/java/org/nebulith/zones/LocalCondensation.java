@@ -1,0 +1,141 @@
+package org.nebulith.zones;
+
+import java.util.Map;
+import java.util.NavigableMap;
+import java.util.TreeMap;
+
+import org.nebulith.disk.DiskState;
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.EquilibriumProblem;
+import org.nebulith.equilibrium.EquilibriumResult;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.equilibrium.WarmStart;
+
+/**
+ * What condenses from one gram of disk gas at each radius: the equilibrium at the local midplane
+ * T and P, cached by radius and warm-started from the nearest radius already solved.
+ *
+ * <p>Below {@link #floorK()} the rock assemblage is frozen at its equilibrium at the floor (the
+ * species data and the rock-forming reactions are not followed to colder gas, where they would be
+ * kinetically inhibited anyway — common practice) and water ice is added from the saturation
+ * pressure of ice ({@link WaterIce}). Not thread-safe: use one instance per thread.
+ */
+public final class LocalCondensation {
+    private final ChemicalSystem system;
+    private final double[] totalsPerGram;
+    private final EquilibriumSolver solver;
+    private final double floorK;
+    private final int waterIndex;
+    private final TreeMap<Double, Local> cache = new TreeMap<>();
+    private final NavigableMap<Double, Local> reference;
+    private int solved;
+
+    /**
+     * The local state at one radius.
+     *
+     * @param state        the disk state
+     * @param equilibriumK temperature at which the equilibrium was computed [K]
+     * @param result       the equilibrium of one gram of gas
+     * @param iceMoles     moles of water ice per gram of gas
+     */
+    public record Local(DiskState state, double equilibriumK, EquilibriumResult result, double iceMoles) {
+    }
+
+    /**
+     * @param system        the chemical system
+     * @param totalsPerGram element totals of one gram of gas [mol/g], in the system's element order
+     * @param solver        the solver
+     * @param floorK        lowest equilibrium temperature [K]
+     */
+    public LocalCondensation(ChemicalSystem system, double[] totalsPerGram, EquilibriumSolver solver, double floorK) {
+        this(system, totalsPerGram, solver, floorK, java.util.Collections.emptyNavigableMap());
+    }
+
+    /**
+     * @param system        the chemical system
+     * @param totalsPerGram element totals of one gram of gas [mol/g], in the system's element order
+     * @param solver        the solver
+     * @param floorK        lowest equilibrium temperature [K]
+     * @param reference     states of another composition of the same system (see {@link #snapshot()}),
+     *                      used as warm starts until this instance has solved a radius of its own;
+     *                      results then do not depend on what was solved before on the same thread
+     */
+    public LocalCondensation(ChemicalSystem system, double[] totalsPerGram, EquilibriumSolver solver, double floorK,
+                             NavigableMap<Double, Local> reference) {
+        this.reference = reference;
+        this.system = system;
+        this.totalsPerGram = totalsPerGram.clone();
+        this.solver = solver;
+        this.floorK = floorK;
+        this.waterIndex = system.memberNames(0).indexOf("H2O");
+    }
+
+    /** @return the system */
+    public ChemicalSystem system() {
+        return system;
+    }
+
+    /** @return the floor temperature [K] */
+    public double floorK() {
+        return floorK;
+    }
+
+    /** @return number of equilibria solved so far */
+    public int equilibriaSolved() {
+        return solved;
+    }
+
+    /**
+     * @param s the disk state at r
+     * @return the local condensation (cached by r)
+     */
+    public Local at(DiskState s) {
+        Local hit = cache.get(s.rAU());
+        if (hit != null) {
+            return hit;
+        }
+        double tEq = Math.max(s.temperatureK(), floorK);
+        EquilibriumProblem pr = new EquilibriumProblem(system, tEq, s.pressureBar(), totalsPerGram);
+        Local near = nearest(s.rAU());
+        EquilibriumResult r = near == null ? solver.solve(pr) : solver.solve(pr, WarmStart.of(near.result()));
+        solved++;
+        double ice = 0;
+        if (s.temperatureK() < floorK && waterIndex >= 0) {
+            ice = WaterIce.condensedMoles(r.memberMoles(0, waterIndex), r.gasMoles(), s.temperatureK(), s.pressureBar());
+        }
+        Local l = new Local(s, tEq, r, ice);
+        cache.put(s.rAU(), l);
+        return l;
+    }
+
+    /** @return an unmodifiable copy of the states solved so far, by radius (a warm-start reference) */
+    public NavigableMap<Double, Local> snapshot() {
+        return java.util.Collections.unmodifiableNavigableMap(new TreeMap<>(cache));
+    }
+
+    private Local nearest(double r) {
+        NavigableMap<Double, Local> from = cache.isEmpty() ? reference : cache;
+        Map.Entry<Double, Local> lo = from.floorEntry(r);
+        Map.Entry<Double, Local> hi = from.ceilingEntry(r);
+        if (lo == null) {
+            return hi == null ? null : hi.getValue();
+        }
+        if (hi == null) {
+            return lo.getValue();
+        }
+        return r - lo.getKey() <= hi.getKey() - r ? lo.getValue() : hi.getValue();
+    }
+
+    /**
+     * @param l a local state
+     * @return a value that changes exactly where a condensed phase (or ice) appears or vanishes
+     */
+    public static Object signature(Local l) {
+        java.util.List<Integer> s = new java.util.ArrayList<>();
+        for (int p : l.result().presentCondensedPhases()) {
+            s.add(p);
+        }
+        s.add(l.iceMoles() > 0 ? -1 : -2);
+        return s;
+    }
+}

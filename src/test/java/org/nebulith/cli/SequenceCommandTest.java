@@ -1,0 +1,143 @@
+package org.nebulith.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.nebulith.composition.AbundancePresets;
+import org.nebulith.composition.ElementAbundances;
+import org.nebulith.condensation.CondensationSequence;
+import org.nebulith.condensation.ElementCondensation;
+import org.nebulith.condensation.PhaseEvent;
+import org.nebulith.condensation.PressurePath;
+import org.nebulith.condensation.SequenceRunner;
+import org.nebulith.condensation.SequenceSettings;
+import org.nebulith.condensation.SequenceStep;
+import org.nebulith.condensation.output.SequenceTables;
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.equilibrium.SystemSpec;
+import org.nebulith.thermo.Element;
+
+/** {@code nebulith sequence} end to end: the four CSVs read back against a library run of the same settings. */
+class SequenceCommandTest {
+    private static final String[] GRID = {"--T-max-K", "1700", "--T-min-K", "1300", "--T-step-K", "10", "--P-bar", "1e-4"};
+
+    @TempDir
+    static Path dir;
+    private static Path folder;
+    private static int exit;
+    private static CondensationSequence expected;
+    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+
+    @BeforeAll
+    static void runOnce() {
+        folder = dir.resolve("run");
+        String[] args = Stream.concat(Stream.of("sequence", "--out", folder.toString()), Stream.of(GRID)).toArray(String[]::new);
+        exit = Main.run(args, new PrintStream(new ByteArrayOutputStream()), new PrintStream(new ByteArrayOutputStream()));
+        ElementAbundances comp = AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances();
+        ChemicalSystem sys = SystemSpec.defaults().build(ChemistryOptions.elementsOf(comp));
+        double[] b = new double[sys.elementCount()];
+        for (int j = 0; j < b.length; j++) {
+            b[j] = comp.moles(sys.elements().get(j));
+        }
+        expected = new SequenceRunner(new EquilibriumSolver()).run(sys, b,
+                new SequenceSettings(PressurePath.constant(1e-4), 1700, 1300, 10, 0, 0.05));
+    }
+
+    private static List<CSVRecord> read(String name) throws IOException {
+        try (Reader r = Files.newBufferedReader(folder.resolve(name), StandardCharsets.UTF_8);
+             CSVParser p = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
+            return p.getRecords();
+        }
+    }
+
+    @Test
+    void writesTheFourTablesAndNotes() {
+        assertEquals(0, exit);
+        for (String f : List.of(SequenceTables.SEQUENCE, SequenceTables.FRACTIONS, SequenceTables.TEMPERATURES,
+                SequenceTables.APPEARANCE, "run-notes.md")) {
+            assertTrue(Files.isRegularFile(folder.resolve(f)), f);
+        }
+    }
+
+    @Test
+    void sequenceAndFractionsMatchTheRun() throws IOException {
+        List<CSVRecord> seq = read(SequenceTables.SEQUENCE);
+        List<CSVRecord> frac = read(SequenceTables.FRACTIONS);
+        assertEquals(expected.steps().size(), seq.size());
+        ChemicalSystem sys = expected.system();
+        int olivine = sys.phaseIndex("olivine");
+        double perSi = 1e6 / expected.inputTotals()[sys.elementIndex(Element.Si)];
+        for (int i = 0; i < seq.size(); i++) {
+            SequenceStep s = expected.steps().get(i);
+            assertEquals(s.temperatureK(), Double.parseDouble(seq.get(i).get("T_K")));
+            assertEquals(s.result().memberMoles(olivine, 0) * perSi,
+                    Double.parseDouble(seq.get(i).get("olivine.forsterite_per_1e6_Si")), 1e-9);
+            for (Element e : List.of(Element.Al, Element.Mg, Element.Fe)) {
+                assertEquals(s.condensedFraction(e),
+                        Double.parseDouble(frac.get(i).get(SequenceTables.fractionColumn(e))), 1e-12);
+            }
+        }
+    }
+
+    @Test
+    void temperaturesAndAppearanceMatchTheRun() throws IOException {
+        List<CSVRecord> t = read(SequenceTables.TEMPERATURES);
+        for (ElementCondensation ec : expected.condensationTemperatures()) {
+            CSVRecord r = t.stream().filter(x -> x.get("element").equals(ec.element().symbol())).findFirst().orElseThrow();
+            assertEquals(ec.t50K().isPresent() ? Double.toString(ec.t50K().getAsDouble()) : "",
+                    r.get("T50_K").isEmpty() ? "" : Double.toString(Double.parseDouble(r.get("T50_K"))));
+            assertEquals(ec.hostPhase(), r.get("host_phase"));
+            assertFalse(r.get("T_onset_K").contains("NaN"));
+        }
+        List<CSVRecord> a = read(SequenceTables.APPEARANCE);
+        assertEquals(expected.phaseEvents().size(), a.size());
+        for (int i = 0; i < a.size(); i++) {
+            PhaseEvent ev = expected.phaseEvents().get(i);
+            assertEquals(ev.phase(), a.get(i).get("phase"));
+            assertEquals(ev.appearK(), Double.parseDouble(a.get(i).get("T_appear_K")));
+            assertEquals(ev.disappearK().isPresent() ? ev.disappearK().getAsDouble() : -1,
+                    a.get(i).get("T_disappear_K").isEmpty() ? -1 : Double.parseDouble(a.get(i).get("T_disappear_K")));
+        }
+    }
+
+    @Test
+    void badPathFileExitsTwoNamingFileLineAndFieldAndWritesNothing() throws IOException {
+        Path path = dir.resolve("path.csv");
+        Files.writeString(path, "# demo path of an invented disk\nT_K,P_bar\n1600,1e-4\n1500,-3\n");
+        Path out = dir.resolve("bad-run");
+        int code = Main.run(new String[] {"sequence", "--path", path.toString(), "--out", out.toString()},
+                new PrintStream(new ByteArrayOutputStream()), new PrintStream(err, true, StandardCharsets.UTF_8));
+        String msg = err.toString(StandardCharsets.UTF_8).trim();
+        assertEquals(2, code, msg);
+        assertTrue(msg.contains("path.csv") && msg.contains("line 4") && msg.contains("P_bar"), msg);
+        assertEquals(1, msg.lines().count(), msg);
+        assertFalse(Files.exists(out));
+        try (Stream<Path> files = Files.list(dir)) {
+            assertTrue(files.noneMatch(f -> f.getFileName().toString().contains("bad-run")));
+        }
+    }
+
+    @Test
+    void existingFolderIsNotOverwrittenWithoutForce() {
+        String[] args = Stream.concat(Stream.of("sequence", "--out", folder.toString()), Stream.of(GRID)).toArray(String[]::new);
+        assertEquals(2, Main.run(args, new PrintStream(new ByteArrayOutputStream()), new PrintStream(err)));
+    }
+}

@@ -1,0 +1,143 @@
+package org.nebulith.report.html;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.TimeUnit;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.knowm.xchart.XYChart;
+import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.RunInputs;
+import org.nebulith.report.Table;
+import org.nebulith.report.chart.ChartFixtures;
+import org.nebulith.report.chart.ChartFormat;
+import org.nebulith.report.chart.ChartRenderer;
+
+/**
+ * A report with every chart kind, opened in headless Chromium: every image must decode and the
+ * page must raise no error and log nothing to the console. Skipped only when no Chromium binary
+ * is installed ({@code .ci/run} installs Debian's {@code chromium}).
+ */
+class HtmlReportChromiumTest {
+
+    private static final Pattern PROBE = Pattern.compile("data-probe=\"images=(\\d+);bad=(\\d+);errors=(\\d+)\"");
+
+    /** Injected into a copy of the report: counts errors from the start, checks images after load. */
+    private static final String PROBE_SCRIPT = "<script>var probeErrors=0;"
+            + "window.addEventListener('error',function(){probeErrors++;},true);"
+            + "window.addEventListener('load',function(){var im=document.images,bad=0;"
+            + "for(var i=0;i<im.length;i++){if(!(im[i].complete&&im[i].naturalWidth>0)){bad++;}}"
+            + "document.body.setAttribute('data-probe','images='+im.length+';bad='+bad+';errors='+probeErrors);"
+            + "});</script>";
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void reportLoadsInChromiumWithEveryImageDecodedAndNoErrors() throws Exception {
+        Optional<Path> chromium = findChromium();
+        Assumptions.assumeTrue(chromium.isPresent(), "no chromium binary on PATH");
+        Path target = dir.resolve("demo-run");
+        Path input = Files.writeString(dir.resolve("demo.settings"), "P-bar = 1e-4\n");
+        writeReport(target, new RunInputs().add(input, "preset"));
+
+        String html = Files.readString(target.resolve("report.html"));
+        assertFalse(html.contains("<script"), "the report itself has no script");
+        assertFalse(Pattern.compile("src=\"(?!data:)").matcher(html).find(), "every image is embedded");
+        assertTrue(html.contains(RunInputs.sha256(input)), "input checksum listed");
+        String probe = html.replace("<head>", "<head>\n" + PROBE_SCRIPT)
+                .replace("default-src 'none';", "default-src 'none'; script-src 'unsafe-inline';");
+        Path page = Files.writeString(dir.resolve("probe.html"), probe);
+
+        Result result = runChromium(chromium.get(), page);
+        Matcher m = PROBE.matcher(result.dom);
+        assertTrue(m.find(), "probe ran; chromium stderr:\n" + result.log);
+        assertEquals(6, Integer.parseInt(m.group(1)), "images in the page");
+        assertEquals(0, Integer.parseInt(m.group(2)), "images not decoded");
+        assertEquals(0, Integer.parseInt(m.group(3)), "errors raised in the page");
+        List<String> console = new ArrayList<>();
+        for (String line : result.log.split("\n")) {
+            if (line.contains(":CONSOLE")) {
+                console.add(line);
+            }
+        }
+        assertEquals(List.of(), console, "console messages");
+    }
+
+    private static void writeReport(final Path target, final RunInputs inputs) {
+        Report report = new Report("Keroa b (invented demo): bulk composition", "nebulith planet", "test",
+                Instant.parse("2026-01-01T00:00:00Z"));
+        try (RunFolder run = AtomicOutput.openRunFolder(target, false, inputs)) {
+            Report.Section charts = report.section("Charts");
+            for (Map.Entry<String, XYChart> e : ChartFixtures.all().entrySet()) {
+                ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(),
+                        EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
+                charts.chart(r, e.getKey().replace('-', ' ') + " (invented demo data)");
+            }
+            Table ratios = Table.withColumns("bulk-composition.csv", "zone", "quantity", "value", "unit")
+                    .row("Keroa b", "Mg_Si_molar", 1.02, "mol/mol").row("Keroa b", "core_mass_fraction", 0.31, "1");
+            report.section("Bulk composition").keyTable(ratios, "Key ratios <invented>").paragraph("A & B");
+            report.caution("Ideal solid solutions and no kinetics.").citation("demo", "invented data, no source")
+                    .inputs(inputs).setting("P-bar", "1e-4", "preset demo.settings:1").outputFile("bulk-composition.csv");
+            run.writeCsv("bulk-composition.csv", ratios);
+            report.finish(Instant.parse("2026-01-01T00:00:02.5Z"));
+            run.writeText("report.html", HtmlReportWriter.write(report));
+            run.writeText("summary.md", MarkdownSummaryWriter.write(report));
+            run.commit();
+        }
+    }
+
+    private record Result(String dom, String log) {
+    }
+
+    private Result runChromium(final Path chromium, final Path page) throws IOException, InterruptedException {
+        Path profile = Files.createDirectory(dir.resolve("profile"));
+        Path dom = dir.resolve("dom.html");
+        Path log = dir.resolve("chromium.log");
+        Process p = new ProcessBuilder(chromium.toString(), "--headless", "--no-sandbox", "--disable-gpu",
+                "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
+                "--disable-sync", "--disable-extensions", "--user-data-dir=" + profile, "--enable-logging=stderr",
+                "--v=0", "--virtual-time-budget=5000", "--dump-dom", page.toUri().toString())
+                .redirectOutput(dom.toFile()).redirectError(log.toFile()).start();
+        try {
+            assertTrue(p.waitFor(90, TimeUnit.SECONDS), "chromium finished");
+        } finally {
+            p.destroyForcibly();
+        }
+        return new Result(Files.readString(dom, StandardCharsets.UTF_8), Files.readString(log, StandardCharsets.UTF_8));
+    }
+
+    /** @return a Chromium binary on the PATH */
+    static Optional<Path> findChromium() {
+        String path = System.getenv("PATH");
+        if (path == null) {
+            return Optional.empty();
+        }
+        for (String name : List.of("chromium", "chromium-browser", "google-chrome")) {
+            for (String folder : path.split(java.io.File.pathSeparator)) {
+                Path candidate = Path.of(folder, name);
+                if (Files.isExecutable(candidate)) {
+                    return Optional.of(candidate);
+                }
+            }
+        }
+        return Optional.empty();
+    }
+}
