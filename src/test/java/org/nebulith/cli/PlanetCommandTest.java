@@ -26,6 +26,7 @@ import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.Quantity;
 import org.nebulith.planet.ZonePlanet;
+import org.nebulith.report.html.ChromiumProbe;
 import org.nebulith.zones.ZoneFileReader;
 
 /** {@code nebulith planet} in-process: outputs read back against the library's results, bad input. */
@@ -72,6 +73,13 @@ class PlanetCommandTest {
         for (Quantity q : zp.planet().require().quantities()) {
             // the CSV holds the shortest decimal that reads back to the same double
             assertEquals(q.value(), csv.get(q.name()), 0.0, q.name());
+        }
+        if (ChromiumProbe.chromium().isPresent()) {
+            ChromiumProbe.Result page = ChromiumProbe.open(outDir.resolve("report.html"), dir);
+            assertEquals(2, page.images(), "radial map and comparison chart");
+            assertEquals(0, page.bad(), "images not decoded");
+            assertEquals(0, page.errors(), "errors in the page");
+            assertEquals(List.of(), page.console(), "console messages");
         }
         List<CSVRecord> profile = read(outDir.resolve("radial-profile.csv"));
         assertEquals(12, profile.size());
