@@ -27,6 +27,7 @@ import picocli.CommandLine.Spec;
             PlanetCommand.class,
             SurveyCommand.class,
             SurveyBenchCommand.class,
+            BenchCommand.class,
             PresetsCommand.class,
             CompletionCommand.class,
             CommandLine.HelpCommand.class,

@@ -78,11 +78,11 @@ public final class PlanetCommand extends RunCommand {
     private boolean sulfideInMantle;
 
     @Option(names = "--core-Si-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "Si in the core [wt% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
+            description = "Si in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
     private double coreSi;
 
     @Option(names = "--core-O-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "O in the core [wt% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
+            description = "O in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
     private double coreO;
 
     @Option(names = "--floor-K", paramLabel = "T", defaultValue = "300",

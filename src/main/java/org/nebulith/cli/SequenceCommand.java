@@ -15,10 +15,11 @@ import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.PressurePathReader;
 import org.nebulith.condensation.SequenceRunner;
 import org.nebulith.condensation.SequenceSettings;
-import org.nebulith.condensation.output.SequenceCautions;
-import org.nebulith.condensation.output.SequenceCharts;
-import org.nebulith.condensation.output.SequenceNotes;
-import org.nebulith.condensation.output.SequenceTables;
+import org.nebulith.report.sequence.SequenceCautions;
+import org.nebulith.report.sequence.SequenceCharts;
+import org.nebulith.report.sequence.SequenceReport;
+import org.nebulith.report.sequence.SequenceNotes;
+import org.nebulith.report.sequence.SequenceTables;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.equilibrium.EquilibriumSolver;
@@ -113,17 +114,33 @@ public final class SequenceCommand extends RunCommand {
             run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
             run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
             run.writeCsv(SequenceTables.APPEARANCE, tables.phaseAppearance());
-            List<String> charts = SequenceCharts.write(run, seq, tables);
-            String chartsNote = charts.isEmpty() ? SequenceCharts.absenceNote() : "Charts: " + String.join(", ", charts);
+            SequenceCharts.Charts charts = SequenceCharts.write(run, seq, tables, describe(path));
+            String chartsNote = "Charts: " + String.join(", ", charts.files()) + "; report: report.html";
             run.writeText(SequenceNotes.FILE, SequenceNotes.text(seq, tables, new SequenceNotes.Context(
                     context.toolVersion(), context.started().toString(), elapsed, settingLines(context),
                     compositionLines(context), spec.describe(), describe(path), context.inputs(), cautions, chartsNote)));
+            SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
+                    context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
+                    reportSettings(context), cautions, sources(), context.inputs()));
             folder = run.commit();
         }
         printCautions(context, cautions);
         context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
                 + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
         return ExitCodes.OK;
+    }
+
+    private static List<org.nebulith.report.html.Report.Setting> reportSettings(RunContext context) {
+        List<org.nebulith.report.html.Report.Setting> out = new java.util.ArrayList<>();
+        context.settings().forEach(s -> out.add(new org.nebulith.report.html.Report.Setting(s.key(), s.value(), s.origin())));
+        return out;
+    }
+
+    private static List<org.nebulith.report.html.Report.Citation> sources() {
+        List<org.nebulith.report.html.Report.Citation> out = new java.util.ArrayList<>();
+        org.nebulith.thermo.SpeciesDatabase.bundled().sources().forEach((k, v) ->
+                out.add(new org.nebulith.report.html.Report.Citation(k, v)));
+        return out;
     }
 
     private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {

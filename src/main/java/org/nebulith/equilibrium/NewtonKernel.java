@@ -27,6 +27,13 @@ final class NewtonKernel {
     private final int m;
     private final SolverOptions opt;
     int iterations;
+    /**
+     * A gas species whose moles are below this fraction of the smallest total among its elements
+     * adds nothing measurable to the Jacobian (its entries would be 1e-22 of the diagonal), so only
+     * its residual contribution is kept: this skips most of the hundreds of trace gases per step.
+     */
+    private static final double NEGLIGIBLE = 1e-22;
+    private final double[] gasJacobianFloor;
     /** mole fractions (not normalised) of the mixture members from the latest evaluation */
     final double[][] lastX;
     double lastBalance;
@@ -39,6 +46,15 @@ final class NewtonKernel {
         this.m = sys.elementCount();
         this.opt = opt;
         this.lastX = new double[sys.phaseCount()][];
+        PhaseDef gas = sys.phase(0);
+        this.gasJacobianFloor = new double[gas.members.length];
+        for (int k = 0; k < gasJacobianFloor.length; k++) {
+            double bmin = Double.POSITIVE_INFINITY;
+            for (int j : gas.members[k].nzIndex) {
+                bmin = Math.min(bmin, totals[j]);
+            }
+            gasJacobianFloor[k] = NEGLIGIBLE * bmin;
+        }
     }
 
     /** Mole fraction of member k of phase p (not normalised). */
@@ -156,10 +172,11 @@ final class NewtonKernel {
             int[] idx = mem.nzIndex;
             double[] cnt = mem.nzCount;
             double invM = 1.0 / mem.multiplicity;
+            boolean negligible = p == 0 && nk < gasJacobianFloor[k];
             for (int a = 0; a < idx.length; a++) {
                 int j = idx[a];
                 r[j] += nk * cnt[a];
-                if (jac != null) {
+                if (jac != null && !negligible) {
                     double w = nk * cnt[a] * invM;
                     double[] rowj = jac[j];
                     for (int c = 0; c < idx.length; c++) {

@@ -1,7 +1,11 @@
 package org.nebulith.equilibrium;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Set;
+import java.util.TreeSet;
 
 /**
  * The phase-selection loop around {@link NewtonKernel}: drop the phase with the most negative
@@ -34,6 +38,7 @@ final class PhaseSelection {
     /** @return null on success, else what failed */
     String run(Iterate it) {
         Set<Integer> blocked = new HashSet<>();
+        Set<List<Integer>> settled = new HashSet<>();
         Set<String> visited = new HashSet<>();
         Iterate backup = null;
         int lastAdded = -1;
@@ -92,6 +97,14 @@ final class PhaseSelection {
             if (cand < 0) {
                 return null;
             }
+            if (!settled.add(situation(it, blocked))) {
+                // the Newton solution of an assemblage is unique: meeting it again with the same
+                // blocked candidates means the same choices and the same cycle would follow, so
+                // give up now rather than after maxPhaseChanges (the caller then takes a smaller
+                // continuation step, or starts cold)
+                return "phase selection cycles: the assemblage " + names(it) + " recurred with "
+                        + sys.phaseName(cand) + " supersaturated";
+            }
             backup = it.copy();
             if (sys.phaseKind(cand) == PhaseKind.SOLUTION) {
                 it.add(cand, NewtonKernel.START_LN);
@@ -106,8 +119,8 @@ final class PhaseSelection {
 
     private static String key(Iterate it) {
         int[] a = it.active.clone();
-        java.util.Arrays.sort(a);
-        return java.util.Arrays.toString(a);
+        Arrays.sort(a);
+        return Arrays.toString(a);
     }
 
     private static void restore(Iterate from, Iterate to) {
@@ -144,7 +157,7 @@ final class PhaseSelection {
             order[q] = q;
             sim[q] = cosine(target, dominantStoichiometry(backup.active[q], backup.lambda));
         }
-        java.util.Arrays.sort(order, (a, b) -> Double.compare(sim[b], sim[a]));
+        Arrays.sort(order, (a, b) -> Double.compare(sim[b], sim[a]));
         for (int i = 0; i < Math.min(3, order.length); i++) {
             if (sim[order[i]] <= 0) {
                 break;
@@ -319,6 +332,22 @@ final class PhaseSelection {
             norm += target[j] * target[j];
         }
         return res <= 1e-18 * norm ? rhs : null;
+    }
+
+    /**
+     * @return the active phases in ascending order, then -1, then the blocked candidates in
+     *         ascending order: what determines the next choices of the loop
+     */
+    private static List<Integer> situation(Iterate it, Set<Integer> blocked) {
+        int[] a = it.active.clone();
+        Arrays.sort(a);
+        List<Integer> key = new ArrayList<>(a.length + 1 + blocked.size());
+        for (int p : a) {
+            key.add(p);
+        }
+        key.add(-1);
+        key.addAll(new TreeSet<>(blocked));
+        return key;
     }
 
     private String names(Iterate it) {

@@ -146,7 +146,9 @@ public final class LocalSurvey {
         AtomicOutput.writeText(folder.resolve(NOTES), SurveyNotes.text(request, counter.stars, skipped, counter.failed),
                 true, inputs);
         Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        SurveyChart.write(partial, folder, inputs);
+        byte[] png = SurveyChart.write(partial, folder, inputs);
+        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed);
+        SurveyReport.write(folder, notes, png, folder.resolve(StarsTable.FILE), inputs);
         Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, survey);
     }

@@ -33,7 +33,8 @@ final class SurveyChart {
     private SurveyChart() {
     }
 
-    static void write(Path survey, Path folder, RunInputs inputs) throws IOException {
+    /** @return the PNG bytes of the chart, or null if there is nothing to draw */
+    static byte[] write(Path survey, Path folder, RunInputs inputs) throws IOException {
         List<SurveyScatter.Point> stars = new ArrayList<>();
         List<SurveyScatter.Point> planets = new ArrayList<>();
         Map<String, double[]> pending = new HashMap<>();
@@ -61,13 +62,14 @@ final class SurveyChart {
             flush(current, pending, stars, planets);
         }
         if (stars.isEmpty()) {
-            return;
+            return null;
         }
         XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
         AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
         AtomicOutput.writeFile(folder.resolve(BASE + ".svg"), out -> ChartRenderer.vector(chart, ChartFormat.SVG, out),
                 true, inputs);
+        return png;
     }
 
     private static void flush(String star, Map<String, double[]> zones, List<SurveyScatter.Point> stars,

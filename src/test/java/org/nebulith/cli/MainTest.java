@@ -128,13 +128,6 @@ class MainTest {
         assertTrue(out().contains("Exit codes:") && out().contains("3   numerical failure"), out());
     }
 
-    @ParameterizedTest
-    @ValueSource(strings = {"point"})
-    void placeholdersSayNotYetAvailable(final String command) {
-        assertEquals(2, run(command, "--T-K", "1400"));
-        assertTrue(err().contains("not yet available"), err());
-    }
-
     @Test
     void completionScriptCoversTheCommands() {
         assertEquals(0, run("completion"));

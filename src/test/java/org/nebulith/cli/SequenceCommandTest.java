@@ -29,7 +29,7 @@ import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.SequenceRunner;
 import org.nebulith.condensation.SequenceSettings;
 import org.nebulith.condensation.SequenceStep;
-import org.nebulith.condensation.output.SequenceTables;
+import org.nebulith.report.sequence.SequenceTables;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.SystemSpec;

@@ -85,12 +85,17 @@ class SurveyCommandTest {
     }
 
     @Test
-    void theRealCommandSaysItsPlanetEstimateIsNotWiredYet() {
-        // Until SurveyCommand.estimator is wired to the planet estimate; then this test changes.
-        assertEquals(2, run("survey", "--catalogue", "presets/demo-catalogue.csv", "--out", dir.resolve("r").toString()));
-        assertTrue(err().contains("not yet available"), err());
-        assertFalse(Files.exists(dir.resolve("r")));
-        assertEquals(2, run("bench-survey", "--stars", "2", "--draws", "2"));
-        assertTrue(err().contains("not yet available"), err());
+    void theRealCommandRunsThePlanetEstimateOnASmallCatalogue() throws Exception {
+        Path cat = dir.resolve("two-stars.csv");
+        Files.writeString(cat, "# two invented stars for a smoke test\n"
+                + "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err,Si_H,Si_H_err\n"
+                + "Smoke-A,0.1,0.05,0.05,0.04,0.08,0.04\n"
+                + "Smoke-B,-0.2,0.05,-0.15,0.04,-0.18,0.04\n");
+        assertEquals(0, run("survey", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3", "--threads", "2",
+                "--out", dir.resolve("r").toString()), err());
+        List<String> lines = Files.readAllLines(dir.resolve("r").resolve("survey.csv"));
+        assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws", lines.get(0));
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-B,earth-analogue,core_mass_fraction,")), lines.toString());
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-A,host,Mg_Si_molar,")), lines.toString());
     }
 }

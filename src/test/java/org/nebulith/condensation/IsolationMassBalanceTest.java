@@ -11,9 +11,9 @@ class IsolationMassBalanceTest {
 
     @Test
     void isolatedSolidsPlusRemainingGasEqualTheInput() {
-        // 2000 to 400 K: below about 350 K the solver stalls on the extreme fractional composition (see notes)
+        // the whole default range, 2000 to 300 K
         CondensationSequence seq = SequenceRuns.run(SequenceRuns.defaultData(), SequenceRuns.protosolar(), 1e-4,
-                2000, 400, 1);
+                2000, 300, 1);
         ChemicalSystem sys = seq.system();
         EquilibriumResult last = seq.steps().get(seq.steps().size() - 1).result();
         double[] in = seq.inputTotals();
@@ -37,9 +37,10 @@ class IsolationMassBalanceTest {
         for (int j = 0; j < in.length; j++) {
             String el = sys.elements().get(j).symbol();
             double rel = Math.abs(sum[j] + gas[j] - in[j]) / in[j];
-            // rules: every element conserved to 1e-10 relative (the floor adds at most steps x 1e-20)
+            // rules: every element conserved to 1e-10 relative, floor additions included (they are at most
+            // steps x 1e-14 of the input and are recorded)
             assertTrue(rel < 1e-10, el + ": relative imbalance " + rel);
-            assertTrue(floor[j] / in[j] < 1e-15, el + ": floor added " + floor[j] / in[j]);
+            assertTrue(floor[j] / in[j] < 1e-10, el + ": floor added " + floor[j] / in[j]);
         }
         assertTrue(seq.finalIsolatedMoles(sys.phaseIndex("corundum"), 0) > 0, "corundum was isolated");
     }

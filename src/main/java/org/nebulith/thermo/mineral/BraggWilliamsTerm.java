@@ -121,16 +121,12 @@ public final class BraggWilliamsTerm implements TransitionTerm {
         return bestP;
     }
 
+    /** Root of the slope in u = ln p inside a sign-changing bracket (Brent's method, to 1e-15). */
     private double bisect(double lo, double hi, double tK) {
-        for (int it = 0; it < 200 && hi - lo > 1e-15 * Math.max(1.0, Math.abs(lo)); it++) {
-            double mid = 0.5 * (lo + hi);
-            if (slope(Math.exp(mid), tK) < 0) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return Math.exp(0.5 * (lo + hi));
+        org.apache.commons.math3.analysis.solvers.BrentSolver brent =
+                new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-15, 1e-15);
+        double u = brent.solve(200, x -> slope(Math.exp(x), tK), lo, hi);
+        return Math.exp(u);
     }
 
     @Override

@@ -4,4 +4,4 @@
  * sources and cautions, and the hook for charts. Data flows one way: from
  * {@link org.nebulith.condensation.CondensationSequence} to {@link org.nebulith.report.Table}s.
  */
-package org.nebulith.condensation.output;
+package org.nebulith.report.sequence;

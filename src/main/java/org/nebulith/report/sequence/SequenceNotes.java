@@ -1,4 +1,4 @@
-package org.nebulith.condensation.output;
+package org.nebulith.report.sequence;
 
 import java.util.List;
 import java.util.Locale;
@@ -118,7 +118,7 @@ public final class SequenceNotes {
             for (int j = 0; j < add.length; j++) {
                 floor = Math.max(floor, add[j] / in[j]);
             }
-            b.append("- Largest amount added to keep a reacting total at 1e-20 of its input, relative to the input: ")
+            b.append("- Largest amount added to keep a reacting total at " + sci(org.nebulith.condensation.SequenceRunner.REACTING_FLOOR) + " of its input, relative to the input: ")
                     .append(sci(floor)).append('\n');
         }
     }

@@ -1,4 +1,4 @@
-package org.nebulith.condensation.output;
+package org.nebulith.report.sequence;
 
 import java.util.ArrayList;
 import java.util.LinkedHashSet;

@@ -1,0 +1,109 @@
+package org.nebulith.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.nebulith.composition.AbundancePresets;
+import org.nebulith.disk.DiskModel;
+import org.nebulith.disk.DiskPresets;
+import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.planet.FormationSettings;
+import org.nebulith.planet.PlanetFormation;
+import org.nebulith.planet.Quantity;
+import org.nebulith.planet.ZonePlanet;
+import org.nebulith.report.html.ChromiumProbe;
+import org.nebulith.zones.ZoneFileReader;
+
+/** {@code nebulith planet} in-process: outputs read back against the library's results, bad input. */
+class PlanetCommandTest {
+    @TempDir
+    Path dir;
+    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
+    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+
+    private int run(String... args) {
+        out.reset();
+        err.reset();
+        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+    }
+
+    private static List<CSVRecord> read(Path f) throws Exception {
+        try (Reader r = Files.newBufferedReader(f)) {
+            return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r).getRecords();
+        }
+    }
+
+    @Test
+    void bulkCompositionCsvMatchesTheLibraryResult() throws Exception {
+        Path zones = dir.resolve("one.csv");
+        Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nwarm,tophat,1.5,0.1\n");
+        Path outDir = dir.resolve("run");
+        assertEquals(0, run("--quiet", "planet", "--composition", "protosolar-lodders2003", "--zones", zones.toString(),
+                "--profile-points", "12", "--out", outDir.toString()), err.toString(StandardCharsets.UTF_8));
+        for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
+                "report.html", "summary.md", "radial-map.png", "radial-map.svg", "radial-map.pdf",
+                "planet-comparison.png")) {
+            assertTrue(Files.size(outDir.resolve(f)) > 0, f);
+        }
+        Map<String, Double> csv = new HashMap<>();
+        for (CSVRecord r : read(outDir.resolve("bulk-composition.csv"))) {
+            assertEquals("warm", r.get("zone"));
+            csv.put(r.get("quantity"), Double.parseDouble(r.get("value")));
+        }
+        DiskModel disk = DiskPresets.preset(DiskPresets.STEADY_VISCOUS_DEFAULT);
+        ZonePlanet zp = new PlanetFormation(FormationSettings.defaults(), new EquilibriumSolver())
+                .run(AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances(), disk,
+                        ZoneFileReader.read(Files.newBufferedReader(zones), zones.toString(), disk)).planets().get(0);
+        for (Quantity q : zp.planet().require().quantities()) {
+            // the CSV holds the shortest decimal that reads back to the same double
+            assertEquals(q.value(), csv.get(q.name()), 0.0, q.name());
+        }
+        if (ChromiumProbe.chromium().isPresent()) {
+            ChromiumProbe.Result page = ChromiumProbe.open(outDir.resolve("report.html"), dir);
+            assertEquals(2, page.images(), "radial map and comparison chart");
+            assertEquals(0, page.bad(), "images not decoded");
+            assertEquals(0, page.errors(), "errors in the page");
+            assertEquals(List.of(), page.console(), "console messages");
+        }
+        List<CSVRecord> profile = read(outDir.resolve("radial-profile.csv"));
+        assertEquals(12, profile.size());
+        assertFalse(Files.readString(outDir.resolve("radial-profile.csv")).contains("NaN"));
+    }
+
+    @Test
+    void zoneOutsideTheDiskIsBadInputAndWritesNothing() throws Exception {
+        Path zones = dir.resolve("far.csv");
+        Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nfar,tophat,80,1\n");
+        Path outDir = dir.resolve("run");
+        assertEquals(2, run("planet", "--zones", zones.toString(), "--out", outDir.toString()));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("far.csv:2") && e.contains("r_center_AU"), e);
+        assertEquals(1, e.strip().lines().count(), e);
+        assertFalse(Files.exists(outDir));
+    }
+
+    @Test
+    void negativeWidthIsBadInput() throws Exception {
+        Path zones = dir.resolve("neg.csv");
+        Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nneg,gaussian,1.0,-0.1\n");
+        assertEquals(2, run("planet", "--zones", zones.toString(), "--out", dir.resolve("run").toString()));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("half_width_AU"), err.toString(StandardCharsets.UTF_8));
+        assertFalse(Files.exists(dir.resolve("run")));
+    }
+}

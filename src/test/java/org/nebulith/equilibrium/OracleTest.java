@@ -1,0 +1,102 @@
+package org.nebulith.equilibrium;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * All 30 fixed-T,P cases of the oracle (source: NASA CEA, Gordon &amp; McBride 1994, NASA RP-1311,
+ * as packaged in Debian rocketcea 1.1.18, with the NASA Glenn data it ships; see
+ * {@code src/test/resources/oracle/README.md}): with the same species lists, data set {@code nasa}
+ * and no solutions, the condensed phases present are the same, and every condensed amount and every
+ * gas with mole fraction above 1e-15 agrees with CEA's polished mole numbers to 1e-6 relative.
+ */
+class OracleTest {
+    /** Relative agreement required with {@code moles_polished}. */
+    static final double REL_TOL = 1e-6;
+    /** Gases below this mole fraction are not compared (CEA's own trace limit is far below). */
+    static final double TRACE = 1e-15;
+
+    private static final Map<Set<String>, ChemicalSystem> SYSTEMS = new HashMap<>();
+    private static double worst;
+    private static String worstAt = "";
+
+    static List<OracleCases.Case> cases() {
+        return OracleCases.all();
+    }
+
+    static synchronized ChemicalSystem system(OracleCases.Case c) {
+        return SYSTEMS.computeIfAbsent(Set.of(c.gasList(), c.condensedList()),
+                k -> c.spec().build(c.amounts().keySet()));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("cases")
+    void reproducesTheOracle(OracleCases.Case c) {
+        assertEquals(30, cases().size(), "the oracle has 30 cases");
+        ChemicalSystem sys = system(c);
+        EquilibriumResult r = new EquilibriumSolver().solve(EquilibriumProblem.of(sys, c.tK(), c.pBar(), c.amounts()));
+        assertNull(ResultChecks.check(r), "a posteriori checks");
+
+        assertEquals(c.present(), new TreeSet<>(r.presentPhaseNames()), c.id() + ": condensed phases present");
+
+        List<String> gasNames = sys.memberNames(0);
+        Map<String, Integer> gasIndex = new HashMap<>();
+        for (int i = 0; i < gasNames.size(); i++) {
+            gasIndex.put(gasNames.get(i), i);
+        }
+        assertEquals(OracleCases.ids(c.gasList()).size(), gasNames.size(), "every listed gas is in the system");
+
+        List<String> bad = new ArrayList<>();
+        int compared = 0;
+        for (OracleCases.Expected e : c.expected()) {
+            double ours;
+            if (e.gas()) {
+                if (!(e.moleFraction() > TRACE)) {
+                    continue;
+                }
+                Integer i = gasIndex.get(e.species());
+                assertTrue(i != null, "gas " + e.species() + " missing from the system");
+                ours = r.memberMoles(0, i);
+            } else {
+                if (e.moles() == 0) {
+                    continue; // absent: covered by the phase-set comparison
+                }
+                int p = sys.phaseIndex(e.species());
+                assertTrue(p > 0, "condensed " + e.species() + " missing from the system");
+                ours = r.phaseMoles(p);
+            }
+            compared++;
+            double rel = Math.abs(ours - e.moles()) / e.moles();
+            record(rel, c.id() + " " + e.species());
+            if (!(rel <= REL_TOL)) {
+                bad.add(String.format("%s: ours %.10e, CEA polished %.10e (rel %.2e)", e.species(), ours, e.moles(), rel));
+            }
+        }
+        assertTrue(compared > 10, "compared " + compared + " amounts");
+        assertTrue(bad.isEmpty(), c.id() + ": " + bad);
+    }
+
+    private static synchronized void record(double rel, String where) {
+        if (rel > worst) {
+            worst = rel;
+            worstAt = where;
+        }
+    }
+
+    @AfterAll
+    static void summary() {
+        System.out.printf("oracle: largest relative difference %.2e (%s)%n", worst, worstAt);
+    }
+}
