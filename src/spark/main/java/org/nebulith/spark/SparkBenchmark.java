@@ -27,8 +27,10 @@ import org.nebulith.survey.SurveySettings;
  * in Spark {@code local[N]} ({@link SparkSurvey}, results brought back to the driver), with the real
  * planet estimate, default disk and zone. The stars are the demo catalogue's invented stars,
  * repeated under new names ({@code NDC Alder #2}, ...) up to {@code --stars}. Both runs are warmed
- * up first (JIT, Spark classes); the Spark session's start-up is timed apart. Prints both
- * throughputs, the overhead ratio, and whether both gave the same bytes.
+ * up first (JIT, Spark classes); the Spark session's start-up is timed apart. With {@code --rounds R}
+ * both run R times, alternating which goes first (this machine is shared, so drift in its load
+ * cancels). Prints both throughputs (wall and CPU), the overhead ratio, and whether both gave the
+ * same bytes.
  *
  * <p>Run: {@code java <spark flags> -cp nebulith-spark.jar:<spark jars> org.nebulith.spark.SparkBenchmark
  * --stars 40 --draws 50} (see src/spark/README.md).
@@ -48,6 +50,7 @@ public final class SparkBenchmark {
         int cores = 2;
         Integer partitions = null;
         long seed = 7;
+        int rounds = 1;
         for (int i = 0; i + 1 < args.length; i += 2) {
             switch (args[i]) {
                 case "--stars": stars = Integer.parseInt(args[i + 1]); break;
@@ -55,8 +58,9 @@ public final class SparkBenchmark {
                 case "--cores": cores = Integer.parseInt(args[i + 1]); break;
                 case "--partitions": partitions = Integer.valueOf(args[i + 1]); break;
                 case "--seed": seed = Long.parseLong(args[i + 1]); break;
+                case "--rounds": rounds = Integer.parseInt(args[i + 1]); break;
                 default: throw new IllegalArgumentException("unknown option " + args[i]
-                        + "; accepted: --stars --draws --cores --partitions --seed");
+                        + "; accepted: --stars --draws --cores --partitions --seed --rounds");
             }
         }
         SurveySettings settings = new SurveySettings(draws, seed, SolarReference.ASPLUND2009, null, null);
@@ -75,10 +79,6 @@ public final class SparkBenchmark {
         warmUp(rows, cores);
 
         t = System.nanoTime();
-        List<String> local = local(rows, settings, cores);
-        double localSeconds = seconds(t);
-
-        t = System.nanoTime();
         SparkSession spark = SparkSessions.local(cores);
         spark.sparkContext().setLogLevel("WARN");
         double sessionSeconds = seconds(t);
@@ -86,20 +86,53 @@ public final class SparkBenchmark {
         List<GridTask> warm = new SurveyGrid(List.of(), List.of()).tasks(rows.subList(0, Math.min(2, rows.size())));
         SparkSurvey.results(jsc, warm, new SurveySettings(2, seed, SolarReference.ASPLUND2009, null, null),
                 EstimatorFactory.PLANET, warm.size()).collect();
-        t = System.nanoTime();
-        List<String> distributed = SparkSurvey.results(jsc, tasks, settings, EstimatorFactory.PLANET, parts)
-                .map(r -> r.ok() ? r.block() : "FAILED " + r.failure()).collect();
-        double sparkSeconds = seconds(t);
-        spark.stop();
+        System.out.printf(Locale.ROOT, "Spark session start: %.1f s (not included below)%n", sessionSeconds);
 
-        System.out.printf(Locale.ROOT, "local survey, %d threads:        %8.1f s  %8.1f draws/s  %7.1f draws/s/core%n",
-                cores, localSeconds, work / localSeconds, work / localSeconds / cores);
+        double[] wall = new double[2];
+        double[] cpu = new double[2];
+        List<Double> ratios = new ArrayList<>();
+        boolean same = true;
+        for (int round = 0; round < rounds; round++) {
+            double[] w = new double[2];
+            double[] c = new double[2];
+            List<String> local = null;
+            List<String> distributed = null;
+            for (int k = 0; k < 2; k++) {
+                boolean sparkTurn = (k == 1) == (round % 2 == 0);
+                long t0 = System.nanoTime();
+                long c0 = processCpu();
+                if (sparkTurn) {
+                    distributed = SparkSurvey.results(jsc, tasks, settings, EstimatorFactory.PLANET, parts)
+                            .map(r -> r.ok() ? r.block() : "FAILED " + r.failure()).collect();
+                } else {
+                    local = local(rows, settings, cores);
+                }
+                int slot = sparkTurn ? 1 : 0;
+                w[slot] = seconds(t0);
+                c[slot] = (processCpu() - c0) / 1e9;
+            }
+            same &= local.equals(distributed);
+            System.out.printf(Locale.ROOT, "round %d (%s first): local %.1f s wall, %.1f s CPU; Spark %.1f s wall,"
+                    + " %.1f s CPU; wall ratio %.3f; load %s%n", round + 1, round % 2 == 0 ? "local" : "Spark", w[0], c[0],
+                    w[1], c[1], w[1] / w[0], loadAverage());
+            ratios.add(w[1] / w[0]);
+            for (int k = 0; k < 2; k++) {
+                wall[k] += w[k];
+                cpu[k] += c[k];
+            }
+        }
+        spark.stop();
+        long total = work * rounds;
+        System.out.printf(Locale.ROOT, "local survey, %d threads:        %8.1f s  %8.1f draws/s  %7.1f draws/s/core"
+                + "  (%.1f draws per CPU second)%n", cores, wall[0], total / wall[0], total / wall[0] / cores, total / cpu[0]);
         System.out.printf(Locale.ROOT, "Spark local[%d], %d partitions: %8.1f s  %8.1f draws/s  %7.1f draws/s/core"
-                + "  (session start %.1f s, not included)%n", cores, parts, sparkSeconds, work / sparkSeconds,
-                work / sparkSeconds / cores, sessionSeconds);
-        System.out.printf(Locale.ROOT, "Spark overhead: %+.1f %% (time ratio %.3f; target < 30 %% on a survey of >= 60 s)%n",
-                100 * (sparkSeconds / localSeconds - 1), sparkSeconds / localSeconds);
-        System.out.println("same bytes in both: " + (local.equals(distributed) ? "yes" : "NO"));
+                + "  (%.1f draws per CPU second)%n", cores, parts, wall[1], total / wall[1], total / wall[1] / cores,
+                total / cpu[1]);
+        java.util.Collections.sort(ratios);
+        System.out.printf(Locale.ROOT, "Spark overhead: wall %+.1f %% (summed time ratio %.3f, median of rounds %.3f);"
+                + " CPU %+.1f %%; target < 30 %% on a survey of >= 60 s%n", 100 * (wall[1] / wall[0] - 1),
+                wall[1] / wall[0], ratios.get(ratios.size() / 2), 100 * (cpu[1] / cpu[0] - 1));
+        System.out.println("same bytes in both: " + (same ? "yes" : "NO"));
         System.out.println("load average after: " + loadAverage());
     }
 
@@ -157,6 +190,12 @@ public final class SparkBenchmark {
         } finally {
             Files.deleteIfExists(file);
         }
+    }
+
+    /** @return CPU time of the whole process [ns] (all threads, Spark's own included) */
+    private static long processCpu() {
+        java.lang.management.OperatingSystemMXBean os = java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        return os instanceof com.sun.management.OperatingSystemMXBean sun ? sun.getProcessCpuTime() : 0;
     }
 
     private static double seconds(long start) {
