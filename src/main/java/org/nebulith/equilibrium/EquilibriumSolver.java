@@ -66,7 +66,9 @@ public final class EquilibriumSolver {
         }
         StateData st = new StateData(problem);
         Iterate it = adapt(start.iterate.copy(), st);
-        Attempt a = attempt(problem, st, it);
+        boolean sameTotals = java.util.Arrays.equals(start.fromTotals, problem.totals());
+        Attempt a = attempt(problem, st, it, sameTotals ? PhaseSelection.ITERATION_BUDGET
+                : PhaseSelection.OTHER_COMPOSITION_BUDGET);
         if (a.result != null) {
             return a.result;
         }
@@ -120,9 +122,13 @@ public final class EquilibriumSolver {
     }
 
     private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it) {
+        return attempt(problem, st, it, PhaseSelection.ITERATION_BUDGET);
+    }
+
+    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it, int budget) {
         Attempt a = new Attempt();
         NewtonKernel kernel = new NewtonKernel(st, problem.totals(), options);
-        PhaseSelection sel = new PhaseSelection(st, kernel, options);
+        PhaseSelection sel = new PhaseSelection(st, kernel, options).withBudget(budget);
         String failure = sel.run(it);
         a.iterations = kernel.iterations;
         a.iterate = it;

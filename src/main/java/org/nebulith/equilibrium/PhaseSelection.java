@@ -24,9 +24,22 @@ final class PhaseSelection {
      * small steps, which costs less than a long search from a distant start.
      */
     static final int ITERATION_BUDGET = 300;
+    /**
+     * Budget of a warm start from another composition: a long search there is a sign that the
+     * assemblage changes a lot, which a continuation in composition handles in easier steps.
+     */
+    static final int OTHER_COMPOSITION_BUDGET = 60;
     /** smallest affinity per atom of an absent available phase at the end of the last scan [RT] */
     double minAffinity;
     String minAffinityPhase = "";
+
+    private int budget = ITERATION_BUDGET;
+
+    /** @param iterations the Newton-iteration budget of this attempt @return this */
+    PhaseSelection withBudget(int iterations) {
+        this.budget = iterations;
+        return this;
+    }
 
     PhaseSelection(StateData st, NewtonKernel kernel, SolverOptions opt) {
         this.st = st;
@@ -43,8 +56,8 @@ final class PhaseSelection {
         Iterate backup = null;
         int lastAdded = -1;
         while (changes <= opt.maxPhaseChanges()) {
-            if (kernel.iterations > ITERATION_BUDGET) {
-                return "phase selection used more than " + ITERATION_BUDGET + " Newton iterations (phases "
+            if (kernel.iterations > budget) {
+                return "phase selection used more than " + budget + " Newton iterations (phases "
                         + names(it) + ")";
             }
             if (!visited.add(key(it)) && lastAdded >= 0 && backup != null) {

@@ -15,9 +15,9 @@ public record SolverOptions(double balanceTolerance, double potentialTolerance, 
                             int maxNewtonIterations, int maxPhaseChanges, double maxPotentialStep,
                             double coldStartTK) {
 
-    /** @return defaults: balance 1e-12, potentials 1e-10, affinity 1e-8, 60 iterations, 200 changes */
+    /** @return defaults: balance 1e-12, potentials 1e-10, affinity 1e-8, 30 iterations, 200 changes */
     public static SolverOptions defaults() {
-        return new SolverOptions(1e-12, 1e-10, 1e-8, 60, 200, 4.0, 4500.0);
+        return new SolverOptions(1e-12, 1e-10, 1e-8, 30, 200, 4.0, 4500.0);
     }
 
     public SolverOptions {

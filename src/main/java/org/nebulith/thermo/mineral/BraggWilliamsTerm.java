@@ -26,6 +26,11 @@ public final class BraggWilliamsTerm implements TransitionTerm {
     private final double n;
     private final double f;
     private volatile Solution last = new Solution(Double.NaN, 1.0);
+    /** ln p of the global minimum every TABLE_STEP kelvin from TABLE_T0, built on first use. */
+    private volatile double[] table;
+    private static final double TABLE_T0 = 150;
+    private static final double TABLE_STEP = 2;
+    private static final int TABLE_SIZE = 1301;
 
     private record Solution(double tK, double p) {
     }
@@ -90,9 +95,61 @@ public final class BraggWilliamsTerm implements TransitionTerm {
         if (s.tK() == tK) {
             return s.p();
         }
-        double p = solve(tK);
+        double p = fromTable(tK);
         last = new Solution(tK, p);
         return p;
+    }
+
+    /**
+     * The root from the tabulated global minimum at the neighbouring table temperatures, polished by
+     * Newton's method; the full bracketing scan where the table's neighbours lie on different
+     * branches (a first-order change of Q between them) or outside the table. A pure function of T.
+     */
+    private double fromTable(double tK) {
+        double x = (tK - TABLE_T0) / TABLE_STEP;
+        int i = (int) Math.floor(x);
+        if (!(i >= 0 && i + 1 < TABLE_SIZE)) {
+            return solve(tK);
+        }
+        double[] lnp = table();
+        double a = lnp[i];
+        double b = lnp[i + 1];
+        if (Math.abs(a - b) > 0.5) {
+            return solve(tK);
+        }
+        double u = a + (x - i) * (b - a);
+        for (int it = 0; it < 30; it++) {
+            double p = Math.exp(u);
+            double g = slope(p, tK);
+            double dgdu = p * slopeDerivative(p, tK);
+            if (!(dgdu > 0)) {
+                return solve(tK);
+            }
+            double step = g / dgdu;
+            u -= Math.max(-1.0, Math.min(1.0, step));
+            if (Math.abs(step) < 1e-14 * Math.max(1.0, Math.abs(u))) {
+                return Math.exp(u);
+            }
+        }
+        return solve(tK);
+    }
+
+    /** d(slope)/dp. */
+    private double slopeDerivative(double p, double tK) {
+        double d = 2 / p + n / (1 + n - n * p) + 1 / (n + 1 - p);
+        return R * tK * n / (n + 1) * f * d - 2 * w;
+    }
+
+    private double[] table() {
+        double[] t = table;
+        if (t == null) {
+            t = new double[TABLE_SIZE];
+            for (int k = 0; k < TABLE_SIZE; k++) {
+                t[k] = Math.log(solve(TABLE_T0 + k * TABLE_STEP));
+            }
+            table = t;
+        }
+        return t;
     }
 
     private double solve(double tK) {
