@@ -1,12 +1,12 @@
 package org.nebulith.composition;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 
+import org.nebulith.format.HeaderedLines;
 import org.nebulith.thermo.Element;
 
 /**
@@ -32,29 +32,11 @@ public final class AbundanceFileReader {
     public static AbundanceSet read(Reader in, String name) throws IOException {
         List<String> provenance = new ArrayList<>();
         EnumMap<Element, Double> amounts = new EnumMap<>(Element.class);
-        AbundanceUnit unit = null;
-        boolean headerSeen = false;
-        try (BufferedReader br = new BufferedReader(in)) {
-            int lineNo = 0;
-            for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
-                lineNo++;
-                String line = raw.strip();
-                if (line.isEmpty()) {
-                    continue;
-                }
-                if (line.startsWith("#")) {
-                    provenance.add(line.substring(1).strip());
-                } else if (!headerSeen) {
-                    if (!line.equals(HEADER)) {
-                        throw new AbundanceFormatException(name, lineNo, "header",
-                                "expected exactly '" + HEADER + "', found '" + line + "'");
-                    }
-                    headerSeen = true;
-                } else {
-                    unit = readRow(line, lineNo, name, unit, amounts);
-                }
-            }
-        }
+        AbundanceUnit[] unit = new AbundanceUnit[1];
+        boolean headerSeen = HeaderedLines.read(in, HEADER, provenance,
+                (line, lineNo) -> new AbundanceFormatException(name, lineNo, "header",
+                        "expected exactly '" + HEADER + "', found '" + line + "'"),
+                (line, lineNo) -> unit[0] = readRow(line, lineNo, name, unit[0], amounts));
         if (!headerSeen || amounts.isEmpty()) {
             throw new AbundanceFormatException(name, 0, "element",
                     "no data rows; expected header '" + HEADER + "' and one row per element");

@@ -1,6 +1,5 @@
 package org.nebulith.disk;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.util.ArrayList;
@@ -8,6 +7,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+
+import org.nebulith.format.HeaderedLines;
 
 /**
  * Reads a parametric disk file: {@code #} comment lines (provenance), the header
@@ -55,27 +56,9 @@ public final class DiskParameterReader {
     }
 
     private void load(Reader in) throws IOException {
-        boolean header = false;
-        try (BufferedReader br = new BufferedReader(in)) {
-            int lineNo = 0;
-            for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
-                lineNo++;
-                String line = raw.strip();
-                if (line.isEmpty()) {
-                    continue;
-                }
-                if (line.startsWith("#")) {
-                    comments.add(line.substring(1).strip());
-                } else if (!header) {
-                    if (!line.equals(HEADER)) {
-                        throw new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER);
-                    }
-                    header = true;
-                } else {
-                    addEntry(line, lineNo);
-                }
-            }
-        }
+        boolean header = HeaderedLines.read(in, HEADER, comments,
+                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER),
+                this::addEntry);
         if (!header) {
             throw new DiskFormatException(name, 0, "header", "no header line", HEADER + " then key,value rows");
         }

@@ -1,10 +1,11 @@
 package org.nebulith.disk;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.util.ArrayList;
 import java.util.List;
+
+import org.nebulith.format.HeaderedLines;
 
 /**
  * Reads a tabulated disk: optional {@code #} comment lines, the header
@@ -29,32 +30,16 @@ public final class TabulatedDiskReader {
     public static TabulatedDisk read(Reader in, String name) throws IOException {
         List<double[]> rows = new ArrayList<>();
         List<String> comments = new ArrayList<>();
-        boolean header = false;
-        try (BufferedReader br = new BufferedReader(in)) {
-            int lineNo = 0;
-            for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
-                lineNo++;
-                String line = raw.strip();
-                if (line.isEmpty()) {
-                    continue;
-                }
-                if (line.startsWith("#")) {
-                    comments.add(line.substring(1).strip());
-                } else if (!header) {
-                    if (!line.equals(HEADER)) {
-                        throw new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER);
-                    }
-                    header = true;
-                } else {
+        HeaderedLines.read(in, HEADER, comments,
+                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER),
+                (line, lineNo) -> {
                     double[] row = parseRow(line, lineNo, name);
                     if (!rows.isEmpty() && !(row[0] > rows.get(rows.size() - 1)[0])) {
                         throw new DiskFormatException(name, lineNo, "r_AU", "radius " + row[0]
                                 + " AU does not increase on the previous row", "rows in strictly increasing r_AU");
                     }
                     rows.add(row);
-                }
-            }
-        }
+                });
         if (rows.size() < 2) {
             throw new DiskFormatException(name, 0, "r_AU", rows.size() + " data rows", "header " + HEADER
                     + " and at least 2 rows");
