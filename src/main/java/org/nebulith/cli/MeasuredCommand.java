@@ -196,9 +196,6 @@ public final class MeasuredCommand extends RunCommand {
             throw InputException.atField(planetsFile, p.line(), "star", "unknown star '" + p.star() + "'",
                     "a star of " + catalogue);
         }
-        if (p.aAU().isPresent() && disk == null && zones == null) {
-            return;
-        }
         double largest;
         try {
             largest = test.largestRadius(p);

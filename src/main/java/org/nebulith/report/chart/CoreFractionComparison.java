@@ -3,6 +3,7 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
@@ -51,6 +52,7 @@ public record CoreFractionComparison(List<Point> planets) {
         chart.getStyler().setYAxisDecimalPattern("0.0");
         XYSeries one = chart.addSeries("1:1", new double[] {0, 1}, new double[] {0, 1});
         ChartStyle.line(one, 7);
+        one.setLineColor(Palette.REFERENCE);
         int n = planets.size();
         double[] x = new double[n];
         double[] y = new double[n];
@@ -71,6 +73,10 @@ public record CoreFractionComparison(List<Point> planets) {
         ErrorBars.vertical(chart, "measured range", x, y, yl, yh, Palette.colour(0));
         XYSeries s = chart.addSeries("planets", x, y);
         ChartStyle.points(s, 0);
+        for (Point p : planets) {
+            chart.addAnnotation(new AnnotationText(p.label(), Math.min(0.9, p.predicted() + 0.02), p.measured() + 0.03,
+                    false));
+        }
         return chart;
     }
 }

@@ -3,6 +3,7 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
@@ -78,6 +79,9 @@ public record MassRadiusChart(double[] massMearth, List<Curve> curves, List<Plan
             ErrorBars.vertical(chart, "radius errors", x, y, yl, yh, Palette.REFERENCE);
             XYSeries s = chart.addSeries("measured planets", x, y);
             ChartStyle.points(s, 6);
+            for (Planet p : planets) {
+                chart.addAnnotation(new AnnotationText(p.label(), p.mass(), p.radius() + p.radiusErr() + 0.04, false));
+            }
         }
         return chart;
     }

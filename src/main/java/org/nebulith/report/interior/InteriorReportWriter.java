@@ -167,6 +167,8 @@ public final class InteriorReportWriter {
                 + "than iron, %.0f %% lighter than rock.", v.planet().planet(), v.planet().star(), v.measured().median(),
                 v.measured().p16(), v.measured().p84(), v.predicted()[0], v.predicted()[1], v.predicted()[2],
                 v.differenceSigma(), v.agreement(), 100 * v.measured().denserThanIron(),
-                100 * v.measured().lighterThanRock());
+                100 * v.measured().lighterThanRock()) + (v.measured().denserThanIron() + v.measured().lighterThanRock() > 0.5
+                ? " Most draws lie outside pure rock to pure iron: the core mass fraction is not measured and the"
+                        + " difference is only a bound." : "");
     }
 }
