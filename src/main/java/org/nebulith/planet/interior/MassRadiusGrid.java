@@ -7,14 +7,14 @@ import org.apache.commons.math3.analysis.interpolation.SplineInterpolator;
 import org.apache.commons.math3.analysis.polynomials.PolynomialSplineFunction;
 
 /**
- * Radii of solved structures on a grid of masses (log-spaced, at most 0.1 dex apart) and core mass
- * fractions (0 to 1 by 0.1), for one mantle, core and water setting, with cubic-spline interpolation
+ * Radii of solved structures on a grid of masses (log-spaced, at most 0.15 dex apart) and core mass
+ * fractions (0 to 1 by 0.2), for one mantle, core and water setting, with cubic-spline interpolation
  * of ln R in ln M and in the core mass fraction. The interpolation error is below 0.1 % in radius
  * (checked against direct solutions in the tests).
  */
 public final class MassRadiusGrid {
-    private static final int CMF_NODES = 11;
-    private static final double MAX_DEX_STEP = 0.1;
+    private static final int CMF_NODES = 6;
+    private static final double MAX_DEX_STEP = 0.15;
 
     private final InteriorModel base;
     private final double[] lnMass;

@@ -23,11 +23,14 @@ import org.apache.commons.math3.ode.sampling.StepNormalizerMode;
  * encloses the planet's mass (to 1e-10 relative).
  */
 public final class StructureSolver {
-    private static final double REL_TOL = 1e-10;
+    private static final double REL_TOL = 1e-9;
     private static final double R_START_M = 1.0;
     private static final double PROFILE_STEP_M = 10e3;
     private static final double P_LOW_PA = 1e5;
-    private static final double P_HIGH_PA = 1e13;
+    /** Central pressure guess P ~ 400 GPa (M / M_earth)^1.7 (a rough power law of such models) and its bracket (ln). */
+    private static final double GUESS_PA = 4e11;
+    private static final double GUESS_EXPONENT = 1.7;
+    private static final double BRACKET = Math.log(4);
     private static final double P_LIMIT_PA = 1e17;
 
     /** The outcome of one outward integration. */
@@ -50,9 +53,14 @@ public final class StructureSolver {
     public Structure solve(final InteriorModel model) {
         double massKg = model.massMearth() * Constants.M_EARTH_KG;
         UnivariateFunction residual = lnPc -> Math.log(integrate(model, Math.exp(lnPc), false).surfaceMassKg / massKg);
-        double lo = Math.log(P_LOW_PA);
-        double hi = Math.log(P_HIGH_PA);
+        double guess = Math.log(GUESS_PA * Math.pow(model.massMearth(), GUESS_EXPONENT));
+        double lo = Math.max(Math.log(P_LOW_PA), guess - BRACKET);
+        double hi = guess + BRACKET;
         try {
+            while (lo > Math.log(P_LOW_PA) && residual.value(lo) > 0) {
+                hi = lo;
+                lo = Math.max(Math.log(P_LOW_PA), lo - BRACKET);
+            }
             while (residual.value(hi) < 0) {
                 lo = hi;
                 hi += Math.log(10);
@@ -63,7 +71,7 @@ public final class StructureSolver {
             if (residual.value(lo) > 0) {
                 throw new StructureException(model, "the central pressure is below 1e5 Pa (body too small)", null);
             }
-            double lnPc = new BrentSolver(1e-13, 1e-13, 1e-12).solve(300, residual, lo, hi);
+            double lnPc = new BrentSolver(1e-12, 1e-12, 1e-12).solve(300, residual, lo, hi);
             Run run = integrate(model, Math.exp(lnPc), true);
             double pc = Math.exp(lnPc);
             boolean hasCore = model.coreMassFraction() > 0;
