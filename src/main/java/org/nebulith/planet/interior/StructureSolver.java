@@ -32,6 +32,7 @@ public final class StructureSolver {
     private static final double GUESS_EXPONENT = 1.7;
     private static final double BRACKET = Math.log(4);
     private static final double P_LIMIT_PA = 1e17;
+    private static final double TOO_HIGH = 1.0;
 
     /** The outcome of one outward integration. */
     private static final class Run {
@@ -52,7 +53,7 @@ public final class StructureSolver {
      */
     public Structure solve(final InteriorModel model) {
         double massKg = model.massMearth() * Constants.M_EARTH_KG;
-        UnivariateFunction residual = lnPc -> Math.log(integrate(model, Math.exp(lnPc), false).surfaceMassKg / massKg);
+        UnivariateFunction residual = lnPc -> residual(model, Math.exp(lnPc), massKg);
         double guess = Math.log(GUESS_PA * Math.pow(model.massMearth(), GUESS_EXPONENT));
         double lo = Math.max(Math.log(P_LOW_PA), guess - BRACKET);
         double hi = guess + BRACKET;
@@ -80,6 +81,19 @@ public final class StructureSolver {
                     List.copyOf(run.profile));
         } catch (MathIllegalStateException | IllegalArgumentException e) {
             throw new StructureException(model, "structure integration failed: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * @return ln(enclosed mass / mass) for a trial central pressure; a trial that takes a layer beyond
+     *         its fit's compression has too high a central pressure (pressure at every mass coordinate
+     *         grows with it), so it counts as enclosing too much mass
+     */
+    private static double residual(final InteriorModel model, final double pc, final double massKg) {
+        try {
+            return Math.log(integrate(model, pc, false).surfaceMassKg / massKg);
+        } catch (IllegalArgumentException beyondFit) {
+            return TOO_HIGH;
         }
     }
 
