@@ -270,11 +270,6 @@ public final class MeasuredCommand extends RunCommand {
     }
 
     private SolarReference solar() {
-        switch (solarReference.toLowerCase(Locale.ROOT)) {
-            case "asplund2009": return SolarReference.ASPLUND2009;
-            case "lodders2003": return SolarReference.LODDERS2003;
-            default: throw InputException.atOption("--solar-reference", solarReference, "unknown solar reference",
-                    "asplund2009, lodders2003");
-        }
+        return SolarReferences.parse(solarReference);
     }
 }

@@ -1,7 +1,6 @@
 package org.nebulith.measured;
 
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 
 import org.apache.commons.math3.special.Erf;
