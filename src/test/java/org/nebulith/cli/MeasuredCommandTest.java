@@ -91,6 +91,25 @@ class MeasuredCommandTest {
     }
 
     @Test
+    void interiorReadsAZoneOfAPlanetRun() throws Exception {
+        Path bulk = Files.writeString(dir.resolve("bulk-composition.csv"), "zone,quantity,value,unit\n"
+                + "z,core_mass_fraction,0.28,mass fraction of rock\nz,mantle_Mg_number,90,100 Mg/(Mg+Fe) molar\n"
+                + "z,water_mass_fraction,0.05,mass fraction of solids\nz,mantle_SiO2_wt_pct,45,wt_pct\n"
+                + "z,mantle_MgO_wt_pct,38,wt_pct\nother,core_mass_fraction,0.9,mass fraction of rock\n");
+        assertEquals(0, run("interior", "--mass-Mearth", "2", "--bulk", bulk.toString(), "--zone", "z", "--out",
+                dir.resolve("a").toString()), err());
+        double mgSi = (38 / 40.304) / (45 / 60.084);
+        assertEquals(0, run("interior", "--mass-Mearth", "2", "--core-mass-fraction", "0.28", "--mantle-Mg-number", "90",
+                "--water-mass-fraction", "0.05", "--mantle-Mg-Si", Double.toString(mgSi), "--out",
+                dir.resolve("b").toString()), err());
+        assertEquals(Files.readString(dir.resolve("a/interior-structure.csv")),
+                Files.readString(dir.resolve("b/interior-structure.csv")));
+        assertEquals(2, run("interior", "--mass-Mearth", "2", "--bulk", bulk.toString(), "--zone", "nope", "--out",
+                dir.resolve("c").toString()));
+        assertFalse(Files.exists(dir.resolve("c")));
+    }
+
+    @Test
     void interiorRefusesBadFractions() {
         assertEquals(2, run("interior", "--mass-Mearth", "1", "--core-mass-fraction", "1.2", "--out",
                 dir.resolve("x").toString()));
