@@ -83,8 +83,10 @@ public final class ChemistryOptions {
     private Path condensedList;
 
     @Option(names = "--solutions", paramLabel = "LIST",
-            description = "Ideal solutions: 'all', 'none' (pure phases) or a comma list of metal, olivine, "
-                    + "orthopyroxene, melilite, plagioclase, spinel-hercynite. Default: all for the default "
+            description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
+                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg, "
+                    + "orthopyroxene-fe-mg (without the Mn end-member), feldspar (anorthite-albite-sanidine "
+                    + "instead of plagioclase), spinel-hercynite (without chromite). Default: all for the default "
                     + "data set, none otherwise.")
     private String solutions;
 
@@ -182,13 +184,24 @@ public final class ChemistryOptions {
             return List.of();
         }
         List<SolutionModel> out = new ArrayList<>();
+        Set<String> members = new java.util.HashSet<>();
         for (String name : s.split(",")) {
+            SolutionModel m;
             try {
-                out.add(SolutionModels.byName(name.trim()));
+                m = SolutionModels.byName(name.trim());
             } catch (IllegalArgumentException e) {
                 throw InputException.atOption("--solutions", s, "unknown solution '" + name.trim() + "'",
-                        "all, none, or a comma list of metal, olivine, orthopyroxene, melilite, plagioclase, spinel-hercynite");
+                        "all, none, or a comma list of " + SolutionModels.offeredNames());
             }
+            for (SolutionModel.EndMember em : m.endMembers()) {
+                for (String id : em.speciesIds()) {
+                    if (!members.add(id)) {
+                        throw InputException.atOption("--solutions", s, "species '" + id + "' would be in two solutions",
+                                "at most one of the forms of each solution (e.g. olivine or olivine-fe-mg)");
+                    }
+                }
+            }
+            out.add(m);
         }
         return out;
     }

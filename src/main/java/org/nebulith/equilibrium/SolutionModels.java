@@ -20,39 +20,78 @@ public final class SolutionModels {
             new SolutionModel.EndMember("Co", 1, List.of("Co(a)", "Co(b)", "Co(L)")),
             new SolutionModel.EndMember("Cr", 1, List.of("Cr(cr)", "Cr(L)"))));
 
-    /** Olivine, forsterite-fayalite, two M sites. */
+    /** Olivine, forsterite-fayalite-tephroite (Mg, Fe, Mn on two M sites; tephroite: ds62). */
     public static final SolutionModel OLIVINE = new SolutionModel("olivine", List.of(
             new SolutionModel.EndMember("forsterite", 2, List.of("forsterite")),
-            new SolutionModel.EndMember("fayalite", 2, List.of("fayalite"))));
+            new SolutionModel.EndMember("fayalite", 2, List.of("fayalite")),
+            new SolutionModel.EndMember("tephroite", 2, List.of("tephroite"))));
+
+    /** Olivine without its Mn end-member (the form used before tephroite was added). */
+    public static final SolutionModel OLIVINE_FE_MG = new SolutionModel("olivine-fe-mg", List.of(
+            OLIVINE.endMembers().get(0), OLIVINE.endMembers().get(1)));
 
     /**
-     * Orthopyroxene, enstatite-ferrosilite (Mg2Si2O6-Fe2Si2O6), two M sites. The Mg end-member takes
-     * the most stable Mg2Si2O6 polymorph at each temperature (orthoenstatite, protoenstatite or
-     * clinoenstatite): otherwise a pure Mg polymorph and the Fe-poor solution are nearly degenerate
-     * and the phase rule cannot decide between them.
+     * Orthopyroxene, enstatite-ferrosilite-Mn2Si2O6, two M sites. The Mg end-member takes the most
+     * stable Mg2Si2O6 polymorph at each temperature (orthoenstatite, protoenstatite or clinoenstatite):
+     * otherwise a pure Mg polymorph and the Fe-poor solution are nearly degenerate and the phase rule
+     * cannot decide between them; the Mn end-member likewise takes pyroxmangite or rhodonite (ds62,
+     * doubled to Mn2Si2O6).
      */
     public static final SolutionModel ORTHOPYROXENE = new SolutionModel("orthopyroxene", List.of(
             new SolutionModel.EndMember("enstatite", 2, List.of("enstatite", "protoenstatite", "clinoenstatite")),
-            new SolutionModel.EndMember("ferrosilite", 2, List.of("ferrosilite"))));
+            new SolutionModel.EndMember("ferrosilite", 2, List.of("ferrosilite")),
+            new SolutionModel.EndMember("Mn2Si2O6", 2, List.of("pyroxmangite", "rhodonite"))));
+
+    /** Orthopyroxene without its Mn end-member. */
+    public static final SolutionModel ORTHOPYROXENE_FE_MG = new SolutionModel("orthopyroxene-fe-mg", List.of(
+            ORTHOPYROXENE.endMembers().get(0), ORTHOPYROXENE.endMembers().get(1)));
 
     /** Melilite, gehlenite-akermanite, one site. */
     public static final SolutionModel MELILITE = new SolutionModel("melilite", List.of(
             new SolutionModel.EndMember("gehlenite", 1, List.of("gehlenite")),
             new SolutionModel.EndMember("akermanite", 1, List.of("akermanite"))));
 
-    /** Plagioclase, anorthite-albite, one site. */
+    /** Plagioclase, anorthite-albite, one site; sanidine stays a separate pure phase. */
     public static final SolutionModel PLAGIOCLASE = new SolutionModel("plagioclase", List.of(
             new SolutionModel.EndMember("anorthite", 1, List.of("anorthite")),
             new SolutionModel.EndMember("albite", 1, List.of("albite"))));
 
-    /** Spinel-hercynite, one site. */
-    public static final SolutionModel SPINEL = new SolutionModel("spinel-hercynite", List.of(
-            new SolutionModel.EndMember("spinel", 1, List.of("spinel")),
-            new SolutionModel.EndMember("hercynite", 1, List.of("hercynite"))));
+    /**
+     * Ternary feldspar anorthite-albite-sanidine, ideal, one site. Real alkali and plagioclase feldspars
+     * are separated by a wide miscibility gap at low temperature, so an ideal ternary overstates the K
+     * a plagioclase can take; offered for comparison with plagioclase plus pure sanidine.
+     */
+    public static final SolutionModel FELDSPAR = new SolutionModel("feldspar", List.of(
+            new SolutionModel.EndMember("anorthite", 1, List.of("anorthite")),
+            new SolutionModel.EndMember("albite", 1, List.of("albite")),
+            new SolutionModel.EndMember("sanidine", 1, List.of("sanidine"))));
 
-    /** @return all standard solutions, in a fixed order */
+    /** Spinel, spinel-hercynite-chromite (chromite: Robie &amp; Hemingway 1995), one site. */
+    public static final SolutionModel SPINEL = new SolutionModel("spinel", List.of(
+            new SolutionModel.EndMember("spinel", 1, List.of("spinel")),
+            new SolutionModel.EndMember("hercynite", 1, List.of("hercynite")),
+            new SolutionModel.EndMember("chromite", 1, List.of("chromite"))));
+
+    /** Spinel-hercynite without chromite, one site. */
+    public static final SolutionModel SPINEL_HERCYNITE = new SolutionModel("spinel-hercynite", List.of(
+            SPINEL.endMembers().get(0), SPINEL.endMembers().get(1)));
+
+    /** @return the standard solutions (those of {@code --solutions all}), in a fixed order */
     public static List<SolutionModel> all() {
         return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, PLAGIOCLASE, SPINEL);
+    }
+
+    /** @return every solution offered by name, the standard ones first, then their alternative forms */
+    public static List<SolutionModel> offered() {
+        return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, PLAGIOCLASE, SPINEL, OLIVINE_FE_MG,
+                ORTHOPYROXENE_FE_MG, FELDSPAR, SPINEL_HERCYNITE);
+    }
+
+    /** @return the names of {@link #offered()}, comma-separated */
+    public static String offeredNames() {
+        StringBuilder b = new StringBuilder();
+        offered().forEach(s -> b.append(b.length() == 0 ? "" : ", ").append(s.name()));
+        return b.toString();
     }
 
     /**
@@ -61,12 +100,11 @@ public final class SolutionModels {
      * @throws IllegalArgumentException listing the accepted names
      */
     public static SolutionModel byName(String name) {
-        for (SolutionModel s : all()) {
+        for (SolutionModel s : offered()) {
             if (s.name().equalsIgnoreCase(name)) {
                 return s;
             }
         }
-        throw new IllegalArgumentException("unknown solution '" + name + "'; accepted: metal, olivine, "
-                + "orthopyroxene, melilite, plagioclase, spinel-hercynite");
+        throw new IllegalArgumentException("unknown solution '" + name + "'; accepted: " + offeredNames());
     }
 }

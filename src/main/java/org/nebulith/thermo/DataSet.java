@@ -35,7 +35,7 @@ public final class DataSet {
     /** The selection names. */
     public static final List<String> NAMES = List.of(NASA, DEFAULT, REFERENCE_PURE);
 
-    private static final String MINERAL_TABLE = "minerals.csv:";
+    private static final List<String> MINERAL_TABLES = List.of("minerals.csv:", "minerals-added.csv:");
     private static final Set<String> DEFAULT_POLYMORPHS = Set.of("protoenstatite", "clinoenstatite", "pseudowollastonite");
     private static final Set<String> NOT_IN_DEFAULT = Set.of("troilite", "high albite");
 
@@ -107,7 +107,7 @@ public final class DataSet {
 
     /** @return true for rows taken from the mineral table (including its NASA-coefficient metal rows) */
     public static boolean isMineralRow(Species s) {
-        return s.sourceRow().startsWith(MINERAL_TABLE) || s.sourceRow().contains(" via " + MINERAL_TABLE);
+        return MINERAL_TABLES.stream().anyMatch(t -> s.sourceRow().startsWith(t) || s.sourceRow().contains(" via " + t));
     }
 
     /** @return true for NASA Glenn entries under their NASA names */
