@@ -29,6 +29,7 @@ import picocli.CommandLine.Spec;
             SurveyBenchCommand.class,
             BenchCommand.class,
             PresetsCommand.class,
+            DataAuditCommand.class,
             CompletionCommand.class,
             CommandLine.HelpCommand.class,
         },
