@@ -84,9 +84,9 @@ public final class ChemistryOptions {
 
     @Option(names = "--solutions", paramLabel = "LIST",
             description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
-                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg, "
-                    + "orthopyroxene-fe-mg (without the Mn end-member), feldspar (anorthite-albite-sanidine "
-                    + "instead of plagioclase), spinel-hercynite (without chromite). Default: all for the default "
+                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg "
+                    + "(without tephroite), orthopyroxene-mn (with Mn2Si2O6), plagioclase (anorthite-albite, "
+                    + "sanidine pure), spinel-hercynite (without chromite). Default: all for the default "
                     + "data set, none otherwise.")
     private String solutions;
 
