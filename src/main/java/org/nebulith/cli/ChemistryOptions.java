@@ -82,6 +82,12 @@ public final class ChemistryOptions {
             description = "Use only the condensed ids listed in FILE, one per line.")
     private Path condensedList;
 
+    @Option(names = "--ci-reference", paramLabel = "NAME",
+            description = "CI-chondrite composition of the dust (--dust-enrichment) and of the comparisons: "
+                    + "lodders-palme-gail2009 (Lodders, Palme & Gail 2009; the only CI table here with C, N, O, Cl) "
+                    + "or palme-oneill2014 (Palme & O'Neill 2014; no C, N, Cl). Default: ${DEFAULT-VALUE}.")
+    private String ciReference = org.nebulith.composition.CiReference.DEFAULT.optionName();
+
     @Option(names = "--solutions", paramLabel = "LIST",
             description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
                     + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg "
@@ -101,8 +107,7 @@ public final class ChemistryOptions {
                     "enrichment below 1 would remove dust", "a factor >= 1");
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances(),
-                    dustEnrichment);
+            base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
@@ -136,7 +141,8 @@ public final class ChemistryOptions {
     public String describeComposition() {
         StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : compositionArg());
         if (dustEnrichment != 1) {
-            sb.append("; dust enrichment ").append(dustEnrichment);
+            sb.append("; dust enrichment ").append(dustEnrichment).append(" (CI chondrite of ")
+                    .append(ciReference().citation()).append(')');
         }
         if (carbonToOxygen != null) {
             sb.append("; C/O set to ").append(carbonToOxygen);
@@ -204,6 +210,19 @@ public final class ChemistryOptions {
             out.add(m);
         }
         return out;
+    }
+
+    /**
+     * @return the CI-chondrite reference of the run (dust and comparisons)
+     * @throws InputException for an unknown name
+     */
+    public org.nebulith.composition.CiReference ciReference() {
+        try {
+            return org.nebulith.composition.CiReference.fromOptionName(ciReference);
+        } catch (IllegalArgumentException e) {
+            throw InputException.atOption("--ci-reference", ciReference, "unknown CI reference",
+                    org.nebulith.composition.CiReference.accepted());
+        }
     }
 
     /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */
