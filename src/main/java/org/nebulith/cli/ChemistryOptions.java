@@ -68,7 +68,9 @@ public final class ChemistryOptions {
     private String dataSet;
 
     @Option(names = "--variant", paramLabel = "TAG",
-            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) for a sensitivity run; repeatable.")
+            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) or a documented "
+                    + "alternative (troilite-ds62: ds62 troilite instead of the NASA FeS entries; AlOH-JANAF: AlOH "
+                    + "gas at the JANAF-quoted -180 kJ/mol, from memory) for a sensitivity run; repeatable.")
     private List<String> variants = new ArrayList<>();
 
     @Option(names = "--species-file", paramLabel = "FILE",
