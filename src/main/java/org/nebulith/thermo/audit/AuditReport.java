@@ -67,6 +67,11 @@ public final class AuditReport {
         return b.toString();
     }
 
+    /** A table cell: pipes escaped so that subjects such as {@code gas|solid} stay in one column. */
+    private static String cell(String text) {
+        return text.replace("|", "\\|");
+    }
+
     /** @return the Markdown text */
     public String markdown() {
         StringBuilder b = new StringBuilder("# Thermodynamic data audit\n\n");
@@ -76,9 +81,9 @@ public final class AuditReport {
         b.append("\n## Corrections applied when the database was built\n\n| species | field | file value | corrected |"
                 + " source | reason |\n|---|---|---|---|---|---|\n");
         for (Corrections.Correction c : corrections) {
-            b.append("| ").append(c.species()).append(" | ").append(c.field()).append(" | ").append(c.fileValue())
-                    .append(" | ").append(c.correctedValue()).append(" | ").append(c.source()).append(" | ")
-                    .append(c.reason()).append(" |\n");
+            b.append("| ").append(cell(c.species())).append(" | ").append(c.field()).append(" | ").append(c.fileValue())
+                    .append(" | ").append(c.correctedValue()).append(" | ").append(cell(c.source())).append(" | ")
+                    .append(cell(c.reason())).append(" |\n");
         }
         Map<String, List<Row>> byCheck = new LinkedHashMap<>();
         rows.forEach(r -> byCheck.computeIfAbsent(r.finding().check(), k -> new ArrayList<>()).add(r));
@@ -87,8 +92,8 @@ public final class AuditReport {
                     .append("| subject | value | threshold | status | detail | reason |\n|---|---|---|---|---|---|\n");
             for (Row r : e.getValue()) {
                 Finding f = r.finding();
-                b.append(String.format(Locale.ROOT, "| %s | %.3g %s | %.3g | %s | %s | %s |%n", f.subject(), f.value(),
-                        f.unit(), f.threshold(), r.status(), f.detail(), r.reason()));
+                b.append(String.format(Locale.ROOT, "| %s | %.3g %s | %.3g | %s | %s | %s |%n", cell(f.subject()),
+                        f.value(), f.unit(), f.threshold(), r.status(), cell(f.detail()), cell(r.reason())));
             }
         }
         return b.toString();

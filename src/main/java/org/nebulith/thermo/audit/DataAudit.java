@@ -13,7 +13,6 @@ import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.Nasa9Model;
 import org.nebulith.thermo.Species;
 import org.nebulith.thermo.SpeciesDatabase;
-import org.nebulith.thermo.ThermoModel;
 
 /**
  * Audit of every species of a database (the union of all data sets), looking for data errors that an
@@ -273,10 +272,5 @@ public final class DataAudit {
             }
         }
         return out;
-    }
-
-    /** @return gas constant used throughout [J/mol/K] */
-    static double r() {
-        return ThermoModel.R;
     }
 }
