@@ -51,6 +51,13 @@ class DataAuditCommandTest {
     }
 
     @Test
+    void twoFormsOfOneSolutionAreRefused() {
+        assertEquals(2, run("point", "--T-K", "1500", "--P-bar", "1e-4", "--solutions", "olivine,olivine-fe-mg"));
+        String e = err.toString(StandardCharsets.UTF_8).strip();
+        assertTrue(e.contains("--solutions") && e.contains("two solutions") && !e.contains("\n"), e);
+    }
+
+    @Test
     void unknownCiReferenceIsOneLineExit2() {
         assertEquals(2, run("point", "--T-K", "1500", "--P-bar", "1e-4", "--dust-enrichment", "2", "--ci-reference",
                 "orgueil1864"));

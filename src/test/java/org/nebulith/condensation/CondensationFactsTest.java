@@ -147,4 +147,13 @@ class CondensationFactsTest {
         assertTrue(SequenceProbe.member(cold, "olivine", "tephroite") > 0);
         assertTrue(SequenceProbe.member(cold, "feldspar", "sanidine") > 0);
     }
+
+    @Test
+    void chromiumLeavesTheMetalForChromiteWhenCold() {
+        // Robie & Hemingway 1995 chromite in the spinel solution: Cr in an oxide host once the metal cools
+        SequenceStep cold = SequenceProbe.at(SequenceRuns.base(), 600);
+        double chromite = SequenceProbe.member(cold, "spinel", "chromite");
+        double metal = SequenceProbe.member(cold, "metal", "Cr");
+        assertTrue(chromite > 0 && metal < 1e-6 * chromite, "chromite " + chromite + ", Cr in metal " + metal);
+    }
 }
