@@ -76,7 +76,12 @@ public final class SolutionModels {
             new SolutionModel.EndMember("albite", 1, List.of("albite")),
             new SolutionModel.EndMember("sanidine", 1, List.of("sanidine"))));
 
-    /** Spinel, spinel-hercynite-chromite (chromite: Robie &amp; Hemingway 1995), one site. */
+    /**
+     * Spinel, spinel-hercynite-chromite, one site. Chromite is the Robie &amp; Hemingway 1995 row (the only
+     * source found), beside ds62 spinel and hercynite: two calibrations in one solution, a caution for the
+     * Cr partitioning. Measured: Cr stays in the metal at its T50 and moves to ds62 picrochromite near
+     * 900 K and to chromite in this solution by 600 K.
+     */
     public static final SolutionModel SPINEL = new SolutionModel("spinel", List.of(
             new SolutionModel.EndMember("spinel", 1, List.of("spinel")),
             new SolutionModel.EndMember("hercynite", 1, List.of("hercynite")),
