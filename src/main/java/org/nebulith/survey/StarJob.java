@@ -52,6 +52,16 @@ public final class StarJob {
     private StarJob() {
     }
 
+    /** Receives the wall time of each draw; called on the worker thread, so implementations are thread-safe. */
+    @FunctionalInterface
+    public interface DrawClock {
+        /** Ignores the times. */
+        DrawClock NONE = nanos -> { };
+
+        /** @param nanos wall time of one draw's estimate [ns] */
+        void draw(long nanos);
+    }
+
     /** One output quantity: zone, name, unit. */
     private record Key(String zone, String name, String unit) {
     }
@@ -64,6 +74,20 @@ public final class StarJob {
      * @throws StarJobException if an estimate fails or its layout changes between draws
      */
     public static List<SurveyRow> run(StarRow row, SurveySettings settings, PlanetEstimator general) {
+        return run(row, settings, general, DrawClock.NONE);
+    }
+
+    /**
+     * {@link #run(StarRow, SurveySettings, PlanetEstimator)} that also reports the wall time of every draw
+     * (benchmarks); the rows are the same.
+     *
+     * @param row      the star
+     * @param settings the run settings
+     * @param general  the planet estimate
+     * @param clock    receives the wall time of each draw's estimate [ns]
+     * @return the star's rows
+     */
+    public static List<SurveyRow> run(StarRow row, SurveySettings settings, PlanetEstimator general, DrawClock clock) {
         ElementAbundances solar = SOLAR.get(settings.solar());
         Map<Element, Double> nominalDex = new EnumMap<>(Element.class);
         row.abundances().forEach((el, m) -> nominalDex.put(el, m.dex()));
@@ -86,7 +110,10 @@ public final class StarJob {
                 Measurement m = e.getValue();
                 dex.put(e.getKey(), m.dex() + m.error() * (common * z0 + own * z));
             }
-            double[] v = evaluate(row, d, compose(solar, dex), estimator, keys);
+            ElementAbundances gas = compose(solar, dex);
+            long start = System.nanoTime();
+            double[] v = evaluate(row, d, gas, estimator, keys);
+            clock.draw(System.nanoTime() - start);
             for (int k = 0; k < v.length; k++) {
                 values[k][d] = v[k];
             }

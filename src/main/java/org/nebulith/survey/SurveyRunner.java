@@ -78,6 +78,27 @@ public final class SurveyRunner {
      */
     public static Summary run(Iterator<StarRow> stars, SurveySettings settings, EstimatorCache estimators, int threads,
                               boolean skipFailing, Progress progress, Sink sink) throws IOException {
+        return run(stars, settings, estimators, threads, skipFailing, progress, sink, StarJob.DrawClock.NONE);
+    }
+
+    /**
+     * {@link #run(Iterator, SurveySettings, EstimatorCache, int, boolean, Progress, Sink)} that also reports the
+     * wall time of every draw to {@code clock} (benchmarks).
+     *
+     * @param stars       the stars, in catalogue order (read lazily)
+     * @param settings    the run settings
+     * @param estimators  estimators per effective settings
+     * @param threads     worker threads, &gt;= 1
+     * @param skipFailing whether a failing star is reported to the sink and skipped (else the run stops)
+     * @param progress    advanced by the draws of each finished star
+     * @param sink        receives the outcomes in order
+     * @param clock       receives each draw's wall time, from the worker threads
+     * @return what was done
+     * @throws IOException if the sink fails
+     */
+    public static Summary run(Iterator<StarRow> stars, SurveySettings settings, EstimatorCache estimators, int threads,
+                              boolean skipFailing, Progress progress, Sink sink, StarJob.DrawClock clock)
+            throws IOException {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be >= 1, got " + threads);
         }
@@ -90,7 +111,7 @@ public final class SurveyRunner {
                 while (stars.hasNext() && window.size() < threads * WINDOW_PER_THREAD) {
                     StarRow row = stars.next();
                     PlanetEstimator estimator = estimators.get(settings.forStar(row));
-                    window.add(pool.submit(() -> compute(row, settings, estimator, progress)));
+                    window.add(pool.submit(() -> compute(row, settings, estimator, progress, clock)));
                 }
                 Outcome o = take(window.removeFirst());
                 if (o.failure() == null) {
@@ -109,9 +130,10 @@ public final class SurveyRunner {
         return new Summary(done, failed, done * settings.draws());
     }
 
-    private static Outcome compute(StarRow row, SurveySettings settings, PlanetEstimator estimator, Progress progress) {
+    private static Outcome compute(StarRow row, SurveySettings settings, PlanetEstimator estimator, Progress progress,
+                                   StarJob.DrawClock clock) {
         try {
-            List<SurveyRow> rows = StarJob.run(row, settings, estimator);
+            List<SurveyRow> rows = StarJob.run(row, settings, estimator, clock);
             return new Outcome(row, rows, SurveyCsv.block(rows), null);
         } catch (StarJobException e) {
             return new Outcome(row, null, null, e);
