@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.StringJoiner;
 
 import org.nebulith.composition.ElementAbundances;
-import org.nebulith.planet.MassRadius;
+import org.nebulith.planet.PlanetRadius;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.Quantity;
@@ -44,14 +44,13 @@ public final class PlanetTables {
             }
             PlanetComposition c = zp.planet().require();
             for (Quantity q : c.quantities()) {
-                t.row(zp.zoneName(), q.name(), q.value(), q.unit());
+                t.row(zp.zoneName(), q.name(), q.valueOrNull(), q.unit());
             }
             t.row(zp.zoneName(), "solids_mass_g", c.bulk().massGrams(), "g");
             zp.inventory().zone().planetMassMearth().ifPresent(m -> {
-                if (c.hasRock()) {
-                    t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
-                            "R_earth (for " + m + " M_earth)");
-                }
+                PlanetRadius r = PlanetRadius.zeng2016(m, c);
+                t.row(zp.zoneName(), "radius_Rearth_Zeng2016", r.radiusRearth().orElse(null),
+                        "R_earth (for " + m + " M_earth" + (r.note().isEmpty() ? "" : "; " + r.note()) + ")");
             });
         }
         return t;
