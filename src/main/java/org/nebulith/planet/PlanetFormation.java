@@ -72,7 +72,8 @@ public final class PlanetFormation {
 
     /**
      * @param sys a system built here
-     * @return the largest jump of G/RT between the NASA-9 pieces of its species ({@link PieceJumps})
+     * @return the largest jump of G/RT between the NASA-9 pieces of its species at or above the floor
+     *         temperature (no equilibrium is computed below it; {@link PieceJumps})
      */
     public double continuity(ChemicalSystem sys) {
         return continuity.computeIfAbsent(sys, s -> {
@@ -83,7 +84,7 @@ public final class PlanetFormation {
                     mine.add(sp);
                 }
             }
-            return PieceJumps.largest(mine);
+            return PieceJumps.largest(mine, settings.floorK());
         });
     }
 

@@ -59,12 +59,15 @@ public final class PieceJumps {
 
     /**
      * @param species species
-     * @return the largest |jump| of G/RT at any inner bound of theirs (0 if none)
+     * @param tMinK   lowest temperature of interest [K] (bounds below it are ignored)
+     * @return the largest |jump| of G/RT at any inner bound of theirs at or above tMinK (0 if none)
      */
-    public static double largest(List<Species> species) {
+    public static double largest(List<Species> species, double tMinK) {
         double worst = 0;
         for (Jump j : of(species)) {
-            worst = Math.max(worst, Math.abs(j.jump()));
+            if (j.tK() >= tMinK) {
+                worst = Math.max(worst, Math.abs(j.jump()));
+            }
         }
         return worst;
     }
