@@ -37,9 +37,9 @@ public enum Messages {
     /** A numerical result is unusable: what, T [K], P [bar], composition. */
     NUMERICAL_FAILURE(4, "{0} at T = {1} K, P = {2} bar, composition {3}"),
     /** A numerical failure inside a feeding zone: zone, r [AU], T [K], P [bar], what failed. */
-    ZONE_STATE_FAILURE(5, "zone ''{0}'', r = {1} AU, T = {2} K, P = {3} bar: {4}"),
+    ZONE_STATE_FAILURE(5, "zone \"{0}\", r = {1} AU, T = {2} K, P = {3} bar: {4}"),
     /** A survey's failed draws exceed its limit: failed draws, draws of the run, the limit (fraction). */
-    TOO_MANY_FAILED_DRAWS(3, "{0} of {1} draws failed, more than --max-failed-fraction {2} of the run''s draws;"
+    TOO_MANY_FAILED_DRAWS(3, "{0} of {1} draws failed, more than --max-failed-fraction {2} of all draws of the run;"
             + " the failures are listed in .failures.csv.partial"),
     /** A strict survey stopped at its first failure: the failure (star, stage, zone, state, reason). */
     STRICT_FAILURE(1, "--strict: stopped at the first failed estimate: {0}"),

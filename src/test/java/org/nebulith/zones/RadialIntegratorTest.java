@@ -101,7 +101,7 @@ class RadialIntegratorTest {
         assertTrue(m.contains("T = ") && m.contains("not finite"), m);
         m = assertThrows(NumericalException.class,
                 () -> new RadialIntegrator(1e-9, 8, 1, 50).integrate(tophat, disk, f, List.of())).getMessage();
-        assertTrue(m.contains("zone 't'") && m.contains("r = ") && m.contains("T = ") && m.contains("P = "), m);
+        assertTrue(m.contains("zone \"t\"") && m.contains("r = ") && m.contains("T = ") && m.contains("P = "), m);
     }
 
     @Test
@@ -147,7 +147,7 @@ class RadialIntegratorTest {
         ErrorControl tooSmooth = new ErrorControl(new int[] {0}, 1, 1e-8);
         String m = assertThrows(NumericalException.class, () -> new RadialIntegrator(1e-9, 8, 2, 20_000)
                 .integrate(tophat, disk, NOISY, List.of(), tooSmooth)).getMessage();
-        assertTrue(m.startsWith("zone 't', r = ") && m.contains(" AU, T = ") && m.contains(" K, P = "), m);
+        assertTrue(m.startsWith("zone \"t\", r = ") && m.contains(" AU, T = ") && m.contains(" K, P = "), m);
     }
 
     @Test
