@@ -139,9 +139,13 @@ class PlanetCommandTest {
 
     @Test
     void hotEarlyDiskGivesTheRefractoryNoticeAndNoRadiusOrMgNumberForTheCaAlZone() throws Exception {
+        // Tessaly-b of the demo system (feeding-zones/demo-system.csv), alone
+        Path zones = Files.writeString(dir.resolve("b.csv"),
+                "zone,shape,r_center_AU,half_width_AU,planet_mass_Mearth\nTessaly-b,gaussian,0.45,0.05,0.6\n");
         Path outDir = dir.resolve("hot");
         assertEquals(0, run("planet", "--composition", "protosolar-lodders2003", "--disk", "hot-early-disk",
-                "--profile-points", "12", "--out", outDir.toString()), err.toString(StandardCharsets.UTF_8));
+                "--zones", zones.toString(), "--profile-points", "12", "--out", outDir.toString()),
+                err.toString(StandardCharsets.UTF_8));
         String e = err.toString(StandardCharsets.UTF_8);
         assertTrue(e.contains("notice: zone 'Tessaly-b': its solids are ") && e.contains("% refractory oxides"), e);
         Map<String, String> b = new HashMap<>();
