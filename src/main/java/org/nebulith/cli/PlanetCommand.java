@@ -61,6 +61,9 @@ public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
 
+    /** Most radii of the radial profile (each is an equilibrium solve). */
+    static final int MAX_PROFILE_POINTS = 10_000;
+
     @Mixin
     private ChemistryOptions chemistry;
 
@@ -101,9 +104,19 @@ public final class PlanetCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
-        if (profilePoints < 2) {
-            throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
+        if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
+            throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
+                    : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
         }
+        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
+                .format(context.started());
+        try (RunFolder run = context.openRunFolder(runName)) {
+            return compute(context, run, gas, spec, diskModel, zoneList);
+        }
+    }
+
+    private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
+                        List<FeedingZone> zoneList) {
         FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
                 new CoreOptions(!sulfideInMantle, coreSi, coreO));
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
@@ -117,32 +130,28 @@ public final class PlanetCommand extends RunCommand {
             List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
                     scanMax(diskModel, zoneList), profilePoints);
             progress.step();
-            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+            return writeOutputs(context, run, gas, diskModel, spec, planets, scan);
         }
     }
 
-    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
-                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
-        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
-                .format(context.started());
-        try (RunFolder run = context.openRunFolder(runName)) {
-            List<Report.Setting> settings = new ArrayList<>();
-            context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-            List<Report.Citation> sources = new ArrayList<>();
-            for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
-                sources.add(new Report.Citation(e.getKey(), e.getValue()));
-            }
-            PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
-                    "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
-            PlanetReportWriter.write(run, data);
-            Path done = run.commit();
-            for (ZonePlanet zp : planets) {
-                context.out().println(PlanetReportWriter.summary(zp));
-            }
-            context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+    private int writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
+                             SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+        List<Report.Setting> settings = new ArrayList<>();
+        context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
+        List<Report.Citation> sources = new ArrayList<>();
+        for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
+            sources.add(new Report.Citation(e.getKey(), e.getValue()));
         }
+        PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
+                "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
+                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
+        PlanetReportWriter.write(run, data);
+        Path done = run.commit();
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.cautions(PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
         return ExitCodes.OK;
     }
 
