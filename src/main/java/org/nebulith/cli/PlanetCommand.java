@@ -104,6 +104,7 @@ public final class PlanetCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
+        ZoneFileReader.overlaps(zoneList).forEach(line -> context.notice(line));
         if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
