@@ -83,14 +83,15 @@ class LocalSurveyTest {
         // an interrupted run: whole stars, then a star cut in the middle of a line
         int cut = nthLineEnd(text, 1 + 7 * 8 + 3) + 17;
         Path broken = dir.resolve("broken");
-        Files.createDirectories(broken);
-        Files.writeString(broken.resolve(LocalSurvey.PARTIAL), text.substring(0, cut));
+        Files.createDirectories(LocalSurvey.partialTable(broken).getParent());
+        Files.writeString(LocalSurvey.partialTable(broken), text.substring(0, cut));
         assertThrows(InputException.class, () -> run(broken, 2));
         LocalSurvey.Result resumed = run(SurveyTestData.DEMO, broken, 2, false, true, false, SETTINGS,
                 s -> new FullyCondensedEstimator());
         assertEquals(8, resumed.resumed());
         assertArrayEquals(expected, Files.readAllBytes(broken.resolve(SurveyCsv.FILE)));
-        assertFalse(Files.exists(broken.resolve(LocalSurvey.PARTIAL)));
+        assertFalse(Files.exists(LocalSurvey.partialTable(broken)));
+        assertFalse(Files.exists(LocalSurvey.partialTable(broken).getParent()), "the unfinished folder became the run");
         for (String f : List.of(StarsTable.FILE, LocalSurvey.NOTES)) {
             assertArrayEquals(Files.readAllBytes(full.resolve(f)), Files.readAllBytes(broken.resolve(f)), f);
         }
@@ -173,8 +174,8 @@ class LocalSurveyTest {
                 false, SETTINGS, s -> failingEstimator));
         assertEquals(failingStars.get(0).star(), e.star(), "the first failing star in catalogue order");
         assertTrue(e.getMessage().contains("did not converge"), e.getMessage());
-        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)), "partial results kept for --resume");
-        assertFalse(Files.exists(out.resolve(SurveyCsv.FILE)));
+        assertTrue(Files.exists(LocalSurvey.partialTable(out)), "partial results kept for --resume");
+        assertFalse(Files.exists(out), "nothing under the final name");
         LocalSurvey.Result r = run(SurveyTestData.DEMO, out, 2, true, true, false, SETTINGS, s -> failingEstimator);
         assertEquals(20 - failingStars.size(), r.stars());
         assertEquals(failingStars.size(), r.failed());
