@@ -100,15 +100,15 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
-        ElementAbundances gas = chemistry.composition(context);
-        SystemSpec spec = chemistry.systemSpec(context);
-        DiskModel diskModel = readDisk(context);
-        List<FeedingZone> zoneList = readZones(context, diskModel);
-        ZoneFileReader.overlaps(zoneList).forEach(line -> context.notice(line));
         if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
         }
+        ElementAbundances gas = chemistry.composition(context);
+        SystemSpec spec = chemistry.systemSpec(context);
+        DiskModel diskModel = readDisk(context);
+        List<FeedingZone> zoneList = readZones(context, diskModel);
+        ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
         String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
                 .format(context.started());
         try (RunFolder run = context.openRunFolder(runName)) {
@@ -152,7 +152,8 @@ public final class PlanetCommand extends RunCommand {
             context.out().println(PlanetReportWriter.summary(zp));
         }
         context.out().println("report: " + done.resolve("report.html"));
-        context.cautions(PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
+        context.cautions(context.verbosity() == Verbosity.QUIET ? PlanetReportWriter.cautions(planets)
+                : PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
         return ExitCodes.OK;
     }
 

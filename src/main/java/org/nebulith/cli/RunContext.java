@@ -116,11 +116,6 @@ public final class RunContext {
         err.println("warning: " + caution);
     }
 
-    /** @param note a fact about this run's input the user should know, always shown (also with --quiet) */
-    public void notice(final String note) {
-        err.println("notice: " + note);
-    }
-
     /**
      * The standing cautions of a run: every one as a warning, or with --quiet one line pointing to
      * where they are written.
