@@ -44,7 +44,7 @@ public final class PressurePathReader {
                 }
                 if (!header) {
                     if (!line.equals(HEADER)) {
-                        throw InputException.atField(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER);
+                        throw InputException.atField(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER);
                     }
                     header = true;
                     continue;

@@ -72,7 +72,7 @@ public final class ZoneFileReader {
         if (line.equals(HEADER + "," + PLANET_MASS)) {
             return 5;
         }
-        throw new DiskFormatException(name, lineNo, "header", "found '" + line + "'",
+        throw new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'",
                 HEADER + " optionally followed by ," + PLANET_MASS);
     }
 
@@ -86,7 +86,7 @@ public final class ZoneFileReader {
         }
         KernelShape shape = KernelShape.fromToken(f[1]);
         if (shape == null) {
-            throw new DiskFormatException(name, lineNo, "shape", "unknown shape '" + f[1].strip() + "'", "tophat, gaussian");
+            throw new DiskFormatException(name, lineNo, "shape", "unknown shape '" + org.nebulith.errors.Messages.echo(f[1].strip()) + "'", "tophat, gaussian");
         }
         double rc = positive(f[2], "r_center_AU", name, lineNo);
         double hw = positive(f[3], "half_width_AU", name, lineNo);
@@ -104,7 +104,7 @@ public final class ZoneFileReader {
         try {
             v = Double.parseDouble(s.strip());
         } catch (NumberFormatException e) {
-            throw new DiskFormatException(name, lineNo, field, "'" + s.strip() + "' is not a number", "a finite number > 0");
+            throw new DiskFormatException(name, lineNo, field, "'" + org.nebulith.errors.Messages.echo(s.strip()) + "' is not a number", "a finite number > 0");
         }
         if (!(v > 0) || Double.isInfinite(v)) {
             throw new DiskFormatException(name, lineNo, field, "value " + s.strip(), "a finite number > 0");

@@ -267,4 +267,26 @@ class BadInputTest {
         String md = Files.readString(outDir.resolve("summary.md"));
         assertTrue(md.contains("| a\\|b\\*c |") && md.contains("| \\<z\\> |"), md);
     }
+
+    @Test
+    void aByteOrderMarkIsDroppedByEveryReader() throws IOException {
+        Path comp = dir.resolve("bom-composition.csv");
+        Files.write(comp, concat(new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF},
+                Files.readAllBytes(Path.of("presets/star-tessaly.csv"))));
+        assertEquals(0, run("point", "--composition", comp.toString(), "--T-K", "1800", "--P-bar", "1e-4"), err());
+        Path disk = dir.resolve("bom-disk.csv");
+        Files.write(disk, concat(new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF},
+                Files.readAllBytes(Path.of("presets/steady-viscous-default.csv"))));
+        assertEquals(2, run("planet", "--disk", disk.toString(), "--out", dir.resolve("dangling").toString()));
+        assertTrue(err().contains("dangling symbolic link"), "the disk file was read: " + err());
+        Path path = Files.writeString(dir.resolve("bom-path.csv"), "\uFEFFT_K,P_bar\n2000,1e-4\n300,1e-5\n");
+        assertEquals(2, run("sequence", "--path", path.toString(), "--out", dir.resolve("dangling").toString()));
+        assertTrue(err().contains("dangling symbolic link"), "the path file was read: " + err());
+    }
+
+    private static byte[] concat(final byte[] a, final byte[] b) {
+        byte[] c = Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, c, a.length, b.length);
+        return c;
+    }
 }
