@@ -131,7 +131,21 @@ public final class OutputLock implements AutoCloseable {
         if (isHeld(file) || ownerAlive(owner) || beingCreated(file, owner)) {
             return new InputException(Messages.OUTPUT_LOCKED, null, output, holder + "; lock file " + file);
         }
-        return new InputException(Messages.OUTPUT_LOCK_STALE, null, output, holder, file);
+        return new InputException(Messages.OUTPUT_LOCK_STALE, null, output, holder, file + leftovers(file, owner));
+    }
+
+    /** @return the hidden temporary folders the dead owner left beside the output, as " and ..." text */
+    private static String leftovers(final Path lock, final Map<String, String> owner) {
+        String name = lock.getFileName().toString();
+        String prefix = name.substring(0, name.length() - ".lock".length()) + ".partial-" + owner.get("pid") + "-";
+        try (var siblings = Files.list(lock.getParent())) {
+            StringBuilder text = new StringBuilder();
+            siblings.filter(p -> p.getFileName().toString().startsWith(prefix)).sorted().limit(3)
+                    .forEach(p -> text.append(" and ").append(p));
+            return text.toString();
+        } catch (IOException | UncheckedIOException e) {
+            return "";
+        }
     }
 
     /** @return whether some process (this one included) holds the file lock */

@@ -89,7 +89,8 @@ class SeparateProcessRunsTest {
         Path lock = OutputLock.lockFile(out);
         Process victim = start(dir, "sequence", "--T-step-K", "0.5", "--out", out.toString(), "-q");
         long waited = 0;
-        while (!Files.exists(lock) || Files.size(lock) == 0) {
+        Path partial = dir.resolve(".S.partial-" + victim.pid() + "-1");
+        while (!Files.exists(lock) || Files.size(lock) == 0 || !Files.isDirectory(partial)) {
             assertTrue(victim.isAlive() && waited < 120_000, "the run took its lock");
             Thread.sleep(50);
             waited += 50;
@@ -100,6 +101,8 @@ class SeparateProcessRunsTest {
         assertEquals(2, o.code(), o.err());
         assertTrue(o.err().contains("locked by process " + victim.pid()) && o.err().contains("no longer running")
                 && o.err().contains("delete " + lock), o.err());
+        assertTrue(o.err().contains(" and " + partial),
+                "the hidden folder the killed run left is named too: " + o.err());
         assertTrue(Files.exists(lock), "the stale lock is left for the user to judge");
     }
 
