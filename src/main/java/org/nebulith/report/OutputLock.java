@@ -38,6 +38,10 @@ public final class OutputLock implements AutoCloseable {
     private static final long CREATION_GRACE_MS = 5_000;
     private static final Set<OutputLock> HELD = ConcurrentHashMap.newKeySet();
 
+    static {
+        Runtime.getRuntime().addShutdownHook(new Thread(OutputLock::releaseAll, "nebulith-lock-release"));
+    }
+
     private final Path file;
     private final FileChannel channel;
     private final FileLock lock;
@@ -252,7 +256,7 @@ public final class OutputLock implements AutoCloseable {
         }
     }
 
-    /** Releases every lock of this JVM (shutdown hook). */
+    /** Releases every lock of this JVM (shutdown hook; a stopped run's temporary folder may still be being deleted). */
     static void releaseAll() {
         for (OutputLock held : Set.copyOf(HELD)) {
             held.close();

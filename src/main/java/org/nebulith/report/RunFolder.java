@@ -378,6 +378,5 @@ public final class RunFolder implements AutoCloseable {
         for (Path path : OPEN) {
             AtomicOutput.deleteQuietly(path);
         }
-        OutputLock.releaseAll();
     }
 }

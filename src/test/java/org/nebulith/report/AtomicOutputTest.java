@@ -46,14 +46,22 @@ class AtomicOutputTest {
 
     @Test
     void aStoppedJvmLeavesNothing() throws Exception {
-        Path target = dir.resolve("stopped");
+        stopChild(dir.resolve("stopped"), "folder", 2);
+    }
+
+    @Test
+    void aStoppedJvmReleasesTheLockOfAFileItReserved() throws Exception {
+        stopChild(dir.resolve("state.csv"), "file", 1);
+    }
+
+    private void stopChild(final Path target, final String kind, final int whileRunning) throws Exception {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         Process child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
-                InterruptedRunProbe.class.getName(), target.toString()).redirectErrorStream(true).start();
+                InterruptedRunProbe.class.getName(), target.toString(), kind).redirectErrorStream(true).start();
         try (BufferedReader out = new BufferedReader(new InputStreamReader(child.getInputStream(),
                 StandardCharsets.UTF_8))) {
             assertEquals("writing", out.readLine());
-            assertEquals(2, listing().size(), "the temporary folder and the lock exist while the run works");
+            assertEquals(whileRunning, listing().size(), "the temporary folder and the lock exist while the run works");
             child.destroy(); // SIGTERM, as from Ctrl-C or a job scheduler: shutdown hooks run
             assertTrue(child.waitFor(20, TimeUnit.SECONDS));
         } finally {
