@@ -39,7 +39,7 @@ public final class SpeciesListReader {
                 }
                 if (!known.contains(id)) {
                     throw new DataFormatException(name, lineNo, "species id",
-                            "'" + id + "' is not a " + (gas ? "gas" : "condensed") + " species of data set "
+                            "'" + org.nebulith.errors.Messages.echo(id) + "' is not a " + (gas ? "gas" : "condensed") + " species of data set "
                                     + dataSet.name(), "ids as spelled in the data set, one per line, # for comments");
                 }
                 ids.add(id);

@@ -284,6 +284,16 @@ class BadInputTest {
         assertTrue(err().contains("dangling symbolic link"), "the path file was read: " + err());
     }
 
+    @Test
+    void hugeCatalogueFieldsAreCutInTheMessages() throws IOException {
+        Path cat = Files.writeString(dir.resolve("huge-cat.csv"), "star,Fe_H,Fe_H_err\n" + "S".repeat(5_000_000) + ","
+                + "9".repeat(5_000_000) + ",0.05\n");
+        assertEquals(2, run("survey-standin", "--catalogue", cat.toString(), "--out", dir.resolve("o").toString()));
+        assertTrue(err().contains("star '" + "S".repeat(80) + "... (5000000 characters)': value " + "9".repeat(80)
+                + "... (5000000 characters) is out of range"), err().substring(0, Math.min(2000, err().length())));
+        assertTrue(err().length() < 1500, err().length() + " characters");
+    }
+
     private static byte[] concat(final byte[] a, final byte[] b) {
         byte[] c = Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, c, a.length, b.length);
