@@ -16,6 +16,7 @@ import java.util.function.LongFunction;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.progress.Progress;
+import org.nebulith.report.OutputWriteException;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunMarker;
 import org.nebulith.report.RunInputs;
@@ -170,10 +171,10 @@ public final class LocalSurvey {
         long skipped = check.bad().size();
         String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed);
         run.writeText(NOTES, notes);
-        Files.move(starsPartial, run.file(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
         byte[] png = SurveyChart.write(partial, run);
         SurveyReport.write(run, notes, png, run.file(StarsTable.FILE), inputs);
-        Files.move(partial, run.file(SurveyCsv.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
         Path done = run.commit();
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws,
                 done.resolve(SurveyCsv.FILE));
@@ -194,6 +195,14 @@ public final class LocalSurvey {
             throw InputException.atOption("--draws", draws, stars + " stars x " + draws + " draws = " + stars * draws
                     + " draws, more than " + MAX_TOTAL_DRAWS, "at most " + Math.max(1, MAX_TOTAL_DRAWS / stars)
                     + " draws per star for this catalogue, or a catalogue split into parts");
+        }
+    }
+
+    private static void rename(Path from, Path to, Path shown) {
+        try {
+            Files.move(from, to, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException e) {
+            throw new OutputWriteException(shown, e);
         }
     }
 
