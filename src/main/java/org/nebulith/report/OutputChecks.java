@@ -39,10 +39,10 @@ final class OutputChecks {
             throw new InputException(Messages.OUTPUT_UNUSABLE, null, target, "it exists and is not a folder",
                     "a folder path for --out (a new name, or an earlier run folder with --force)");
         }
-        if (!replace) {
+        Optional<String> why = RunMarker.whyNotReplaceable(target);
+        if (!replace && why.isEmpty()) {
             throw new InputException(Messages.OUTPUT_EXISTS, null, target);
         }
-        Optional<String> why = RunMarker.whyNotReplaceable(target);
         if (why.isPresent()) {
             throw new InputException(Messages.OUTPUT_NOT_REPLACEABLE, null, target, why.get(),
                     "a new --out, or a run folder of an earlier nebulith run holding only its own files");

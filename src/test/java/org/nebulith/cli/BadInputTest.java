@@ -175,6 +175,9 @@ class BadInputTest {
         assertTrue(err().contains("no .nebulith-run marker"), err());
         assertEquals("keep", Files.readString(mine.resolve("precious.txt")));
         assertEquals(List.of("precious.txt"), Arrays.stream(mine.toFile().list()).toList());
+        assertEquals(2, run("sequence", "--T-step-K", "50", "--out", mine.toString()));
+        assertTrue(err().contains("refusing to replace it") && !err().contains("use --force"),
+                "without --force the message does not suggest it either: " + err());
     }
 
     @Test
