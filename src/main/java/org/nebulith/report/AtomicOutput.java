@@ -12,7 +12,6 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.regex.Pattern;
 
 import org.nebulith.errors.InputException;
-import org.nebulith.errors.Messages;
 
 /**
  * Writes outputs so that nothing half-written is ever visible under the final name.
