@@ -87,7 +87,7 @@ class SeparateProcessRunsTest {
     void theLockOfAKilledRunIsNamedAsStaleAndNotTaken() throws Exception {
         Path out = dir.resolve("S");
         Path lock = OutputLock.lockFile(out);
-        Process victim = start(dir, "sequence", "--T-step-K", "0.5", "--out", out.toString(), "-q");
+        Process victim = start(dir, "sequence", "--T-step-K", "0.01", "--out", out.toString(), "-q");
         long waited = 0;
         Path partial = dir.resolve(".S.partial-" + victim.pid() + "-1");
         while (!Files.exists(lock) || Files.size(lock) == 0 || !Files.isDirectory(partial)) {
