@@ -100,6 +100,13 @@ public final class RunInputs {
                     bytes.position(bytes.position() + n);
                 }
                 bytes.flip();
+                long asciiLines = asciiNewlines(bytes.array(), bytes.position(), bytes.limit());
+                if (asciiLines >= 0) { // plain ASCII (the common case) needs no decoding
+                    line += asciiLines;
+                    bytes.position(bytes.limit());
+                    bytes.compact();
+                    continue;
+                }
                 int start = bytes.position();
                 CoderResult result = decoder.decode(bytes, chars, end);
                 line += newlines(bytes.array(), start, bytes.position());
@@ -113,6 +120,18 @@ public final class RunInputs {
             }
         }
         return HexFormat.of().formatHex(digest.digest());
+    }
+
+    /** @return the line ends in the range, or -1 if it holds a byte that is not ASCII */
+    private static long asciiNewlines(final byte[] bytes, final int from, final int to) {
+        long n = 0;
+        for (int i = from; i < to; i++) {
+            if (bytes[i] < 0) {
+                return -1;
+            }
+            n += bytes[i] == '\n' ? 1 : 0;
+        }
+        return n;
     }
 
     private static long newlines(final byte[] bytes, final int from, final int to) {

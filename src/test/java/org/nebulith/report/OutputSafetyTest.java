@@ -166,6 +166,17 @@ class OutputSafetyTest {
         InputException e = assertThrows(InputException.class, () -> new RunInputs().add(file, "feeding zones"));
         assertEquals(file + ": line 3: byte 0xFF is not UTF-8 text; accepted: UTF-8 text (save the file as UTF-8;"
                 + " plain ASCII is UTF-8)", e.getMessage());
+        StringBuilder big = new StringBuilder();
+        for (int i = 1; i < 20_000; i++) {
+            big.append(i % 7 == 0 ? "r\u00e9gion " : "row ").append(i).append('\n');
+        }
+        Path far = dir.resolve("far.csv");
+        byte[] head = big.toString().getBytes(StandardCharsets.UTF_8);
+        Files.write(far, head);
+        Files.write(far, new byte[] {'x', (byte) 0xC3, '\n'}, java.nio.file.StandardOpenOption.APPEND);
+        InputException farError = assertThrows(InputException.class, () -> new RunInputs().add(far, "catalogue"));
+        assertTrue(farError.getMessage().startsWith(far + ": line 20000: byte 0xC3 is not UTF-8 text"),
+                farError.getMessage());
         Path fine = Files.writeString(dir.resolve("ok.csv"), "\uFEFFzone,\u00e9\n");
         assertEquals(1, new RunInputs().add(fine, "zones").files().size());
     }
