@@ -61,6 +61,9 @@ public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
 
+    /** Most radii of the radial profile (each is an equilibrium solve). */
+    static final int MAX_PROFILE_POINTS = 10_000;
+
     @Mixin
     private ChemistryOptions chemistry;
 
@@ -97,13 +100,24 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
+            throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
+                    : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
+        }
         ElementAbundances gas = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
-        if (profilePoints < 2) {
-            throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
+        ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
+        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
+                .format(context.started());
+        try (RunFolder run = context.openRunFolder(runName)) {
+            return compute(context, run, gas, spec, diskModel, zoneList);
         }
+    }
+
+    private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
+                        List<FeedingZone> zoneList) {
         FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
                 new CoreOptions(!sulfideInMantle, coreSi, coreO));
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
@@ -117,33 +131,33 @@ public final class PlanetCommand extends RunCommand {
             List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
                     scanMax(diskModel, zoneList), profilePoints);
             progress.step();
-            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+            return writeOutputs(context, run, gas, diskModel, spec, planets, scan);
         }
     }
 
-    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
-                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
-        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
-                .format(context.started());
-        try (RunFolder run = context.openRunFolder(runName)) {
-            List<Report.Setting> settings = new ArrayList<>();
-            context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-            List<Report.Citation> sources = new ArrayList<>();
-            for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
-                sources.add(new Report.Citation(e.getKey(), e.getValue()));
-            }
-            PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
-                    "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
-                    chemistry.ciReference());
-            PlanetReportWriter.write(run, data);
-            Path done = run.commit();
-            for (ZonePlanet zp : planets) {
-                context.out().println(PlanetReportWriter.summary(zp));
-            }
-            context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+    private int writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
+                             SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+        List<Report.Setting> settings = new ArrayList<>();
+        context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
+        List<Report.Citation> sources = new ArrayList<>();
+        for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
+            sources.add(new Report.Citation(e.getKey(), e.getValue()));
         }
+        PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
+                "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
+                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
+                chemistry.ciReference());
+        PlanetReportWriter.write(run, data);
+        Path done = run.commit();
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
+        }
+        for (ZonePlanet zp : planets) {
+            org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.cautions(context.verbosity() == Verbosity.QUIET ? PlanetReportWriter.cautions(planets)
+                : PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
         return ExitCodes.OK;
     }
 

@@ -145,6 +145,10 @@ public final class SurveyBenchCommand extends RunCommand {
         out.println(Double.isNaN(f.firstEquilibriumShare()) ? "first equilibrium of each draw: not timed by this estimator"
                 : String.format(Locale.ROOT, "first equilibrium of each draw: %.1f %% of the estimate time",
                         100 * f.firstEquilibriumShare()));
+        if (f.failedStars() > 0 || f.failedDraws() > 0) {
+            out.println("failed (recorded and left out, as in a survey): " + f.failedStars() + " stars, " + f.failedDraws()
+                    + " draws");
+        }
         out.println(Double.isNaN(f.cpuSeconds()) ? "CPU time: not reported by this JVM"
                 : String.format(Locale.ROOT, "CPU time of the process: %.2f s (%.2f ms per draw; steadier than the wall"
                         + " clock on a shared machine)", f.cpuSeconds(), f.cpuMillisPerDraw()));

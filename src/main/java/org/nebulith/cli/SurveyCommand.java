@@ -48,7 +48,7 @@ public class SurveyCommand extends RunCommand {
     private Path catalogue;
 
     @Option(names = "--draws", paramLabel = "N", defaultValue = "1000",
-            description = "Monte Carlo draws per star (default: ${DEFAULT-VALUE}).")
+            description = "Monte Carlo draws per star, at most 100000, and at most 1e8 in all (default: ${DEFAULT-VALUE}).")
     private int draws;
 
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
@@ -56,7 +56,7 @@ public class SurveyCommand extends RunCommand {
     private long seed;
 
     @Option(names = "--threads", paramLabel = "N",
-            description = "Worker threads (default: all processors); results do not depend on it.")
+            description = "Worker threads, at most 4 per processor (default: all processors); results do not depend on it.")
     private Integer threads;
 
     @Option(names = "--disk", paramLabel = "NAME|FILE", description = "Disk preset or file (default: the planet estimate's).")
@@ -69,8 +69,16 @@ public class SurveyCommand extends RunCommand {
             description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
     private String solarReference;
 
-    @Option(names = "--skip-bad", description = "Skip bad catalogue rows and failing stars (listed) instead of stopping.")
+    @Option(names = "--skip-bad", description = "Skip bad catalogue rows (listed in survey-stars.csv) instead of stopping.")
     private boolean skipBad;
+
+    @Option(names = "--max-failed-fraction", paramLabel = "F", defaultValue = "0.01",
+            description = "Stop (exit 3, resumable) once failed draws exceed this fraction of the run's draws"
+                    + " (default: ${DEFAULT-VALUE}); failed draws are listed in failures.csv.")
+    private double maxFailedFraction;
+
+    @Option(names = "--strict", description = "Stop (exit 3, resumable) at the first failed draw or star.")
+    private boolean strict;
 
     @Option(names = "--resume", description = "Continue an earlier or interrupted run in the output folder.")
     private boolean resume;
@@ -110,8 +118,14 @@ public class SurveyCommand extends RunCommand {
             throw InputException.atOption("--draws", draws, "must be at least 1", "an integer >= 1");
         }
         int workers = threads == null ? SurveyRunner.defaultThreads() : threads;
-        if (workers < 1) {
-            throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
+        if (workers < 1 || workers > maxThreads()) {
+            throw InputException.atOption("--threads", workers, workers < 1 ? "must be at least 1"
+                    : "more than 4 per processor", "an integer from 1 to " + maxThreads() + " (4 x "
+                    + Runtime.getRuntime().availableProcessors() + " processors)");
+        }
+        if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
+            throw InputException.atOption("--max-failed-fraction", maxFailedFraction, "must be a fraction",
+                    "a number from 0 to 1");
         }
         context.input(catalogue, "catalogue");
         registerIfFile(context, disk, "disk");
@@ -120,7 +134,7 @@ public class SurveyCommand extends RunCommand {
         String base = catalogue.getFileName().toString().replaceFirst("\\.csv$", "");
         Path folder = context.outputFolder("survey-" + (base.matches("[A-Za-z0-9._-]+") ? base : "catalogue"));
         LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,
-                skipBad, resume, context.force());
+                skipBad, resume, context.force(), maxFailedFraction, strict);
         NebulithCommand root = (NebulithCommand) spec.root().userObject();
         LocalSurvey.Log log = new LocalSurvey.Log() {
             @Override
@@ -140,8 +154,15 @@ public class SurveyCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
                 + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
                 seconds, workers));
-        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt and survey-chart.png/.svg");
+        context.info("wrote " + r.survey() + " with failures.csv, survey-stars.csv, survey-notes.txt and"
+                + " survey-chart.png/.svg");
+        context.out().println(r.failureLine());
         return ExitCodes.OK;
+    }
+
+    /** @return the most worker threads accepted: 4 per processor */
+    static int maxThreads() {
+        return 4 * Runtime.getRuntime().availableProcessors();
     }
 
     private SolarReference solar() {

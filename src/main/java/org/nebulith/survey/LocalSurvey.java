@@ -16,28 +16,43 @@ import java.util.function.LongFunction;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
+import org.nebulith.errors.NumericalException;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.OutputWriteException;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.RunMarker;
 import org.nebulith.report.RunInputs;
 
 /**
  * A whole survey on this machine: validating pass over the catalogue, then the streaming compute
- * pass ({@link SurveyResume} for stars already done, {@link SurveyRunner} for the rest), writing
- * into the output folder:
+ * pass ({@link SurveyResume} for stars already done, {@link SurveyRunner} for the rest). Every file
+ * is built in the run's hidden, resumable folder ({@link RunFolder#openResumable}, checked and
+ * locked before anything is computed) and all appear together when it is renamed into place:
  * <ul>
- * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into the hidden {@code .survey.csv.partial}
- *     (flushed after every star) and renamed at the end; an interrupted or failed run leaves the
- *     partial file for {@code --resume} and nothing under the final name;</li>
+ * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into {@code .survey.csv.partial} there
+ *     (flushed after every star); an interrupted or failed run keeps that folder for
+ *     {@code --resume} and leaves nothing under the final name;</li>
+ * <li>{@code failures.csv} ({@link SurveyFailures}): every failed estimate, streamed the same way
+ *     into {@code .failures.csv.partial} (a star's failures before its rows);</li>
  * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
- *     cautions) and {@code survey-chart.png/.svg} ({@link SurveyChart}), written at the end.</li>
+ *     cautions), {@code survey-chart.png/.svg} ({@link SurveyChart}), {@code report.html} and
+ *     {@code summary.md}, written at the end.</li>
  * </ul>
- * The files do not depend on the thread count.
+ * A failed draw does not stop the run; the run stops (a {@link NumericalException}, exit 3, the
+ * partial files kept for {@code --resume}) when the failed draws exceed the request's fraction of
+ * the run's draws, or at the first failure when it is strict.
+ * The files do not depend on the thread count. Files named in the catalogue's disk and zones
+ * columns are registered as inputs first, so no output can replace them.
  */
 public final class LocalSurvey {
 
     static final String PARTIAL = ".survey.csv.partial";
     static final String NEXT = ".survey.csv.next";
     static final String NOTES = "survey-notes.txt";
+    static final String FAILURES_PARTIAL = ".failures.csv.partial";
+    static final String FAILURES_NEXT = ".failures.csv.next";
+    /** Default of {@code --max-failed-fraction}. */
+    public static final double DEFAULT_MAX_FAILED_FRACTION = 0.01;
     private static final int SHOWN_PROBLEMS = 100;
 
     /**
@@ -46,12 +61,26 @@ public final class LocalSurvey {
      * @param folder    the output folder
      * @param settings  the run settings
      * @param threads   worker threads
-     * @param skipBad   skip bad rows and failing stars (listed) instead of stopping
+     * @param skipBad   skip bad catalogue rows (listed) instead of stopping
      * @param resume    continue an earlier run in the folder
      * @param force     replace an earlier run in the folder
+     * @param maxFailedFraction stop once the failed draws exceed this fraction of the run's draws, in [0, 1]
+     * @param strict    stop at the first failed estimate
      */
     public record Request(Path catalogue, String shownName, Path folder, SurveySettings settings, int threads,
-                          boolean skipBad, boolean resume, boolean force) {
+                          boolean skipBad, boolean resume, boolean force, double maxFailedFraction, boolean strict) {
+        public Request {
+            if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
+                throw new IllegalArgumentException("max failed fraction must be in [0, 1], got " + maxFailedFraction);
+            }
+        }
+
+        /** A request with the default failure policy ({@value #DEFAULT_MAX_FAILED_FRACTION}, not strict). */
+        public Request(Path catalogue, String shownName, Path folder, SurveySettings settings, int threads,
+                       boolean skipBad, boolean resume, boolean force) {
+            this(catalogue, shownName, folder, settings, threads, skipBad, resume, force, DEFAULT_MAX_FAILED_FRACTION,
+                    false);
+        }
     }
 
     /** Where messages go. */
@@ -67,11 +96,18 @@ public final class LocalSurvey {
      * @param stars    stars in survey.csv
      * @param resumed  of which taken over from an earlier run
      * @param skipped  bad catalogue rows skipped
-     * @param failed   stars whose estimate failed (skipped)
+     * @param failed   stars whose nominal estimate failed
      * @param draws    draws computed in this run
+     * @param failedDraws draws that failed, in the whole survey (resumed stars included)
+     * @param runDraws    draws of the whole survey (stars x draws)
      * @param survey   the survey table
      */
-    public record Result(long stars, long resumed, long skipped, long failed, long draws, Path survey) {
+    public record Result(long stars, long resumed, long skipped, long failed, long draws, long failedDraws,
+                         long runDraws, Path survey) {
+        /** @return the closing line: "k of N draws failed (failures.csv)" */
+        public String failureLine() {
+            return failedDraws + " of " + runDraws + " draws failed (" + SurveyFailures.FILE + ")";
+        }
     }
 
     private LocalSurvey() {
@@ -89,43 +125,76 @@ public final class LocalSurvey {
      */
     public static Result run(Request request, EstimatorCache estimators, RunInputs inputs, LongFunction<Progress> progress,
                              Log log) throws IOException {
+        long stars = CatalogueCheck.registerNamedFiles(request.catalogue(), request.shownName(), inputs);
+        checkWork(stars, request.settings().draws());
+        try (RunFolder run = RunFolder.openResumable(request.folder(), request.force(), request.resume(), inputs,
+                RunMarker.now("survey", version()))) {
+            boolean unfinished = run.resumed();
+            Result result;
+            try {
+                result = compute(request, estimators, inputs, progress, log, run);
+            } catch (IOException | RuntimeException | Error e) {
+                if (Files.exists(run.workingFolder().resolve(PARTIAL)) && hasStars(run.workingFolder().resolve(PARTIAL))) {
+                    log.warn("the survey stopped; the stars done so far are kept in " + run.workingFolder()
+                            + "; run again with --resume to continue");
+                } else if (!unfinished) {
+                    run.discardOnClose();
+                }
+                throw e;
+            }
+            return result;
+        }
+    }
+
+    private static Result compute(Request request, EstimatorCache estimators, RunInputs inputs,
+                                  LongFunction<Progress> progress, Log log, RunFolder run) throws IOException {
         CatalogueCheck check = CatalogueCheck.run(request.catalogue(), request.settings(), estimators);
         reportProblems(request, check, log);
-        Path folder = request.folder();
+        Path folder = run.workingFolder();
         Path partial = folder.resolve(PARTIAL);
-        Path survey = folder.resolve(SurveyCsv.FILE);
-        checkOutputs(request, inputs, partial, survey);
-        Files.createDirectories(folder);
-        Path source = !request.resume() ? null : Files.exists(partial) ? partial : Files.exists(survey) ? survey : null;
+        Path earlier = request.folder().resolve(SurveyCsv.FILE);
+        Path source = !request.resume() ? null : Files.exists(partial) ? partial : Files.exists(earlier) ? earlier : null;
         if (request.resume() && source == null) {
-            log.info("--resume: no earlier survey in " + folder + "; starting with the first star");
+            log.info("--resume: no earlier survey in " + request.folder() + "; starting with the first star");
+        }
+        if (source != null) {
+            RunInputs.checkText(source, source == partial ? run.target().resolve(SurveyCsv.FILE) + " (unfinished, in "
+                    + folder + ")" : source.toString());
         }
         Map<Long, String> reasons = new TreeMap<>();
         check.problems().forEach(p -> reasons.putIfAbsent(p.line(), p.text(request.shownName())));
         Path starsPartial = folder.resolve("." + StarsTable.FILE + ".partial");
         Path writing = source == null ? partial : folder.resolve(NEXT);
+        Path failuresPartial = folder.resolve(FAILURES_PARTIAL);
+        Path failuresWriting = source == null ? failuresPartial : folder.resolve(FAILURES_NEXT);
         Counter counter = new Counter();
+        counter.runDraws = check.goodRows() * request.settings().draws();
         boolean finished = false;
         try (Progress bar = progress.apply(check.goodRows() * request.settings().draws());
              CatalogueReader reader = CatalogueReader.open(request.catalogue());
-             BufferedWriter starsOut = Files.newBufferedWriter(starsPartial, StandardCharsets.UTF_8)) {
+             BufferedWriter starsOut = writer(starsPartial, run.target().resolve(StarsTable.FILE))) {
             StarsTable stars = new StarsTable(starsOut, check.bad(), reasons, request.settings().solar());
             Iterator<StarRow> rows = goodRows(reader, check.bad());
-            OutputSink sink = new OutputSink(Files.newBufferedWriter(writing, StandardCharsets.UTF_8), stars, counter, log);
+            OutputSink sink = new OutputSink(writer(writing, run.target().resolve(SurveyCsv.FILE)),
+                    writer(failuresWriting, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
             try {
                 sink.header();
                 if (source != null) {
-                    try (ExistingSurvey existing = ExistingSurvey.open(source)) {
-                        counter.resumed = SurveyResume.copyDone(existing, rows, request.settings(), estimators,
-                                request.skipBad(), bar, sink);
+                    Path oldFailures = source.equals(partial) ? failuresPartial
+                            : request.folder().resolve(SurveyFailures.FILE);
+                    try (ExistingSurvey existing = ExistingSurvey.open(source);
+                         ExistingFailures old = ExistingFailures.open(oldFailures)) {
+                        counter.resumed = SurveyResume.copyDone(existing, old, rows, request.settings(), estimators,
+                                bar, sink);
                     }
                     sink.close();
                     Files.move(writing, partial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-                    sink = new OutputSink(Files.newBufferedWriter(partial, StandardCharsets.UTF_8,
-                            StandardOpenOption.APPEND), stars, counter, log);
+                    Files.move(failuresWriting, failuresPartial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                    sink = new OutputSink(appender(partial, run.target().resolve(SurveyCsv.FILE)),
+                            appender(failuresPartial, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
                 }
                 SurveyRunner.Summary s = SurveyRunner.run(rows, request.settings(), estimators, request.threads(),
-                        request.skipBad(), bar, sink);
+                        bar, sink);
                 counter.draws = s.draws();
             } finally {
                 sink.close();
@@ -136,21 +205,77 @@ public final class LocalSurvey {
             if (!finished) {
                 Files.deleteIfExists(starsPartial);
                 Files.deleteIfExists(folder.resolve(NEXT));
-                if (Files.exists(partial)) {
-                    log.warn("the survey stopped; the stars done so far are kept in " + partial
-                            + "; run again with --resume to continue");
-                }
+                Files.deleteIfExists(folder.resolve(FAILURES_NEXT));
             }
         }
         long skipped = check.bad().size();
-        AtomicOutput.writeText(folder.resolve(NOTES), SurveyNotes.text(request, counter.stars, skipped, counter.failed),
-                true, inputs);
-        Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        byte[] png = SurveyChart.write(partial, folder, inputs);
-        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed);
-        SurveyReport.write(folder, notes, png, folder.resolve(StarsTable.FILE), inputs);
-        Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, survey);
+        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed, counter.failedDraws,
+                counter.runDraws);
+        run.writeText(NOTES, notes);
+        rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
+        byte[] png = SurveyChart.write(partial, run);
+        SurveyReport.write(run, notes, png, run.file(StarsTable.FILE), inputs);
+        rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));
+        rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
+        Path done = run.commit();
+        return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, counter.failedDraws,
+                counter.runDraws, done.resolve(SurveyCsv.FILE));
+    }
+
+    /** Most draws per star (memory: about 500 bytes a draw per star in flight). */
+    public static final int MAX_DRAWS = 100_000;
+
+    /** Most draws of one survey, draws per star times stars (weeks of work beyond). */
+    public static final long MAX_TOTAL_DRAWS = 100_000_000L;
+
+    private static void checkWork(long stars, int draws) {
+        if (draws < 1 || draws > MAX_DRAWS) {
+            throw InputException.atOption("--draws", draws, "outside 1 to " + MAX_DRAWS + " draws per star",
+                    "an integer from 1 to " + MAX_DRAWS);
+        }
+        if (stars * (long) draws > MAX_TOTAL_DRAWS) {
+            throw InputException.atOption("--draws", draws, stars + " stars x " + draws + " draws = " + stars * draws
+                    + " draws, more than " + MAX_TOTAL_DRAWS, "at most " + Math.max(1, MAX_TOTAL_DRAWS / stars)
+                    + " draws per star for this catalogue, or a catalogue split into parts");
+        }
+    }
+
+    private static void rename(Path from, Path to, Path shown) {
+        try {
+            Files.move(from, to, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException e) {
+            throw new OutputWriteException(shown, e);
+        }
+    }
+
+    private static BufferedWriter writer(Path file, Path shown) throws IOException {
+        return new BufferedWriter(RunFolder.named(Files.newBufferedWriter(file, StandardCharsets.UTF_8), shown));
+    }
+
+    private static BufferedWriter appender(Path file, Path shown) throws IOException {
+        return new BufferedWriter(RunFolder.named(Files.newBufferedWriter(file, StandardCharsets.UTF_8,
+                StandardOpenOption.APPEND), shown));
+    }
+
+    private static boolean hasStars(Path partial) {
+        try (var lines = Files.lines(partial, StandardCharsets.UTF_8)) {
+            return lines.limit(2).count() > 1;
+        } catch (IOException | java.io.UncheckedIOException e) {
+            return true;
+        }
+    }
+
+    private static String version() {
+        String v = LocalSurvey.class.getPackage().getImplementationVersion();
+        return v == null || v.isBlank() ? "dev" : v;
+    }
+
+    /**
+     * @param folder a survey's output folder
+     * @return where an interrupted run keeps its partial survey table (for --resume)
+     */
+    public static Path partialTable(Path folder) {
+        return RunFolder.unfinished(folder).resolve(PARTIAL);
     }
 
     private static void reportProblems(Request request, CatalogueCheck check, Log log) {
@@ -176,22 +301,6 @@ public final class LocalSurvey {
                     : "a header of star, X_H, X_H_err columns (header problems cannot be skipped)");
         }
         log.warn("--skip-bad: skipping " + check.bad().size() + " bad row(s); they are listed in " + StarsTable.FILE);
-    }
-
-    private static void checkOutputs(Request request, RunInputs inputs, Path partial, Path survey) {
-        for (String name : List.of(SurveyCsv.FILE, StarsTable.FILE, NOTES, PARTIAL, NEXT)) {
-            inputs.checkNotInput(request.folder().resolve(name));
-        }
-        if (request.resume() || request.force()) {
-            return;
-        }
-        if (Files.exists(survey)) {
-            throw new InputException(Messages.OUTPUT_EXISTS, null, survey);
-        }
-        if (Files.exists(partial)) {
-            throw InputException.inFile(partial, "an interrupted survey left its partial results here",
-                    "--resume to continue it, or --force to start again");
-        }
     }
 
     private static Iterator<StarRow> goodRows(CatalogueReader reader, Map<Long, String> bad) {
@@ -234,47 +343,69 @@ public final class LocalSurvey {
         long resumed;
         long failed;
         long draws;
+        long failedDraws;
+        long runDraws;
     }
 
-    /** Writes each star's block (flushed, so an interruption keeps whole stars) and its notes row. */
+    /**
+     * Writes each star's failures, then its block (both flushed, so an interruption keeps whole stars),
+     * and its stars-table row; stops the run when the failure policy says so.
+     */
     private static final class OutputSink implements SurveyRunner.Sink {
         private final BufferedWriter out;
+        private final BufferedWriter failures;
         private final StarsTable stars;
         private final Counter counter;
-        private final Log log;
+        private final Request request;
         private boolean closed;
 
-        OutputSink(BufferedWriter out, StarsTable stars, Counter counter, Log log) {
+        OutputSink(BufferedWriter out, BufferedWriter failures, StarsTable stars, Counter counter, Request request) {
             this.out = out;
+            this.failures = failures;
             this.stars = stars;
             this.counter = counter;
-            this.log = log;
+            this.request = request;
         }
 
         void header() throws IOException {
             out.write(SurveyCsv.HEADER);
             out.flush();
+            failures.write(SurveyFailures.HEADER);
+            failures.flush();
         }
 
         @Override
-        public void completed(StarRow row, List<SurveyRow> rows, String block) throws IOException {
-            out.write(block);
+        public void completed(SurveyRunner.StarOutput star) throws IOException {
+            failures.write(star.failures());
+            failures.flush();
+            out.write(star.block());
             out.flush();
-            stars.computed(row);
-            counter.stars++;
-        }
-
-        @Override
-        public void failed(StarRow row, StarJobException failure) throws IOException {
-            log.warn("--skip-bad: skipping " + failure.getMessage());
-            stars.failed(row, failure);
-            counter.failed++;
+            int draws = request.settings().draws();
+            if (star.starFailure() == null) {
+                stars.computed(star.row(), star.failedDraws(), draws);
+                counter.stars++;
+            } else {
+                stars.failed(star.row(), star.starFailure());
+                counter.failed++;
+            }
+            counter.failedDraws += star.failedDraws();
+            if (request.strict() && !star.failures().isEmpty()) {
+                throw new NumericalException(Messages.STRICT_FAILURE, null, SurveyFailures.describeFirst(star.failures()));
+            }
+            if (counter.failedDraws > request.maxFailedFraction() * counter.runDraws) {
+                throw new NumericalException(Messages.TOO_MANY_FAILED_DRAWS, null, counter.failedDraws,
+                        counter.runDraws, request.maxFailedFraction());
+            }
         }
 
         void close() throws IOException {
             if (!closed) {
                 closed = true;
-                out.close();
+                try {
+                    out.close();
+                } finally {
+                    failures.close();
+                }
             }
         }
     }

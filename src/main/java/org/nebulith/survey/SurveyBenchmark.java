@@ -36,9 +36,11 @@ public final class SurveyBenchmark {
      * @param drawMillis       wall time of every draw, sorted [ms]
      * @param firstEquilibriumShare share of the estimate time spent in each estimate's first
      *                         equilibrium (NaN if the estimator does not time itself)
+     * @param failedStars      stars whose nominal estimate failed (recorded, as in a survey)
+     * @param failedDraws      draws whose estimate failed (recorded and left out, as in a survey)
      */
     public record Figures(int stars, int draws, int threads, double seconds, long equilibria, double cpuSeconds,
-                          double[] drawMillis, double firstEquilibriumShare) {
+                          double[] drawMillis, double firstEquilibriumShare, long failedStars, long failedDraws) {
         /** @return draws computed */
         public long totalDraws() {
             return (long) stars * draws;
@@ -113,18 +115,13 @@ public final class SurveyBenchmark {
         long firstBefore = cache.firstEquilibriumNanos();
         long[] times = new long[rows.size() * draws];
         AtomicInteger next = new AtomicInteger();
+        long[] failedDraws = {0};
+        long[] failedStars = {0};
         double cpuStart = processCpuSeconds();
         long start = System.nanoTime();
-        SurveyRunner.run(rows.iterator(), settings, cache, threads, false, progress, new SurveyRunner.Sink() {
-            @Override
-            public void completed(StarRow row, List<SurveyRow> r, String block) {
-                // discarded: the benchmark times the computation
-            }
-
-            @Override
-            public void failed(StarRow row, StarJobException failure) {
-                // not called: failures stop the benchmark
-            }
+        SurveyRunner.run(rows.iterator(), settings, cache, threads, progress, star -> {
+            failedDraws[0] += star.failedDraws();
+            failedStars[0] += star.starFailure() != null ? 1 : 0;
         }, nanos -> times[next.getAndIncrement()] = nanos);
         double seconds = (System.nanoTime() - start) / 1e9;
         double cpu = processCpuSeconds() - cpuStart;
@@ -135,7 +132,8 @@ public final class SurveyBenchmark {
         Arrays.sort(ms);
         long estimate = cache.estimateNanos() - estimateBefore;
         double share = estimate > 0 ? (double) (cache.firstEquilibriumNanos() - firstBefore) / estimate : Double.NaN;
-        return new Figures(rows.size(), draws, threads, seconds, cache.equilibria() - before, cpu, ms, share);
+        return new Figures(rows.size(), draws, threads, seconds, cache.equilibria() - before, cpu, ms, share,
+                failedStars[0], failedDraws[0]);
     }
 
     /** @return CPU time used by this process so far [s], NaN if the JVM does not report it */

@@ -13,8 +13,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.knowm.xchart.XYChart;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunInputs;
+import org.nebulith.report.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
@@ -34,7 +33,7 @@ final class SurveyChart {
     }
 
     /** @return the PNG bytes of the chart, or null if there is nothing to draw */
-    static byte[] write(Path survey, Path folder, RunInputs inputs) throws IOException {
+    static byte[] write(Path survey, RunFolder run) throws IOException {
         List<SurveyScatter.Point> stars = new ArrayList<>();
         List<SurveyScatter.Point> planets = new ArrayList<>();
         Map<String, double[]> pending = new HashMap<>();
@@ -50,7 +49,7 @@ final class SurveyChart {
                     }
                 }
                 int slot = r.get("quantity").equals("Fe_Si_molar") ? 0 : r.get("quantity").equals("Mg_Si_molar") ? 3 : -1;
-                if (slot >= 0) {
+                if (slot >= 0 && !r.get("median").isEmpty()) {
                     double[] v = pending.computeIfAbsent(r.get("zone"), z -> new double[6]);
                     v[slot] = Double.parseDouble(r.get("median"));
                     v[slot + 1] = Double.parseDouble(r.get("p16"));
@@ -66,9 +65,8 @@ final class SurveyChart {
         }
         XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"), out -> ChartRenderer.vector(chart, ChartFormat.SVG, out),
-                true, inputs);
+        run.write(BASE + ".png", out -> out.write(png));
+        run.write(BASE + ".svg", out -> ChartRenderer.vector(chart, ChartFormat.SVG, out));
         return png;
     }
 

@@ -12,7 +12,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
 import org.nebulith.report.Table;
 import org.nebulith.report.chart.ChartRenderer;
@@ -31,7 +31,7 @@ final class SurveyReport {
     private SurveyReport() {
     }
 
-    static void write(Path folder, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
+    static void write(RunFolder run, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
         Report report = new Report("Nebulith host-star survey", "nebulith survey", org.nebulith.report.RunFolder.class
                 .getPackage().getImplementationVersion() == null ? "dev"
                 : org.nebulith.report.RunFolder.class.getPackage().getImplementationVersion(), Instant.now());
@@ -49,16 +49,18 @@ final class SurveyReport {
         }
         r.table(stars(starsCsv), "survey-stars.csv (first " + SHOWN_STARS + " stars)");
         report.caution("Only the catalogue's random errors are propagated, not systematics between abundance analyses.");
+        report.caution("Draws that failed (failures.csv) or to which a quantity does not apply are left out of its "
+                + "percentiles (n_draws in survey.csv says how many remain); they are not a random sample.");
         report.caution("Each draw is an equilibrium-condensation planet estimate: ideal solutions, no kinetics, no "
                 + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
         report.inputs(inputs);
-        for (String f : List.of("survey.csv", StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
+        for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
                 SurveyChart.BASE + ".svg", "summary.md")) {
             report.outputFile(f);
         }
         report.finish(Instant.now());
-        AtomicOutput.writeText(folder.resolve("report.html"), HtmlReportWriter.write(report), true, inputs);
-        AtomicOutput.writeText(folder.resolve("summary.md"), MarkdownSummaryWriter.write(report), true, inputs);
+        run.writeText("report.html", HtmlReportWriter.write(report));
+        run.writeText("summary.md", MarkdownSummaryWriter.write(report));
     }
 
     private static Table stars(Path csv) throws IOException {

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
@@ -18,7 +19,9 @@ import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
+import org.nebulith.zones.IntegrationQuality;
 import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
 
 /** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
 public final class PlanetReportWriter {
@@ -75,6 +78,22 @@ public final class PlanetReportWriter {
     }
 
     /**
+     * @param planets the zone planets, inner first
+     * @return the standing {@link #CAUTIONS}, then one per pair of overlapping feeding zones
+     */
+    public static List<String> cautions(List<ZonePlanet> planets) {
+        List<String> all = new java.util.ArrayList<>(CAUTIONS);
+        List<org.nebulith.zones.FeedingZone> zones = new java.util.ArrayList<>();
+        planets.forEach(p -> zones.add(p.inventory().zone()));
+        org.nebulith.zones.ZoneFileReader.overlaps(zones).forEach(line -> all.add(capitalised(line) + "."));
+        return all;
+    }
+
+    private static String capitalised(String line) {
+        return Character.toUpperCase(line.charAt(0)) + line.substring(1);
+    }
+
+    /**
      * @param run  the open run folder (committed by the caller)
      * @param data the run's data
      * @return the report (for printing a summary)
@@ -101,6 +120,7 @@ public final class PlanetReportWriter {
         Report.Section planets = report.section("Planets");
         for (ZonePlanet zp : data.planets()) {
             planets.paragraph(summary(zp));
+            ZoneNotices.of(zp).forEach(n -> planets.paragraph("Notice: " + n + "."));
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
@@ -111,8 +131,12 @@ public final class PlanetReportWriter {
                 .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
                         + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
                 .table(phases, "zone-phases.csv: what each zone collected");
+        Report.Section integration = report.section("Radial integration");
+        for (ZonePlanet zp : data.planets()) {
+            integration.paragraph(integrationNote(zp));
+        }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
-        CAUTIONS.forEach(report::caution);
+        cautions(data.planets()).forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
@@ -137,7 +161,7 @@ public final class PlanetReportWriter {
         if (c.hasRock()) {
             sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
         }
-        if (c.oxides() != null && c.oxides().hasMgNumber()) {
+        if (c.hasMgNumber()) {
             sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
@@ -145,6 +169,23 @@ public final class PlanetReportWriter {
         }
         sb.append('.');
         return sb.toString();
+    }
+
+    /**
+     * @param zp a zone planet
+     * @return the run note on its radial integral: evaluations, the worst panel, its radius and its
+     *         estimated error, and panels accepted where the error stopped falling
+     */
+    public static String integrationNote(ZonePlanet zp) {
+        ZoneInventory inv = zp.inventory();
+        IntegrationQuality q = inv.quality();
+        if (q.fixedRule()) {
+            return zp.zoneName() + ": fixed composite rule, " + inv.evaluations() + " evaluations (no error estimate).";
+        }
+        return String.format(java.util.Locale.ROOT, "%s: %d evaluations, %d fronts; worst panel %.6g-%.6g AU"
+                + " (r = %.6g AU), estimated error %.2g relative; whole zone %.2g relative; %d panel(s) accepted"
+                + " where the error stopped falling when halved.", zp.zoneName(), inv.evaluations(), inv.fronts().size(),
+                q.worstLoAU(), q.worstHiAU(), q.worstRadiusAU(), q.worstRelError(), q.totalRelError(), q.acceptedPanels());
     }
 
     private static Table keyRows(List<ZonePlanet> planets) {
@@ -158,7 +199,7 @@ public final class PlanetReportWriter {
             PlanetComposition c = zp.planet().require();
             t.row(zp.zoneName(), c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar"),
                     c.hasRock() ? c.coreMassFraction() : null,
-                    c.oxides() != null && c.oxides().hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
+                    c.hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
         }
         return t;
     }
