@@ -160,6 +160,10 @@ public final class PresetFile {
                             + entry.value() + "' command, not '" + command + "'", "nebulith " + entry.value()
                             + " --preset ...");
                 }
+            } else if (RetiredOptions.byKey(entry.key()).isPresent() && !accepted.contains(entry.key())) {
+                RetiredOptions.Renamed r = RetiredOptions.byKey(entry.key()).get();
+                throw InputException.atField(file, entry.line(), entry.key(), "renamed", r.now().substring(2)
+                        + " (" + r.meaning() + ")");
             } else if (!DESCRIPTION.equals(entry.key()) && !accepted.contains(entry.key())) {
                 throw InputException.atField(file, entry.line(), entry.key(), "not a setting of the '" + command
                         + "' command", String.join(", ", accepted));

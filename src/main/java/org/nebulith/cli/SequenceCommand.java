@@ -37,7 +37,7 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code nebulith sequence}: the condensation sequence of a gas cooling at constant pressure or
- * along a P-T path, in equilibrium (default) or with a fraction of each step's condensates isolated.
+ * along a P-T path, in equilibrium (default) or with a fraction of each step's new condensate withdrawn from further reaction.
  * Writes the four tables and the run notes into the run folder; prints the cautions on stderr.
  */
 @Command(name = "sequence",
@@ -52,7 +52,7 @@ import picocli.CommandLine.Option;
         footer = {
             "  nebulith sequence --composition protosolar-lodders2003 --P-bar 1e-4",
             "  nebulith sequence --P-bar 1e-3 --T-max-K 1800 --T-min-K 400 --T-step-K 2",
-            "  nebulith sequence --isolation 1 --out reports/fractional     (fully fractional)",
+            "  nebulith sequence --removal-fraction 1 --out reports/fractional   (fractional)",
             "  nebulith sequence --dust-enrichment 10 --variant B88 --out reports/dusty-B88",
             "  nebulith sequence --path my-path.csv --out reports/cooling-path",
             "      (path CSV header: T_K,P_bar; log-linear in P between rows, constant beyond)",
@@ -85,10 +85,10 @@ public final class SequenceCommand extends RunCommand {
             description = "Grid step [K]; boundaries are bisected to 0.05 K anyway. Default: ${DEFAULT-VALUE}.")
     private double tStepK;
 
-    @Option(names = "--isolation", paramLabel = "PHI", defaultValue = "0",
-            description = "Fraction in [0, 1] of each step's new condensates removed from further reaction: "
-                    + "0 = equilibrium condensation (default), 1 = fully fractional.")
-    private double isolation;
+    @Option(names = "--removal-fraction", paramLabel = "F", defaultValue = "0",
+            description = "Fraction of each step's new condensate withdrawn from further reaction; "
+                    + "0 = equilibrium (default), 1 = fractional.")
+    private double removalFraction;
 
     @Override
     protected int execute(final RunContext context) throws IOException {
@@ -187,11 +187,11 @@ public final class SequenceCommand extends RunCommand {
             throw InputException.atOption("--T-step-K", tStepK, "not a step inside the range",
                     "a number of K > 0 and at most T-max - T-min");
         }
-        if (!(isolation >= 0 && isolation <= 1)) {
-            throw InputException.atOption("--isolation", isolation, "outside [0, 1]",
+        if (!(removalFraction >= 0 && removalFraction <= 1)) {
+            throw InputException.atOption("--removal-fraction", removalFraction, "outside [0, 1]",
                     "0 (equilibrium) to 1 (fully fractional)");
         }
-        return new SequenceSettings(path, tMaxK, tMinK, tStepK, isolation, 0.05);
+        return new SequenceSettings(path, tMaxK, tMinK, tStepK, removalFraction, 0.05);
     }
 
     private String describe(final PressurePath path) {

@@ -19,8 +19,8 @@ import org.nebulith.report.Table;
  * (wide format), {@code T_K,P_bar}, then for every condensed phase that is present at any grid
  * step, in order of first appearance on cooling, its amount in moles of formula units (as the
  * species is written; a solution counts the formula units of its end-members) per 1e6 atoms of
- * the normalising element (Si) of the input, and after a solution its end-members. In isolation
- * mode the isolated amounts follow, prefixed {@code isolated_}. Column names carry the
+ * the normalising element (Si) of the input, and after a solution its end-members. In withdrawal
+ * mode the withdrawn amounts follow, prefixed {@code withdrawn_}. Column names carry the
  * normalisation, e.g. {@code olivine.forsterite_per_1e6_Si}.
  */
 public final class SequenceTables {
@@ -32,8 +32,8 @@ public final class SequenceTables {
     public static final String TEMPERATURES = "condensation-temperatures.csv";
     /** File name of the phase appearance table. */
     public static final String APPEARANCE = "phase-appearance.csv";
-    /** Prefix of the isolated-amount columns. */
-    public static final String ISOLATED = "isolated_";
+    /** Prefix of the withdrawn-amount columns. */
+    public static final String WITHDRAWN = "withdrawn_";
 
     private final CondensationSequence seq;
     private final ChemicalSystem sys;
@@ -75,7 +75,7 @@ public final class SequenceTables {
             }
             if (seq.settings().isFractional()) {
                 for (int p = 1; p < sys.phaseCount(); p++) {
-                    if (isolatedPhase(s, p) > 0) {
+                    if (withdrawnPhase(s, p) > 0) {
                         order.add(p);
                     }
                 }
@@ -103,7 +103,7 @@ public final class SequenceTables {
         List<String> cols = new ArrayList<>(List.of("T_K", "P_bar"));
         phases.forEach(p -> cols.addAll(amountColumns(p)));
         if (iso) {
-            phases.forEach(p -> amountColumns(p).forEach(c -> cols.add(ISOLATED + c)));
+            phases.forEach(p -> amountColumns(p).forEach(c -> cols.add(WITHDRAWN + c)));
         }
         Table t = Table.withColumns(SEQUENCE, cols);
         for (SequenceStep s : seq.steps()) {
@@ -117,21 +117,21 @@ public final class SequenceTables {
         return t;
     }
 
-    private void addAmounts(List<Object> row, int p, SequenceStep s, boolean isolated) {
-        double total = isolated ? isolatedPhase(s, p) : s.result().phaseMoles(p);
+    private void addAmounts(List<Object> row, int p, SequenceStep s, boolean withdrawn) {
+        double total = withdrawn ? withdrawnPhase(s, p) : s.result().phaseMoles(p);
         row.add(total * perNorm);
         if (sys.phaseKind(p) == PhaseKind.SOLUTION) {
             for (int k = 0; k < sys.memberNames(p).size(); k++) {
-                double n = isolated ? s.isolatedMoles(p, k) : s.result().memberMoles(p, k);
+                double n = withdrawn ? s.withdrawnMoles(p, k) : s.result().memberMoles(p, k);
                 row.add(n * perNorm);
             }
         }
     }
 
-    private double isolatedPhase(SequenceStep s, int p) {
+    private double withdrawnPhase(SequenceStep s, int p) {
         double sum = 0;
         for (int k = 0; k < sys.memberNames(p).size(); k++) {
-            sum += s.isolatedMoles(p, k);
+            sum += s.withdrawnMoles(p, k);
         }
         return sum;
     }
@@ -141,7 +141,7 @@ public final class SequenceTables {
         return e.symbol() + "_condensed_fraction";
     }
 
-    /** @return {@code element-fractions.csv}: fraction of each element's input that is condensed (reacting or isolated) */
+    /** @return {@code element-fractions.csv}: fraction of each element's input that is condensed (reacting or withdrawn) */
     public Table elementFractions() {
         List<String> cols = new ArrayList<>(List.of("T_K", "P_bar"));
         sys.elements().forEach(e -> cols.add(fractionColumn(e)));
