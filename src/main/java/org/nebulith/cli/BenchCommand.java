@@ -18,6 +18,7 @@ import org.nebulith.equilibrium.WarmStart;
 import org.nebulith.errors.InputException;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -48,6 +49,9 @@ public final class BenchCommand extends RunCommand {
     static final double TARGET_ITERATIONS = 3;
     /** Target of the sequence benchmark [s]. */
     static final double TARGET_SEQUENCE_S = 0.5;
+
+    @Mixin
+    private PresetOption preset;
 
     @Option(names = "--P-bar", paramLabel = "P", defaultValue = "1e-4", description = "Pressure [bar]. Default: ${DEFAULT-VALUE}.")
     private double pressureBar;

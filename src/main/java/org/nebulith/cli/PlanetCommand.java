@@ -7,8 +7,6 @@ import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.ZoneOffset;
-import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -60,6 +58,14 @@ import picocli.CommandLine.Option;
 public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     @Mixin
     private ChemistryOptions chemistry;
@@ -123,9 +129,7 @@ public final class PlanetCommand extends RunCommand {
 
     private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
                              List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
-        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
-                .format(context.started());
-        try (RunFolder run = context.openRunFolder(runName)) {
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             List<Report.Setting> settings = new ArrayList<>();
             context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
             List<Report.Citation> sources = new ArrayList<>();

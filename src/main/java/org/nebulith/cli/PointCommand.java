@@ -53,6 +53,14 @@ import picocli.CommandLine.Option;
 public final class PointCommand extends RunCommand {
 
     @Mixin
+    private FileOutputOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
+
+    @Mixin
     private ChemistryOptions chemistry;
 
     @Option(names = "--T-K", paramLabel = "T", required = true, description = "Temperature [K].")

@@ -44,7 +44,7 @@ public final class RunContext {
 
     private final String command;
     private final Verbosity verbosity;
-    private final RunOptions runOptions;
+    private final OutputTarget runOptions;
     private final PrintStream out;
     private final PrintStream err;
     private final RunInputs inputs = new RunInputs();
@@ -52,7 +52,7 @@ public final class RunContext {
     private final List<Setting> settings;
     private final Optional<PresetFile> preset;
 
-    private RunContext(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions,
+    private RunContext(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions,
                        final Optional<PresetFile> preset) {
         this.command = spec.name();
         this.verbosity = verbosity;
@@ -70,7 +70,7 @@ public final class RunContext {
      * @param runOptions its output options
      * @return the context; the preset (if any) is checked against the command and registered as an input
      */
-    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions) {
+    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions) {
         Optional<PresetFile> preset = Optional.empty();
         if (spec.defaultValueProvider() instanceof PresetDefaults) {
             preset = ((PresetDefaults) spec.defaultValueProvider()).preset();
@@ -147,6 +147,11 @@ public final class RunContext {
         return runOptions.force();
     }
 
+    /** @return whether --run-name was given */
+    public boolean hasRunName() {
+        return runOptions.runName() != null;
+    }
+
     /** @return the --out value, if given (commands writing a single file use it as that file) */
     public Optional<Path> outOption() {
         return Optional.ofNullable(runOptions.out());
@@ -157,7 +162,17 @@ public final class RunContext {
      * @return the output folder: --out, or reports/&lt;run-name&gt;
      */
     public Path outputFolder(final String defaultRunName) {
-        return runOptions.outputFolder(defaultRunName);
+        return RunOptions.outputFolder(runOptions, defaultRunName);
+    }
+
+    /**
+     * The one rule for default run folders: {@code <command>-<yyyyMMdd-HHmmss>} of the start time
+     * (UTC), with {@code -2}, {@code -3}, ... appended if {@code reports/} already holds that name.
+     *
+     * @return the run name used when neither --out nor --run-name is given
+     */
+    public String defaultRunName() {
+        return DefaultRunName.of(command, started, RunOptions.REPORTS);
     }
 
     /**

@@ -63,6 +63,14 @@ public final class SequenceCommand extends RunCommand {
     static final double DEFAULT_P_BAR = 1e-4;
 
     @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
+
+    @Mixin
     private ChemistryOptions chemistry;
 
     @Option(names = "--P-bar", paramLabel = "P",
@@ -109,7 +117,7 @@ public final class SequenceCommand extends RunCommand {
         double elapsed = (System.nanoTime() - t0) / 1e9;
         SequenceTables tables = new SequenceTables(seq);
         Path folder;
-        try (RunFolder run = context.openRunFolder("sequence")) {
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
             run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
             run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());

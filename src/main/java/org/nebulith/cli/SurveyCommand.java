@@ -15,6 +15,7 @@ import org.nebulith.survey.SurveySettings;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -42,6 +43,14 @@ import picocli.CommandLine.Spec;
             "  nebulith survey --catalogue CATALOGUE.csv --out reports/survey-demo --resume",
         })
 public class SurveyCommand extends RunCommand {
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     @Option(names = "--catalogue", required = true, paramLabel = "FILE",
             description = "Star catalogue (CSV; see above).")
@@ -117,8 +126,11 @@ public class SurveyCommand extends RunCommand {
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
         SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones);
-        String base = catalogue.getFileName().toString().replaceFirst("\\.csv$", "");
-        Path folder = context.outputFolder("survey-" + (base.matches("[A-Za-z0-9._-]+") ? base : "catalogue"));
+        if (resume && context.outOption().isEmpty() && !context.hasRunName()) {
+            throw InputException.atOption("--resume", "", "needs the folder of the earlier run",
+                    "--resume together with --out DIR or --run-name NAME of that run");
+        }
+        Path folder = context.outputFolder(context.defaultRunName());
         LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,
                 skipBad, resume, context.force());
         NebulithCommand root = (NebulithCommand) spec.root().userObject();
