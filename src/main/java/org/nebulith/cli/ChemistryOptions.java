@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 
+import org.nebulith.composition.AbundanceFileReader;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.AbundanceSet;
 import org.nebulith.composition.CarbonToOxygen;
@@ -99,8 +100,8 @@ public final class ChemistryOptions {
                     "enrichment below 1 would remove dust", "a factor >= 1");
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances(),
-                    dustEnrichment);
+            base = DustEnrichment.enrich(base, namedComposition(context, AbundancePresets.CI_CHONDRITE,
+                    "dust composition").orElseThrow().abundances(), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
@@ -119,14 +120,37 @@ public final class ChemistryOptions {
                 return AbundancePresets.resolve(elements);
             }
             String arg = compositionArg();
+            Optional<AbundanceSet> named = namedComposition(context, arg, "composition");
+            if (named.isPresent()) {
+                return named.get();
+            }
             Path p = Path.of(arg);
-            if (!AbundancePresets.NAMES.contains(arg) && Files.exists(p)) {
+            if (Files.exists(p)) {
                 context.input(p, "composition");
             }
             return AbundancePresets.resolve(arg);
         } catch (IOException e) {
             throw InputException.atOption("--composition", compositionArg(), "cannot be read (" + e.getMessage() + ")",
                     "a preset name, a readable abundance file, or Element=amount pairs");
+        }
+    }
+
+    /**
+     * @param context the run (the preset is registered with its checksum)
+     * @param name    a preset name
+     * @param role    what it is for
+     * @return the composition of the working folder's presets/NAME.csv, else of the built-in copy
+     */
+    private static Optional<AbundanceSet> namedComposition(RunContext context, String name, String role) {
+        Optional<PresetCatalogue.Entry> e = PresetCatalogue.here().find(PresetCatalogue.Kind.COMPOSITION, name);
+        if (e.isEmpty()) {
+            return Optional.empty();
+        }
+        context.namedInput(e.get(), role + " preset");
+        try {
+            return Optional.of(AbundanceFileReader.read(new java.io.StringReader(e.get().text()), e.get().shown()));
+        } catch (IOException ex) {
+            throw new java.io.UncheckedIOException(ex);
         }
     }
 

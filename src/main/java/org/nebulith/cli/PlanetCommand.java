@@ -1,15 +1,15 @@
 package org.nebulith.cli;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.Reader;
+import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
@@ -58,6 +58,8 @@ import picocli.CommandLine.Option;
 public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
+    /** Their name as a named input (working folder's feeding-zones/ first, then built-in). */
+    static final String DEMO_ZONES_NAME = "demo-system";
 
     @Mixin
     private RunOptions output;
@@ -76,9 +78,9 @@ public final class PlanetCommand extends RunCommand {
     private String disk;
 
     @Option(names = "--zones", paramLabel = "FILE",
-            description = "Feeding zones (zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]). "
-                    + "Default: the demo system " + DEMO_ZONES + ".")
-    private Path zones;
+            description = "Feeding zones: a name in feeding-zones/ or a file with the header "
+                    + "zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]. Default: " + DEMO_ZONES_NAME + ".")
+    private String zones;
 
     @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
     private boolean sulfideInMantle;
@@ -151,26 +153,28 @@ public final class PlanetCommand extends RunCommand {
     }
 
     private DiskModel readDisk(RunContext context) throws IOException {
+        Optional<PresetCatalogue.Entry> named = PresetCatalogue.here().find(PresetCatalogue.Kind.DISK, disk);
+        if (named.isPresent()) {
+            context.namedInput(named.get(), "disk preset");
+            return DiskPresets.read(new StringReader(named.get().text()), named.get().shown());
+        }
         Path p = Path.of(disk);
-        if (!DiskPresets.NAMES.contains(disk) && Files.exists(p)) {
+        if (Files.exists(p)) {
             context.input(p, "disk");
         }
         return DiskPresets.resolve(disk);
     }
 
     private List<FeedingZone> readZones(RunContext context, DiskModel diskModel) throws IOException {
-        if (zones != null) {
-            Path f = context.input(zones, "feeding zones");
-            try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
-                return ZoneFileReader.read(r, zones.toString(), diskModel);
-            }
+        String name = zones != null ? zones : DEMO_ZONES_NAME;
+        Optional<PresetCatalogue.Entry> named = PresetCatalogue.here().find(PresetCatalogue.Kind.ZONES, name);
+        if (named.isPresent()) {
+            context.namedInput(named.get(), "feeding zones");
+            return ZoneFileReader.read(new StringReader(named.get().text()), named.get().shown(), diskModel);
         }
-        InputStream in = PlanetCommand.class.getResourceAsStream("/" + DEMO_ZONES);
-        if (in == null) {
-            throw new IllegalStateException("demo zones missing from the classpath: " + DEMO_ZONES);
-        }
-        try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
-            return ZoneFileReader.read(r, DEMO_ZONES, diskModel);
+        Path f = context.input(Path.of(zones), "feeding zones");
+        try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
+            return ZoneFileReader.read(r, zones, diskModel);
         }
     }
 

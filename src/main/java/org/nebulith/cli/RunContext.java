@@ -77,7 +77,13 @@ public final class RunContext {
         }
         preset.ifPresent(p -> p.checkFor(spec.name(), presetKeys(spec)));
         RunContext context = new RunContext(spec, verbosity, runOptions, preset);
-        preset.ifPresent(p -> context.inputs.add(p.file(), "preset"));
+        preset.ifPresent(p -> {
+            if (p.builtInContent().isPresent()) {
+                context.inputs.addBuiltIn(p.file().toString(), "settings preset", p.builtInContent().get());
+            } else {
+                context.inputs.add(p.file(), "settings preset");
+            }
+        });
         return context;
     }
 
@@ -135,6 +141,23 @@ public final class RunContext {
     public Path input(final Path file, final String role) {
         inputs.add(file, role);
         return file;
+    }
+
+    /**
+     * Registers a named input (preset) found by the {@link PresetCatalogue}: a working-folder file
+     * like any input, a built-in copy under its shown name; both with their SHA-256.
+     *
+     * @param entry the input
+     * @param role  what it is for
+     * @return entry
+     */
+    public PresetCatalogue.Entry namedInput(final PresetCatalogue.Entry entry, final String role) {
+        if (entry.builtIn()) {
+            inputs.addBuiltIn(entry.shown(), role, entry.content());
+        } else {
+            inputs.add(entry.file(), role);
+        }
+        return entry;
     }
 
     /** @return the registered inputs */
