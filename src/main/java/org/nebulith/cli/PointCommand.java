@@ -37,7 +37,7 @@ import picocli.CommandLine.Option;
         description = {
             "Equilibrium of one state: every gas species and condensed phase at one T, P.",
             "Gibbs free-energy minimisation for a given element inventory; writes CSV",
-            "(species,phase,moles,mole_fraction,state) to --out FILE or standard output.",
+            "(species,phase,moles,mole_fraction,state,data_id) to --out FILE or standard output.",
             "Amounts are moles on the basis of the composition as given.",
         },
         footerHeading = "%nExamples:%n",
@@ -124,7 +124,8 @@ public final class PointCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "point: T = %s K, P = %s bar; %s", fmt(r.problem().temperatureK()),
                 fmt(r.problem().pressureBar()), spec.describe()));
         context.info("condensed phases present: " + (r.presentPhaseNames().isEmpty() ? "none"
-                : String.join(", ", r.presentPhaseNames())));
+                : r.presentPhaseNames().stream().map(org.nebulith.thermo.PhaseNames::display).distinct()
+                        .collect(java.util.stream.Collectors.joining(", "))));
         context.info(String.format(Locale.ROOT, "checks: element balance %.1e, largest residual %.1e RT, smallest "
                         + "absent affinity %.3g RT per atom%s; %d Newton iterations",
                 d.maxBalanceError(), d.maxPotentialResidual(), d.minAbsentAffinity(),

@@ -131,7 +131,7 @@ public final class SequenceNotes {
             }
             b.append("| ").append(ec.element().symbol()).append(" | ")
                     .append(ec.t50K().isPresent() ? String.format(Locale.ROOT, "%.1f", ec.t50K().getAsDouble()) : "not reached")
-                    .append(" | ").append(ec.hostPhase().isEmpty() ? "" : ec.hostPhase()).append(" | ")
+                    .append(" | ").append(ec.hostPhase().isEmpty() ? "" : org.nebulith.thermo.PhaseNames.display(ec.hostPhase())).append(" | ")
                     .append(String.format(Locale.ROOT, "%.1f", ec.onsetK().getAsDouble())).append(" |\n");
         }
     }
