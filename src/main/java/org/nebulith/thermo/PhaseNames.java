@@ -21,7 +21,8 @@ import java.util.regex.Pattern;
  * a data id into a display name.
  *
  * <p>Data ids are the ids of {@code species.csv}: NASA Glenn ids {@code FORMULA(state)} with the NASA
- * upper-case {@code AL} and {@code CL}, mineral names, and {@code name/VARIANT} alternative rows. Gas
+ * upper-case {@code AL} and {@code CL}, mineral names, and {@code name/VARIANT} alternative rows. A
+ * solid of one element without a mineral name shows as {@code Mn metal}. Gas
  * ids get the conventional casing only (ALCL becomes AlCl). Names that are no data id (solution
  * phases such as {@code olivine}) are returned unchanged.
  */
@@ -29,6 +30,7 @@ public final class PhaseNames {
     private static final String RESOURCE = "/org/nebulith/thermo/phase-names.csv";
     private static final Pattern NASA_ID = Pattern.compile("([A-Z][A-Za-z0-9().]*?)\\(([A-Za-z0-9'-]+)\\)");
     private static final Pattern UPPER_AL_CL = Pattern.compile("(AL|CL)(?![a-z])");
+    private static final Pattern ONE_ELEMENT = Pattern.compile("[A-Z][a-z]?");
     private static final Map<String, String> NAMES = load();
 
     private PhaseNames() {
@@ -58,7 +60,11 @@ public final class PhaseNames {
             return conventionalCase(formula) + " liquid";
         }
         String named = NAMES.get(formula);
-        return named != null ? named : conventionalCase(formula);
+        if (named != null) {
+            return named;
+        }
+        String shown = conventionalCase(formula);
+        return ONE_ELEMENT.matcher(shown).matches() ? shown + " metal" : shown;
     }
 
     /** True if the id is shown under a name different from itself (provenance worth a data_id column). */

@@ -39,6 +39,8 @@ class PhaseNamesTest {
         assertEquals("iron", PhaseNames.display("iron/ds62"));
         assertEquals("iron", PhaseNames.display("Fe(c)"));
         assertEquals("FeS liquid", PhaseNames.display("FeS(L)"));
+        assertEquals("Mn metal", PhaseNames.display("Mn(a)"));
+        assertEquals("Fe liquid", PhaseNames.display("Fe(L)"));
         assertEquals("AlCl", PhaseNames.display("ALCL"));
         assertEquals("SiO", PhaseNames.display("SiO"));
         assertEquals("olivine", PhaseNames.display("olivine"));
