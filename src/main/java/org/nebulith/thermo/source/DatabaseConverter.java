@@ -144,7 +144,7 @@ public final class DatabaseConverter {
                 p.append(p.length() == 0 ? "" : " ").append(c);
             }
             String row = nasaName + ":" + e.intervalLines().get(i) + (via == null ? "" : " " + e.name() + " via " + via);
-            w.row(id, state, f.notation(), "NASA-Glenn-2002", row, role, variant, "nasa9",
+            w.row(id, state, f.notation(), SourceKeys.NASA, row, role, variant, "nasa9",
                     Double.toString(iv.tLowK()), Double.toString(iv.tHighK()), p.toString());
         }
     }
