@@ -7,9 +7,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 
 import org.nebulith.composition.ElementAbundances;
+import org.nebulith.condensation.AllGasStart;
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.PressurePathReader;
@@ -30,6 +32,7 @@ import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
 import org.nebulith.report.RunFolder;
 import org.nebulith.thermo.Element;
+import org.nebulith.thermo.PhaseNames;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -103,15 +106,20 @@ public final class SequenceCommand extends RunCommand {
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         PressurePath path = pressurePath(context);
-        SequenceSettings settings = settings(path);
+        settings(path);
         Set<Element> elements = ChemistryOptions.elementsOf(comp);
         ChemicalSystem system = spec.build(elements);
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {
             totals[j] = comp.moles(system.elements().get(j));
         }
-        List<String> cautions = SequenceCautions.lines(spec.describe(),
+        Optional<String> startNote = allGasStart(context, system, totals, path);
+        SequenceSettings settings = settings(path);
+        List<String> standing = SequenceCautions.lines(spec.describe(),
                 SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK));
+        List<String> cautions = new ArrayList<>();
+        startNote.ifPresent(cautions::add);
+        cautions.addAll(standing);
         long t0 = System.nanoTime();
         CondensationSequence seq = run(system, totals, settings);
         double elapsed = (System.nanoTime() - t0) / 1e9;
@@ -132,10 +140,48 @@ public final class SequenceCommand extends RunCommand {
                     reportSettings(context), cautions, sources(), context.inputs()));
             folder = run.commit();
         }
-        printCautions(context, cautions);
+        printCautions(context, standing);
         context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
                 + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
         return ExitCodes.OK;
+    }
+
+    /**
+     * Makes the sequence start with gas only: if phases are stable at the start, a default start is
+     * raised (in steps of {@link AllGasStart#STEP_K}) up to the gas data's limit; a start given on the
+     * command line or in a preset is refused.
+     *
+     * @return the note for the run notes when the start was raised
+     */
+    private Optional<String> allGasStart(RunContext context, ChemicalSystem system, double[] totals, PressurePath path) {
+        AllGasStart.Result r;
+        try {
+            r = AllGasStart.find(new EquilibriumSolver(), system, totals, path, tMaxK);
+        } catch (ConvergenceException e) {
+            throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
+        }
+        if (r.allGasAtStart()) {
+            return Optional.empty();
+        }
+        String stable = r.stableAtStart().stream().map(PhaseNames::display).distinct()
+                .collect(java.util.stream.Collectors.joining(", "));
+        boolean explicit = context.settings().stream()
+                .anyMatch(s -> s.key().equals("T-max-K") && !s.origin().equals("default"));
+        if (explicit || r.startK().isEmpty()) {
+            String accepted = r.startK().isPresent()
+                    ? "a start where the gas is all vapour, e.g. --T-max-K " + Decimal.format(r.startK().get())
+                            + ", or no --T-max-K to raise the start automatically"
+                    : "a composition or pressure with an all-gas state below " + Decimal.format(r.limitK())
+                            + " K (the upper limit of the gas data)";
+            throw InputException.atOption("--T-max-K", Decimal.format(tMaxK), "condensed phases are already stable "
+                    + "there (" + stable + ")", accepted);
+        }
+        String note = "start raised from " + Decimal.format(tMaxK) + " K to " + Decimal.format(r.startK().get())
+                + " K, the first all-gas temperature in " + Decimal.format(AllGasStart.STEP_K) + " K steps: " + stable
+                + " already stable at " + Decimal.format(tMaxK) + " K with this composition";
+        tMaxK = r.startK().get();
+        context.info("sequence: " + note);
+        return Optional.of(note);
     }
 
     private static List<org.nebulith.report.html.Report.Setting> reportSettings(RunContext context) {
