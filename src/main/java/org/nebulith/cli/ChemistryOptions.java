@@ -36,9 +36,9 @@ import picocli.CommandLine.Option;
 public final class ChemistryOptions {
 
     @Option(names = "--composition", paramLabel = "NAME|FILE",
-            description = "Gas composition: a preset (protosolar-lodders2003, photosphere-asplund2009, "
-                    + "ci-chondrite, star-tessaly) or an abundance file. Default: protosolar-lodders2003 "
-                    + "(planet: the invented demo star star-tessaly).")
+            description = "Gas composition: a preset name (see 'nebulith presets': protosolar-lodders2003, "
+                    + "photosphere-asplund2009, ci-chondrite, star-tessaly) or an abundance file. Default: "
+                    + "protosolar-lodders2003 (planet: the invented demo star star-tessaly).")
     private String composition;
 
     private String defaultComposition = AbundancePresets.PROTOSOLAR_LODDERS2003;
@@ -53,7 +53,7 @@ public final class ChemistryOptions {
     }
 
     @Option(names = "--elements", paramLabel = "X=n,...",
-            description = "Inline composition in moles, e.g. H=1,He=0.085,O=4.9e-4 (replaces --composition).")
+            description = "Inline composition in moles, such as H=1,O=5e-4 (replaces --composition).")
     private String elements;
 
     @Option(names = "--dust-enrichment", paramLabel = "F", defaultValue = "1",

@@ -47,10 +47,15 @@ import picocli.CommandLine.Option;
             "Integrates what condenses across each zone; core/mantle split; key ratios beside",
             "the host star, bulk Earth and CI chondrite. Without arguments it runs the",
             "built-in demo scenario (the invented star Tessaly, its disk and three planets).",
+            "Writes into --out (default reports/planet-<yyyyMMdd-HHmmss>/):",
+            "  bulk-composition.csv, comparison.csv, zone-phases.csv, radial-profile.csv,",
+            "  radial-map and planet-comparison charts (.png/.svg/.pdf), report.html and",
+            "  summary.md; prints one line per planet.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
-            "  nebulith planet                  demo scenario, report in reports/planet-<time>/",
+            "  nebulith planet              demo scenario (about a minute)",
+            "  nebulith planet --preset tessaly-planets",
             "  nebulith planet --composition protosolar-lodders2003 --disk mmsn-hayashi1981 \\",
             "      --zones feeding-zones/demo-system.csv --out reports/mmsn-demo",
             "  nebulith planet --sulfide-in-mantle --core-Si-wt-pct 5 --variant B88",
@@ -74,7 +79,8 @@ public final class PlanetCommand extends RunCommand {
 
     @Option(names = "--disk", paramLabel = "NAME|FILE", defaultValue = DiskPresets.STEADY_VISCOUS_DEFAULT,
             description = "Disk model: a preset (mmsn-hayashi1981, hot-early-disk, steady-viscous-default) or a "
-                    + "disk file (parameter,value or r_AU,T_K,P_bar,sigma_gas_g_cm2). Default: ${DEFAULT-VALUE}.")
+                    + "disk file with the header parameter,value or the header "
+                    + "r_AU,T_K,P_bar,sigma_gas_g_cm2 (table). Default: ${DEFAULT-VALUE}.")
     private String disk;
 
     @Option(names = "--zones", paramLabel = "FILE",
@@ -117,7 +123,10 @@ public final class PlanetCommand extends RunCommand {
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
         List<ZonePlanet> planets = new ArrayList<>();
         LocalCondensation local = formation.localCondensation(gas);
-        try (Progress progress = context.progress("zones", zoneList.size() + 1)) {
+        Path done;
+        String task = "planet (" + zoneList.size() + (zoneList.size() == 1 ? " zone" : " zones")
+                + ", radial profile, report)";
+        try (Progress progress = context.progress(task, zoneList.size() + 2L)) {
             for (FeedingZone z : zoneList) {
                 planets.add(formation.zonePlanet(z, diskModel, local));
                 progress.step();
@@ -125,11 +134,19 @@ public final class PlanetCommand extends RunCommand {
             List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
                     scanMax(diskModel, zoneList), profilePoints);
             progress.step();
-            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+            done = writeOutputs(context, gas, diskModel, spec, planets, scan);
+            progress.step();
         }
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.info("cautions: " + PlanetReportWriter.CAUTIONS.size() + " on model assumptions and data limits, in "
+                + done.resolve("report.html") + " (and summary.md)");
+        return ExitCodes.OK;
     }
 
-    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
+    private Path writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
                              List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             List<Report.Setting> settings = new ArrayList<>();
@@ -142,14 +159,8 @@ public final class PlanetCommand extends RunCommand {
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
                     gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
             PlanetReportWriter.write(run, data);
-            Path done = run.commit();
-            for (ZonePlanet zp : planets) {
-                context.out().println(PlanetReportWriter.summary(zp));
-            }
-            context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+            return run.commit();
         }
-        return ExitCodes.OK;
     }
 
     private DiskModel readDisk(RunContext context) throws IOException {

@@ -36,8 +36,9 @@ import picocli.CommandLine.Option;
 @Command(name = "point",
         description = {
             "Equilibrium of one state: every gas species and condensed phase at one T, P.",
-            "Gibbs free-energy minimisation for a given element inventory; writes CSV",
-            "(species,phase,moles,mole_fraction,state,data_id) to --out FILE or standard output.",
+            "Gibbs free-energy minimisation for a given element inventory; writes the CSV",
+            "species,phase,moles,mole_fraction,state,data_id to --out FILE or standard",
+            "output (data_id: the species' id in the thermodynamic data).",
             "Amounts are moles on the basis of the composition as given.",
         },
         footerHeading = "%nExamples:%n",
@@ -46,7 +47,8 @@ import picocli.CommandLine.Option;
             "  nebulith point --elements H=1,He=0.085,O=4.9e-4,Mg=3.4e-5,Si=3.2e-5 \\",
             "      --T-K 1200 --P-bar 1e-3",
             "  nebulith point --data nasa --gases gases.txt --condensed condensed.txt \\",
-            "      --elements H=1,He=0.085,O=4.9e-4,C=2.7e-4,Fe=2.9e-5 --T-K 1300 --P-bar 1e-4",
+            "      --elements H=1,He=0.085,O=4.9e-4,C=2.7e-4,Fe=2.9e-5 \\",
+            "      --T-K 1300 --P-bar 1e-4",
             "  nebulith point --preset NAME --T-K 1500 --out state.csv",
             "      (options on the command line override the preset)",
         })

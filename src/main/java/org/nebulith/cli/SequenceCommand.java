@@ -30,6 +30,7 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
+import org.nebulith.progress.Progress;
 import org.nebulith.report.RunFolder;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.PhaseNames;
@@ -40,25 +41,32 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code nebulith sequence}: the condensation sequence of a gas cooling at constant pressure or
- * along a P-T path, in equilibrium (default) or with a fraction of each step's new condensate withdrawn from further reaction.
- * Writes the four tables and the run notes into the run folder; prints the cautions on stderr.
+ * along a P-T path, in equilibrium (default) or with a fraction of each step's new condensate
+ * withdrawn from further reaction. Writes the four tables, two charts, the run notes and the report
+ * into the run folder; the terminal gets one line pointing to the cautions.
  */
 @Command(name = "sequence",
         description = {
             "Condensation sequence: what condenses, and when, as a gas cools.",
             "At fixed pressure or along a P-T path: phases against T, the fraction of each",
             "element condensed, 50%% condensation temperatures, phase appearance.",
-            "Writes sequence.csv, element-fractions.csv, condensation-temperatures.csv,",
-            "phase-appearance.csv and run-notes.md under --out (default reports/sequence/).",
+            "The start is raised above the first condensate if phases are stable at 2000 K",
+            "(strong dust enrichment); the run notes say so.",
+            "Writes into --out (default reports/sequence-<yyyyMMdd-HHmmss>/):",
+            "  sequence.csv, element-fractions.csv, condensation-temperatures.csv,",
+            "  phase-appearance.csv, condensation-curves and phase-assemblage charts",
+            "  (.png/.svg/.pdf), run-notes.md, report.html and summary.md.",
         },
-        footerHeading = "%nExamples:%n",
+        footerHeading = "%nExamples (each a few seconds to a minute):%n",
         footer = {
             "  nebulith sequence --composition protosolar-lodders2003 --P-bar 1e-4",
             "  nebulith sequence --P-bar 1e-3 --T-max-K 1800 --T-min-K 400 --T-step-K 2",
-            "  nebulith sequence --removal-fraction 1 --out reports/fractional   (fractional)",
-            "  nebulith sequence --dust-enrichment 10 --variant B88 --out reports/dusty-B88",
-            "  nebulith sequence --path my-path.csv --out reports/cooling-path",
-            "      (path CSV header: T_K,P_bar; log-linear in P between rows, constant beyond)",
+            "  nebulith sequence --removal-fraction 1 --run-name fractional",
+            "  nebulith sequence --dust-enrichment 10 --variant B88 --run-name dusty-B88",
+            "  nebulith sequence --preset dusty-sequence",
+            "  nebulith sequence --path my-path.csv --run-name cooling-path",
+            "      (path CSV header: T_K,P_bar; log-linear in P between rows,",
+            "      held constant beyond)",
         })
 public final class SequenceCommand extends RunCommand {
 
@@ -115,16 +123,39 @@ public final class SequenceCommand extends RunCommand {
         }
         Optional<String> startNote = allGasStart(context, system, totals, path);
         SequenceSettings settings = settings(path);
-        List<String> standing = SequenceCautions.lines(spec.describe(),
-                SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK));
         List<String> cautions = new ArrayList<>();
         startNote.ifPresent(cautions::add);
-        cautions.addAll(standing);
+        cautions.addAll(SequenceCautions.lines(spec.describe(),
+                SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK)));
         long t0 = System.nanoTime();
-        CondensationSequence seq = run(system, totals, settings);
-        double elapsed = (System.nanoTime() - t0) / 1e9;
-        SequenceTables tables = new SequenceTables(seq);
         Path folder;
+        CondensationSequence seq;
+        double elapsed;
+        try (Progress progress = context.progress("sequence", SequenceRunner.gridSize(settings) + 2L)) {
+            seq = run(system, totals, settings, progress);
+            elapsed = (System.nanoTime() - t0) / 1e9;
+            folder = write(context, spec, path, seq, cautions, elapsed);
+            progress.step();
+        }
+        context.info(cautionsPointer(cautions.size(), folder));
+        context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
+                + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
+        return ExitCodes.OK;
+    }
+
+    /**
+     * @param count  number of cautions written to the report
+     * @param folder the run folder
+     * @return the one terminal line that points to them
+     */
+    static String cautionsPointer(int count, Path folder) {
+        return "cautions: " + count + " on model assumptions and data limits, in " + folder.resolve("report.html")
+                + " (and summary.md)";
+    }
+
+    private Path write(RunContext context, SystemSpec spec, PressurePath path, CondensationSequence seq,
+                       List<String> cautions, double elapsed) {
+        SequenceTables tables = new SequenceTables(seq);
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
             run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
@@ -138,12 +169,8 @@ public final class SequenceCommand extends RunCommand {
             SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
                     context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
                     reportSettings(context), cautions, sources(), context.inputs()));
-            folder = run.commit();
+            return run.commit();
         }
-        printCautions(context, standing);
-        context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
-                + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
-        return ExitCodes.OK;
     }
 
     /**
@@ -197,9 +224,10 @@ public final class SequenceCommand extends RunCommand {
         return out;
     }
 
-    private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+    private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                            Progress progress) {
         try {
-            return new SequenceRunner(new EquilibriumSolver()).run(system, totals, settings);
+            return new SequenceRunner(new EquilibriumSolver()).run(system, totals, settings, progress);
         } catch (ConvergenceException e) {
             throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
         }
@@ -267,15 +295,5 @@ public final class SequenceCommand extends RunCommand {
         List<String> lines = new ArrayList<>();
         context.settings().forEach(s -> lines.add(s.key() + " = " + s.value() + " (" + s.origin() + ")"));
         return lines;
-    }
-
-    private static void printCautions(final RunContext context, final List<String> cautions) {
-        context.info("Cautions (details in run-notes.md):");
-        context.info("  - equilibrium with ideal solutions, no kinetics; silicate liquids not modelled");
-        context.info("  - results depend on the thermodynamic data: try --variant TAG for sensitivity");
-        context.info("  - no phosphide or Mn-silicate data: P and Mn condense late");
-        if (cautions.size() > 4) {
-            context.info("  - some gas species are used below their data range (listed in run-notes.md)");
-        }
     }
 }

@@ -34,13 +34,18 @@ import picocli.CommandLine.Spec;
             "Catalogue CSV: star, X_H and X_H_err ([X/H] and 1-sigma error in dex) for any",
             "elements X (Fe_H required; elements a star lacks follow its [Fe/H]); optional",
             "disk, zones (the star's own) and err_corr (common error correlation, 0..1).",
-            "Writes survey.csv, survey-stars.csv (per star), survey-notes.txt and survey-chart.png/.svg.",
+            "Writes into --out (default reports/survey-<yyyyMMdd-HHmmss>/): survey.csv,",
+            "  survey-stars.csv (per star), survey-notes.txt, survey-chart (.png/.svg/.pdf),",
+            "  report.html and summary.md.",
+            "Time: about 0.3 s per draw per core with the default zone; the 20 demo stars",
+            "take about 5 minutes with 100 draws on 2 cores, 10 times that with 1000.",
         },
-        footerHeading = "%nExamples:%n",
+        footerHeading = "%nExamples (from the repository folder):%n",
         footer = {
-            "  nebulith survey --catalogue presets/demo-catalogue.csv --draws 1000 --seed 7",
-            "  nebulith survey --catalogue CATALOGUE.csv --threads 2 --out reports/survey-demo",
-            "  nebulith survey --catalogue CATALOGUE.csv --out reports/survey-demo --resume",
+            "  nebulith survey --catalogue presets/demo-catalogue.csv --draws 20 --seed 7",
+            "  nebulith survey --catalogue presets/demo-catalogue.csv --preset quick-survey",
+            "  nebulith survey --catalogue CATALOGUE.csv --threads 2 --run-name my-survey",
+            "  nebulith survey --catalogue CATALOGUE.csv --run-name my-survey --resume",
         })
 public class SurveyCommand extends RunCommand {
 
@@ -152,7 +157,8 @@ public class SurveyCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
                 + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
                 seconds, workers));
-        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt and survey-chart.png/.svg");
+        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt, survey-chart.png/.svg/.pdf, "
+                + "report.html and summary.md");
         return ExitCodes.OK;
     }
 

@@ -8,6 +8,7 @@ import org.nebulith.equilibrium.EquilibriumProblem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.WarmStart;
+import org.nebulith.progress.Progress;
 
 /**
  * Runs a condensation sequence on cooling: equilibrium at each grid temperature, warm-started by
@@ -35,6 +36,26 @@ public final class SequenceRunner {
      * @return the sequence
      */
     public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+        return run(system, totals, settings, Progress.none());
+    }
+
+    /**
+     * @param settings grid settings
+     * @return the number of grid states a run solves before refinement (one progress step each)
+     */
+    public static int gridSize(SequenceSettings settings) {
+        return grid(settings).length;
+    }
+
+    /**
+     * @param system   the chemical system
+     * @param totals   input element totals [mol], in the system's element order
+     * @param settings grid, pressure and removal fraction
+     * @param progress advanced by one per grid state ({@link #gridSize}) and one for the refinement
+     * @return the sequence
+     */
+    public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                    Progress progress) {
         List<SequenceStep> steps = new ArrayList<>();
         double[] b = totals.clone();
         double[][] kept = settings.isFractional() ? zeros(system) : null;
@@ -53,10 +74,12 @@ public final class SequenceRunner {
             }
             prev = last;
             last = r;
+            progress.step();
         }
         SequenceRefiner refiner = new SequenceRefiner(solver, settings);
         List<PhaseEvent> events = refiner.phaseEvents(steps);
         List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
+        progress.step();
         return new CondensationSequence(system, totals, settings, steps, events, temps, withdrawn, b, floorAdded);
     }
 

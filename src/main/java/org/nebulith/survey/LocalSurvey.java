@@ -29,7 +29,7 @@ import org.nebulith.report.RunInputs;
  *     (flushed after every star) and renamed at the end; an interrupted or failed run leaves the
  *     partial file for {@code --resume} and nothing under the final name;</li>
  * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
- *     cautions) and {@code survey-chart.png/.svg} ({@link SurveyChart}), written at the end.</li>
+ *     cautions) and {@code survey-chart.png/.svg/.pdf} ({@link SurveyChart}), written at the end.</li>
  * </ul>
  * The files do not depend on the thread count.
  */
