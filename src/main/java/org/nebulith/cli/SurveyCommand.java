@@ -37,8 +37,8 @@ import picocli.CommandLine.Spec;
             "Writes into --out (default reports/survey-<yyyyMMdd-HHmmss>/): survey.csv,",
             "  survey-stars.csv (per star), survey-notes.txt, survey-chart (.png/.svg/.pdf),",
             "  report.html and summary.md.",
-            "Time: about 0.3 s per draw per core with the default zone; the 20 demo stars",
-            "take about 5 minutes with 100 draws on 2 cores, 10 times that with 1000.",
+            "Time grows with stars x draws: the 20 demo stars take about 10 minutes with",
+            "the default 1000 draws on a quiet 2-core machine, about 1 minute with 100.",
         },
         footerHeading = "%nExamples (from the repository folder):%n",
         footer = {
