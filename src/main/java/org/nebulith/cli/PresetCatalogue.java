@@ -43,6 +43,8 @@ public final class PresetCatalogue {
         ZONES("zones", "feeding-zones", ".csv"),
         /** Star catalogues for the survey: header starting {@code star,}. */
         CATALOGUE("catalogue", "presets", ".csv"),
+        /** Planets with measured mass and radius (measured): header starting {@code planet,star,}. */
+        PLANETS("planets", "presets", ".csv"),
         /** Run settings: {@code key = value} lines ({@link PresetFile}). */
         SETTINGS("settings", "presets", PresetLocator.EXTENSION);
 
@@ -224,6 +226,9 @@ public final class PresetCatalogue {
             }
             if (s.startsWith(ZoneFileReader.HEADER)) {
                 return Kind.ZONES;
+            }
+            if (s.startsWith("planet,star,")) {
+                return Kind.PLANETS;
             }
             return s.startsWith("star,") ? Kind.CATALOGUE : null;
         }

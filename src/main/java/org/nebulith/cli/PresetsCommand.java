@@ -18,7 +18,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(mixinStandardHelpOptions = true, versionProvider = ToolVersion.class, name = "presets",
         description = {
-            "List the named inputs: compositions, disks, zone files, catalogues, settings.",
+            "List the named inputs: compositions, disks, zone files, catalogues, planets,",
+            "settings.",
             "One line each: kind, name, source (built-in or the file), description. A name is",
             "read from the working folder (presets/, feeding-zones/) first, then from the",
             "copy built into the program; settings also from the folders of NEBULITH_PRESETS.",
@@ -32,12 +33,14 @@ final class PresetsCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     private int sourceWidth = 8;
+    private int nameWidth = 23;
 
     @Override
     public Integer call() {
         NebulithCommand root = (NebulithCommand) spec.root().userObject();
         PrintStream out = root.out();
         List<PresetCatalogue.Entry> all = PresetCatalogue.here().all();
+        nameWidth = all.stream().mapToInt(e -> e.name().length()).max().orElse(23);
         sourceWidth = all.stream().mapToInt(e -> e.builtIn() ? 8 : e.shown().length()).max().orElse(8);
         for (Map.Entry<String, Path> extra : PresetLocator.available(PresetLocator.environmentFolders()).entrySet()) {
             print(out, PresetCatalogue.Kind.SETTINGS.label(), extra.getKey(), extra.getValue().toString(),
@@ -63,7 +66,7 @@ final class PresetsCommand implements Callable<Integer> {
     private void print(final PrintStream out, final String kind, final String name, final String from,
                               final String text) {
         String shortText = text.length() > DESCRIPTION_WIDTH ? text.substring(0, DESCRIPTION_WIDTH - 3) + "..." : text;
-        out.println(String.format(Locale.ROOT, "%-11s  %-23s  %-" + Math.max(sourceWidth, from.length()) + "s  %s", kind,
+        out.println(String.format(Locale.ROOT, "%-11s  %-" + Math.max(nameWidth, name.length()) + "s  %-" + Math.max(sourceWidth, from.length()) + "s  %s", kind,
                 name, from, shortText).stripTrailing());
     }
 }
