@@ -42,7 +42,7 @@ import picocli.CommandLine.Spec;
         },
         footerHeading = "%nExamples (from the repository folder):%n",
         footer = {
-            "  nebulith survey --catalogue presets/demo-catalogue.csv --draws 20 --seed 7",
+            "  nebulith survey --catalogue presets/demo-catalogue.csv --draws 20 --skip-bad",
             "  nebulith survey --catalogue presets/demo-catalogue.csv --preset quick-survey",
             "  nebulith survey --catalogue CATALOGUE.csv --threads 2 --run-name my-survey",
             "  nebulith survey --catalogue CATALOGUE.csv --run-name my-survey --resume",
