@@ -110,7 +110,9 @@ public final class ChemistryOptions {
                     "enrichment below 1 would remove dust", "a factor >= 1");
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);
+            String ci = ciReference().preset();
+            base = DustEnrichment.enrich(base, namedComposition(context, ci, "dust composition")
+                    .map(AbundanceSet::abundances).orElseGet(() -> ciReference().abundances()), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {

@@ -168,6 +168,7 @@ class NamesAndDefaultsTest {
                 "--out", folder.toString()), err());
         String notes = Files.readString(folder.resolve("run-notes.md"));
         assertTrue(notes.contains("start raised from 2000 K"), notes);
+        assertTrue(notes.contains("dust composition preset: `") && notes.contains("ci-chondrite.csv`"), notes);
         String firstRow = Files.readAllLines(folder.resolve("phase-appearance.csv")).get(1);
         assertTrue(firstRow.contains(",false,"), "first phase appears during the run, not at its start: " + firstRow);
     }
