@@ -36,7 +36,7 @@ import picocli.CommandLine.Spec;
             "disk, zones (the star's own) and err_corr (common error correlation, 0..1).",
             "Writes into --out (default reports/survey-<yyyyMMdd-HHmmss>/): survey.csv,",
             "  survey-stars.csv (per star), survey-notes.txt, survey-chart (.png/.svg/.pdf),",
-            "  report.html and summary.md.",
+            "  failures.csv (failed draws), report.html and summary.md.",
             "Time grows with stars x draws: the 20 demo stars take about 10 minutes with",
             "the default 1000 draws on a quiet 2-core machine, about 1 minute with 100.",
         },
@@ -83,8 +83,16 @@ public class SurveyCommand extends RunCommand {
             description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
     private String solarReference;
 
-    @Option(names = "--skip-bad", description = "Skip bad catalogue rows and failing stars (listed) instead of stopping.")
+    @Option(names = "--skip-bad", description = "Skip bad catalogue rows (listed in survey-stars.csv) instead of stopping.")
     private boolean skipBad;
+
+    @Option(names = "--max-failed-fraction", paramLabel = "F", defaultValue = "0.01",
+            description = "Stop (exit 3, resumable) once failed draws exceed this fraction of the run's draws"
+                    + " (default: ${DEFAULT-VALUE}); failed draws are listed in failures.csv.")
+    private double maxFailedFraction;
+
+    @Option(names = "--strict", description = "Stop (exit 3, resumable) at the first failed draw or star.")
+    private boolean strict;
 
     @Option(names = "--resume", description = "Continue an earlier or interrupted run in the output folder.")
     private boolean resume;
@@ -127,6 +135,10 @@ public class SurveyCommand extends RunCommand {
         if (workers < 1) {
             throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
         }
+        if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
+            throw InputException.atOption("--max-failed-fraction", maxFailedFraction, "must be a fraction",
+                    "a number from 0 to 1");
+        }
         context.input(catalogue, "catalogue");
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
@@ -137,7 +149,7 @@ public class SurveyCommand extends RunCommand {
         }
         Path folder = context.outputFolder(context.defaultRunName());
         LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,
-                skipBad, resume, context.force());
+                skipBad, resume, context.force(), maxFailedFraction, strict);
         NebulithCommand root = (NebulithCommand) spec.root().userObject();
         LocalSurvey.Log log = new LocalSurvey.Log() {
             @Override
@@ -157,8 +169,9 @@ public class SurveyCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
                 + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
                 seconds, workers));
-        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt, survey-chart.png/.svg/.pdf, "
-                + "report.html and summary.md");
+        context.info("wrote " + r.survey() + " with failures.csv, survey-stars.csv, survey-notes.txt,"
+                + " survey-chart.png/.svg/.pdf, report.html and summary.md");
+        context.out().println(r.failureLine());
         return ExitCodes.OK;
     }
 
