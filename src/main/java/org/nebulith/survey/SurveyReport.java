@@ -55,7 +55,7 @@ final class SurveyReport {
                 + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
         report.inputs(inputs);
         for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
-                SurveyChart.BASE + ".svg", "summary.md")) {
+                SurveyChart.BASE + ".svg", SurveyChart.BASE + ".pdf", "summary.md")) {
             report.outputFile(f);
         }
         report.finish(Instant.now());
