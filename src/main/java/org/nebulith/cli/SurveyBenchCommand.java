@@ -28,10 +28,12 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "bench-survey",
         description = {
-            "Benchmark of the survey: invented stars (or a catalogue's) x draws with the default disk and zone;",
-            "prints progress, then wall time, draws and equilibria per second, equilibria per draw, the median",
-            "and 99th-percentile time per draw, the share of each draw's first equilibrium and the CPU time per draw.",
-            "Targets on 2 cores of a quiet machine: 600 draws/s with the defaults, 300 draws/s with --scatter 0.3.",
+            "Benchmark of the survey: invented stars (or a catalogue's) x draws with the",
+            "default disk and zone. Prints progress, then wall time, draws and equilibria",
+            "per second, equilibria per draw, the median and 99th-percentile time per draw,",
+            "the share of each draw's first equilibrium and the CPU time per draw.",
+            "Targets on 2 cores of a quiet machine: 600 draws/s with the defaults,",
+            "300 draws/s with --scatter 0.3.",
         },
         footerHeading = "%nExamples:%n",
         footer = {"  nebulith bench-survey", "  nebulith bench-survey --stars 20 --draws 50 --threads 1",
