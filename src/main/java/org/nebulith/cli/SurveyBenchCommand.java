@@ -2,7 +2,6 @@ package org.nebulith.cli;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -130,7 +129,7 @@ public final class SurveyBenchCommand extends RunCommand {
     public static void print(final PrintStream out, final SurveyBenchmark.Figures f, final String model) {
         out.println("bench-survey: " + f.stars() + " stars x " + f.draws() + " draws, " + f.threads() + " threads, "
                 + Runtime.getRuntime().availableProcessors() + " processors; estimator: " + model);
-        out.println("load average (1, 5, 15 min) at the end: " + loadAverage());
+        out.println("load average (last minute) at the end: " + loadAverage());
         out.println(String.format(Locale.ROOT, "wall time: %.3f s", f.seconds()));
         out.println(String.format(Locale.ROOT, "draws per second: %.1f (targets on 2 cores, quiet machine: %.0f with the"
                 + " defaults, %.0f with --scatter 0.3)", f.drawsPerSecond(), TARGET_DRAWS_PER_S, TARGET_SCATTER_DRAWS_PER_S));
@@ -157,11 +156,7 @@ public final class SurveyBenchCommand extends RunCommand {
     }
 
     private static String loadAverage() {
-        try {
-            String[] v = Files.readString(Path.of("/proc/loadavg"), StandardCharsets.US_ASCII).trim().split("\\s+");
-            return v[0] + ", " + v[1] + ", " + v[2];
-        } catch (IOException | RuntimeException e) {
-            return "not available on this system";
-        }
+        double load = java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage();
+        return load >= 0 ? String.format(Locale.ROOT, "%.2f", load) : "not available on this system";
     }
 }
