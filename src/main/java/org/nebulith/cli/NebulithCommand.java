@@ -28,6 +28,7 @@ import picocli.CommandLine.Spec;
             SurveyCommand.class,
             SurveyBenchCommand.class,
             BenchCommand.class,
+            BenchRobustCommand.class,
             PresetsCommand.class,
             CompletionCommand.class,
             CommandLine.HelpCommand.class,

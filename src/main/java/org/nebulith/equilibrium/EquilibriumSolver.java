@@ -49,7 +49,23 @@ public final class EquilibriumSolver {
      * @throws ConvergenceException naming the state if no checked equilibrium was found
      */
     public EquilibriumResult solve(EquilibriumProblem problem) {
-        return coldSolve(problem);
+        StateData st = new StateData(problem);
+        EquilibriumResult r = globalSolve(problem, st, GasGuess.initial(st, problem.totals()).lambda);
+        return r != null ? ResultBuilder.markCold(r, r.diagnostics().newtonIterations()) : coldSolve(problem);
+    }
+
+    /**
+     * The globally convergent path: the interior-point method at the state itself, then the
+     * active-set Newton polish from its end point; null if either fails.
+     */
+    private EquilibriumResult globalSolve(EquilibriumProblem problem, StateData st, double[] startLambda) {
+        InteriorPoint ip = new InteriorPoint(st, problem.totals());
+        Iterate it = ip.solve(startLambda);
+        if (it == null) {
+            return null;
+        }
+        Attempt a = attempt(problem, st, it);
+        return a.result == null ? null : ResultBuilder.withIterations(a.result, a.iterations + ip.iterations);
     }
 
     /**
@@ -72,8 +88,12 @@ public final class EquilibriumSolver {
         if (a.result != null) {
             return a.result;
         }
+        EquilibriumResult global = globalSolve(problem, st, start.iterate.lambda);
+        if (global != null) {
+            return global;
+        }
         EquilibriumResult walked = continueFrom(problem, start);
-        return walked != null ? walked : coldSolve(problem);
+        return walked != null ? walked : solve(problem);
     }
 
     /**
