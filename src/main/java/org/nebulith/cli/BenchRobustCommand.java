@@ -78,7 +78,7 @@ public final class BenchRobustCommand extends RunCommand {
                 only == null ? "states 0 to " + (n - 1) : "state " + first, threads);
         long t0 = System.nanoTime();
         try (Progress bar = context.progress("bench-robust", n)) {
-            run(gen, first, n, out, failures, bar);
+            run(gen, first, n, out, failures, bar, ps);
         }
         report(ps, out, failures, (System.nanoTime() - t0) / 1e9);
         for (String[] f : failures) {
@@ -104,9 +104,10 @@ public final class BenchRobustCommand extends RunCommand {
     }
 
     private void run(final StressStates gen, final long first, final int n, final StressOutcome[][] out,
-                     final String[][] failures, final Progress bar) throws Exception {
+                     final String[][] failures, final Progress bar, final PrintStream ps) throws Exception {
         ExecutorService pool = Executors.newFixedThreadPool(threads);
         AtomicLong next = new AtomicLong();
+        AtomicLong done = new AtomicLong();
         try {
             List<Future<?>> jobs = new ArrayList<>();
             for (int w = 0; w < threads; w++) {
@@ -116,6 +117,7 @@ public final class BenchRobustCommand extends RunCommand {
                         solveOne(gen, (int) i, first + i, solves, out, failures);
                         synchronized (bar) {
                             bar.step();
+                            live(ps, (int) i, failures, done.incrementAndGet(), n);
                         }
                     }
                     return null;
@@ -126,6 +128,19 @@ public final class BenchRobustCommand extends RunCommand {
             }
         } finally {
             pool.shutdownNow();
+        }
+    }
+
+    /** Prints failures as they happen and a count every 1000 states, so that a long run can be read while it goes. */
+    private static void live(final PrintStream ps, final int slot, final String[][] failures, final long done, final int n) {
+        for (int k = 0; k < SERIES.length; k++) {
+            if (failures[k][slot] != null) {
+                ps.println("failed (" + SERIES[k].name() + "): " + failures[k][slot]);
+            }
+        }
+        if (done % 1000 == 0 && done < n) {
+            ps.printf(Locale.ROOT, "... %d of %d states done%n", done, n);
+            ps.flush();
         }
     }
 

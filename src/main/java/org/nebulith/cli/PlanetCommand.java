@@ -104,6 +104,9 @@ public final class PlanetCommand extends RunCommand {
         if (profilePoints < 2) {
             throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
         }
+        DomainChecks.temperature("--floor-K", floorK, spec.species());
+        DomainChecks.disk("--disk", disk, diskModel, scanMin(diskModel, zoneList), scanMax(diskModel, zoneList), floorK,
+                spec.species());
         FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
                 new CoreOptions(!sulfideInMantle, coreSi, coreO));
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());

@@ -66,6 +66,8 @@ public final class PointCommand extends RunCommand {
         checkState();
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
+        DomainChecks.temperature("--T-K", temperatureK, spec.species());
+        DomainChecks.pressure("--P-bar", pressureBar);
         ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
         EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
         EquilibriumResult result = solve(problem, comp);

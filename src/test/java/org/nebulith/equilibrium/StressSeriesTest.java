@@ -1,0 +1,78 @@
+package org.nebulith.equilibrium;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.nebulith.stress.StressSolve;
+import org.nebulith.stress.StressState;
+import org.nebulith.stress.StressStates;
+
+/**
+ * The seeded stress series of {@code nebulith bench-robust} ({@link StressStates}: T 200-2500 K,
+ * P 1e-10-1 bar, every element scaled by 10^U(-0.7, 0.7), C/O 0.1-2, dust 1-1000): every state must
+ * converge from a cold start, its neighbour from a warm start at that result, and both results must
+ * pass the {@link IndependentCheck} (element balance, refitted potentials, no supersaturated absent
+ * phase). The CI run takes 2,000 states, alternating all solutions and pure phases; the slow variant
+ * solves 10,000 states in both modes. A failure prints the runnable {@code point} command.
+ */
+class StressSeriesTest {
+    /** Seed of the CI series. */
+    static final long SEED = 20261201L;
+
+    @Test
+    void twoThousandStatesConvergeAndPassTheIndependentCheck() {
+        List<String> bad = run(0, 2000, false);
+        assertTrue(bad.isEmpty(), bad.size() + " failures:\n" + String.join("\n", bad));
+    }
+
+    @Test
+    @Tag("slow")
+    void tenThousandStatesInBothModes() {
+        List<String> bad = run(2000, 10000, true);
+        assertTrue(bad.isEmpty(), bad.size() + " failures:\n" + String.join("\n", bad));
+    }
+
+    private static List<String> run(long first, int n, boolean bothModes) {
+        StressStates gen = new StressStates(SEED);
+        StressSolve[] solves = {new StressSolve(false), new StressSolve(true)};
+        IndependentCheck[] checks = {new IndependentCheck(SystemSpec.defaults()),
+            new IndependentCheck(SystemSpec.defaults().withSolutions(List.of()))};
+        List<String> bad = new ArrayList<>();
+        for (long i = first; i < first + n; i++) {
+            StressState s = gen.state(i);
+            StressState nb = gen.neighbour(s);
+            for (int mode = 0; mode < 2; mode++) {
+                if (!bothModes && mode != (int) (i % 2)) {
+                    continue;
+                }
+                StressSolve solve = solves[mode];
+                boolean pure = solve.pureOnly();
+                EquilibriumResult cold;
+                try {
+                    cold = new EquilibriumSolver().solve(solve.problem(s));
+                } catch (ConvergenceException e) {
+                    bad.add("cold " + s.pointCommand(pure) + ": " + e.getMessage());
+                    continue;
+                }
+                String f = checks[mode].check(cold).failure();
+                if (f != null) {
+                    bad.add("cold " + s.pointCommand(pure) + ": " + f);
+                }
+                try {
+                    EquilibriumResult warm = solve.warmResult(nb, cold);
+                    String fw = checks[mode].check(warm).failure();
+                    if (fw != null) {
+                        bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + fw);
+                    }
+                } catch (ConvergenceException e) {
+                    bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + e.getMessage());
+                }
+            }
+        }
+        return bad;
+    }
+}
