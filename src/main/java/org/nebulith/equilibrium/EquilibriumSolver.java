@@ -50,22 +50,36 @@ public final class EquilibriumSolver {
      */
     public EquilibriumResult solve(EquilibriumProblem problem) {
         StateData st = new StateData(problem);
-        EquilibriumResult r = globalSolve(problem, st, GasGuess.initial(st, problem.totals()).lambda);
-        return r != null ? ResultBuilder.markCold(r, r.diagnostics().newtonIterations()) : coldSolve(problem);
+        Attempt g = globalSolve(problem, st, GasGuess.initial(st, problem.totals()).lambda);
+        if (g.result != null) {
+            return ResultBuilder.markCold(g.result, g.result.diagnostics().newtonIterations());
+        }
+        try {
+            return coldSolve(problem);
+        } catch (ConvergenceException e) {
+            throw new ConvergenceException(e.getMessage() + "; interior-point path: " + g.failure);
+        }
     }
 
     /**
      * The globally convergent path: the interior-point method at the state itself, then the
      * active-set Newton polish from its end point; null if either fails.
      */
-    private EquilibriumResult globalSolve(EquilibriumProblem problem, StateData st, double[] startLambda) {
+    private Attempt globalSolve(EquilibriumProblem problem, StateData st, double[] startLambda) {
         InteriorPoint ip = new InteriorPoint(st, problem.totals());
         Iterate it = ip.solve(startLambda);
         if (it == null) {
-            return null;
+            Attempt a = new Attempt();
+            a.failure = ip.failure;
+            return a;
         }
         Attempt a = attempt(problem, st, it);
-        return a.result == null ? null : ResultBuilder.withIterations(a.result, a.iterations + ip.iterations);
+        if (a.result == null) {
+            a.failure = "polish after " + ip.iterations + " interior-point iterations: " + a.failure;
+        } else {
+            a.result = ResultBuilder.withIterations(a.result, a.iterations + ip.iterations);
+        }
+        return a;
     }
 
     /**
@@ -88,9 +102,9 @@ public final class EquilibriumSolver {
         if (a.result != null) {
             return a.result;
         }
-        EquilibriumResult global = globalSolve(problem, st, start.iterate.lambda);
-        if (global != null) {
-            return global;
+        Attempt global = globalSolve(problem, st, start.iterate.lambda);
+        if (global.result != null) {
+            return global.result;
         }
         EquilibriumResult walked = continueFrom(problem, start);
         return walked != null ? walked : solve(problem);

@@ -30,6 +30,19 @@ final class InteriorPoint {
     private static final double MU_FACTOR = 0.1;
     /** Newton iterations over all stages before giving up. */
     private static final int MAX_ITERATIONS = 600;
+    /**
+     * Newton iterations per barrier stage: the centring need not be exact (the polish makes the
+     * answer exact), and on badly conditioned states Newton converges only linearly near the end.
+     */
+    private static final int MAX_INNER = 10;
+    /**
+     * Added to the unit diagonal of the Jacobi-scaled barrier Hessian: where trace gases underflow,
+     * some combinations of potentials leave every weighted constraint unchanged (a flat direction);
+     * without it their rounding-level gradient would give astronomically long steps.
+     */
+    private static final double REGULARISATION = 1e-9;
+    /** Largest change of any potential in one step [RT]. */
+    private static final double MAX_STEP = 50;
     /** Inner stopping test: squared Newton decrement per unit of mu. */
     private static final double DECREMENT = 1e-8;
 
@@ -49,6 +62,8 @@ final class InteriorPoint {
     private final double[] g;
     private final double[][] grad;
     int iterations;
+    /** why {@link #solve} returned null */
+    String failure = "";
 
     InteriorPoint(StateData st, double[] totals) {
         this.st = st;
@@ -88,7 +103,12 @@ final class InteriorPoint {
      */
     Iterate solve(double[] startLambda) {
         double[] lambda = feasibleStart(startLambda);
+        double[] bound = feasibleStart(boundStart());
+        if (lambda == null || (bound != null && evaluate(bound, MU_START, null, null) < evaluate(lambda, MU_START, null, null))) {
+            lambda = bound;
+        }
         if (lambda == null) {
+            failure = "no strictly feasible start";
             return null;
         }
         double[][] h = new double[m][m];
@@ -99,17 +119,19 @@ final class InteriorPoint {
             int inner = 0;
             while (true) {
                 if (++iterations > MAX_ITERATIONS) {
+                    failure = "more than " + MAX_ITERATIONS + " interior-point iterations (barrier weight " + mu + ")";
                     return null;
                 }
                 double f = evaluate(lambda, mu, gr, h);
                 if (!Double.isFinite(f) || !newtonStep(h, gr, d)) {
+                    failure = "singular barrier Hessian at barrier weight " + mu;
                     return null;
                 }
                 double dec = 0;
                 for (int j = 0; j < m; j++) {
                     dec -= gr[j] * d[j];
                 }
-                if (dec <= DECREMENT * mu || dec <= 1e-13 * (1 + Math.abs(f)) || ++inner > 60) {
+                if (dec <= DECREMENT * mu || dec <= 1e-13 * (1 + Math.abs(f)) || ++inner > MAX_INNER) {
                     break;
                 }
                 double[] next = lineSearch(lambda, d, f, dec, mu);
@@ -146,6 +168,29 @@ final class InteriorPoint {
             }
         }
         return null;
+    }
+
+    /**
+     * A start below every constraint: lambda_j = min over the members k that contain element j of
+     * c_k / atoms_k, so that a_k.lambda &lt;= c_k for every member (each feasible on its own).
+     */
+    private double[] boundStart() {
+        double[] lambda = new double[m];
+        java.util.Arrays.fill(lambda, Double.POSITIVE_INFINITY);
+        for (int p : phases) {
+            PhaseDef ph = sys.phase(p);
+            for (int k = 0; k < ph.members.length; k++) {
+                double c = st.c[p][k];
+                if (c == Double.POSITIVE_INFINITY) {
+                    continue;
+                }
+                Constituent mem = ph.members[k];
+                for (int j : mem.nzIndex) {
+                    lambda[j] = Math.min(lambda[j], c / mem.atoms);
+                }
+            }
+        }
+        return lambda;
     }
 
     /** How fast the constraint of phase p falls when every potential falls by 1 (at least). */
@@ -289,7 +334,7 @@ final class InteriorPoint {
             for (int l = 0; l < m; l++) {
                 a[j][l] = h[j][l] * scale[j] * scale[l];
             }
-            a[j][j] += 1e-13;
+            a[j][j] += REGULARISATION;
             d[j] = -gr[j] * scale[j];
         }
         if (!LinearSystem.solve(a, d, m)) {
@@ -307,8 +352,8 @@ final class InteriorPoint {
         for (double v : d) {
             big = Math.max(big, Math.abs(v));
         }
-        if (big > 1e4) {
-            alpha = 1e4 / big;
+        if (big > MAX_STEP) {
+            alpha = MAX_STEP / big;
         }
         double[] t = new double[m];
         for (int ls = 0; ls < 60; ls++) {
@@ -324,26 +369,82 @@ final class InteriorPoint {
         return null;
     }
 
-    /** The end of the path as a start of the active-set method. */
+    /**
+     * The end of the path as a start of the active-set method. A phase counts as present when its
+     * slack is small or it holds a significant share of its largest amount; the present phases are
+     * then taken in order of decreasing share, keeping only those whose constraint gradient (for a
+     * pure phase its stoichiometry, for the gas or a solution the composition at the current
+     * potentials) is linearly independent of the gradients already kept. This is the phase rule
+     * with solutions included: a dependent phase would make the Newton system of the polish
+     * singular, and its amount is taken up by the phases it depends on.
+     */
     private Iterate toIterate(double[] lambda, double mu) {
         double lnGas = Math.log(mu * weight[0] / -g[0] * total);
+        List<Integer> cand = new ArrayList<>();
+        double[] share = new double[phases.length];
+        for (int i = 1; i < phases.length; i++) {
+            share[i] = mu / -g[i];
+            if (-g[i] < 1e-4 || share[i] > 1e-6) {
+                cand.add(i);
+            }
+        }
+        cand.sort((x, y) -> Double.compare(share[y], share[x]));
+        List<double[]> basis = new ArrayList<>();
+        independent(grad[0], basis);
         List<Integer> act = new ArrayList<>();
         List<Double> amt = new ArrayList<>();
-        for (int i = 1; i < phases.length; i++) {
+        for (int i : cand) {
+            if (!independent(grad[i], basis)) {
+                continue;
+            }
             int p = phases[i];
-            double nu = mu * weight[i] / -g[i];
-            double moles = nu * total;
+            double moles = mu * weight[i] / -g[i] * total;
             PhaseDef ph = sys.phase(p);
             boolean solution = ph.kind == PhaseKind.SOLUTION;
             if (solution) {
                 moles /= ph.members[0].multiplicity;
             }
-            if (-g[i] < 1e-4 || moles > 1e-6 * st.scale[p]) {
-                act.add(p);
-                amt.add(solution ? Math.log(moles / st.scale[p]) : moles / st.scale[p]);
-            }
+            act.add(p);
+            amt.add(solution ? Math.log(moles / st.scale[p]) : moles / st.scale[p]);
         }
         return new Iterate(lambda.clone(), lnGas, act.stream().mapToInt(Integer::intValue).toArray(),
                 amt.stream().mapToDouble(Double::doubleValue).toArray());
+    }
+
+    /**
+     * Gram-Schmidt step: true (and v's orthonormal remainder added to the basis) if v is not a
+     * combination of the basis to 1e-7 of its norm.
+     */
+    private static boolean independent(double[] v, List<double[]> basis) {
+        double[] r = v.clone();
+        double norm = 0;
+        for (double x : r) {
+            norm += x * x;
+        }
+        norm = Math.sqrt(norm);
+        for (int pass = 0; pass < 2; pass++) {
+            for (double[] q : basis) {
+                double d = 0;
+                for (int j = 0; j < r.length; j++) {
+                    d += r[j] * q[j];
+                }
+                for (int j = 0; j < r.length; j++) {
+                    r[j] -= d * q[j];
+                }
+            }
+        }
+        double rest = 0;
+        for (double x : r) {
+            rest += x * x;
+        }
+        rest = Math.sqrt(rest);
+        if (!(rest > 1e-7 * norm)) {
+            return false;
+        }
+        for (int j = 0; j < r.length; j++) {
+            r[j] /= rest;
+        }
+        basis.add(r);
+        return true;
     }
 }

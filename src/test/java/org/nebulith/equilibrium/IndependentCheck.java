@@ -147,6 +147,54 @@ final class IndependentCheck {
         return new Report(bal, res, worst, minA[0] == Double.POSITIVE_INFINITY ? 0 : minA[0], minP[0], gibbs, lambda);
     }
 
+    /**
+     * Total G/RT of a state given as species amounts (gases ideal at pBar, condensed species pure),
+     * from the same data, corrected to first order for its element-balance error against the
+     * problem's totals with the given potentials: G - lambda.(A n - b), so that states with slightly
+     * different totals compare fairly.
+     *
+     * @param r         the problem and element order
+     * @param gas       gas species id to moles
+     * @param condensed condensed species id to moles
+     * @param lambda    element potentials [RT]
+     * @return the corrected G/RT [mol]
+     */
+    double gibbs(EquilibriumResult r, Map<String, Double> gas, Map<String, Double> condensed, double[] lambda) {
+        List<Element> els = r.system().elements();
+        double tK = r.problem().temperatureK();
+        double lnP = Math.log(r.problem().pressureBar());
+        double nGas = gas.values().stream().mapToDouble(Double::doubleValue).sum();
+        double[] sum = new double[els.size()];
+        double g = 0;
+        for (Map.Entry<String, Double> e : gas.entrySet()) {
+            double n = e.getValue();
+            if (n > 0) {
+                Species s = byId.get(e.getKey());
+                g += n * (s.thermo().gOverRT(tK) + lnP + Math.log(n / nGas));
+                add(sum, formula(s, els), n);
+            }
+        }
+        for (Map.Entry<String, Double> e : condensed.entrySet()) {
+            double n = e.getValue();
+            if (n > 0) {
+                Species s = byId.get(e.getKey());
+                g += n * s.thermo().gOverRT(tK);
+                add(sum, formula(s, els), n);
+            }
+        }
+        double[] b = r.problem().totals();
+        for (int j = 0; j < b.length; j++) {
+            g -= lambda[j] * (sum[j] - b[j]);
+        }
+        return g;
+    }
+
+    private static void add(double[] sum, double[] a, double n) {
+        for (int j = 0; j < a.length; j++) {
+            sum[j] += n * a[j];
+        }
+    }
+
     private void absentSpecies(EquilibriumResult r, List<Element> els, double[] lambda, double tK, double[] minA,
                                String[] minP) {
         java.util.Set<String> present = new java.util.HashSet<>();
