@@ -25,9 +25,9 @@ final class InteriorPoint {
     /** Barrier weight of the first stage, relative to the total amount of elements. */
     private static final double MU_START = 1.0;
     /** Barrier weight of the last stage. */
-    private static final double MU_END = 1e-12;
+    private static final double MU_END = 1e-10;
     /** Reduction of mu per stage. */
-    private static final double MU_FACTOR = 0.1;
+    private static final double MU_FACTOR = 0.02;
     /** Newton iterations over all stages before giving up. */
     private static final int MAX_ITERATIONS = 600;
     /**
@@ -44,7 +44,7 @@ final class InteriorPoint {
     /** Largest change of any potential in one step [RT]. */
     private static final double MAX_STEP = 50;
     /** Inner stopping test: squared Newton decrement per unit of mu. */
-    private static final double DECREMENT = 1e-8;
+    private static final double DECREMENT = 1e-3;
 
     private final StateData st;
     private final ChemicalSystem sys;
@@ -143,7 +143,8 @@ final class InteriorPoint {
             if (mu <= MU_END) {
                 break;
             }
-            mu *= MU_FACTOR;
+            // a stage that needed at most two steps was close to the path: take a longer step along it
+            mu = Math.max(MU_END, mu * (inner <= 2 ? MU_FACTOR * MU_FACTOR : MU_FACTOR));
         }
         evaluate(lambda, mu, null, null);
         return toIterate(lambda, mu);

@@ -36,41 +36,58 @@ class StressSeriesTest {
         assertTrue(bad.isEmpty(), bad.size() + " failures:\n" + String.join("\n", bad));
     }
 
+    /** One worker's solvers and checks (the solvers keep per-thread caches). */
+    private static final class Worker {
+        final StressSolve[] solves = {new StressSolve(false), new StressSolve(true)};
+        final IndependentCheck[] checks = {new IndependentCheck(SystemSpec.defaults()),
+            new IndependentCheck(SystemSpec.defaults().withSolutions(List.of()))};
+    }
+
+    /** Runs the states on two threads (the CI machines have two cores); failures in index order. */
     private static List<String> run(long first, int n, boolean bothModes) {
         StressStates gen = new StressStates(SEED);
-        StressSolve[] solves = {new StressSolve(false), new StressSolve(true)};
-        IndependentCheck[] checks = {new IndependentCheck(SystemSpec.defaults()),
-            new IndependentCheck(SystemSpec.defaults().withSolutions(List.of()))};
+        ThreadLocal<Worker> workers = ThreadLocal.withInitial(Worker::new);
+        java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(2);
+        try {
+            return pool.submit(() -> java.util.stream.LongStream.range(first, first + n).parallel()
+                    .mapToObj(i -> one(gen, i, bothModes, workers.get()))
+                    .flatMap(List::stream).collect(java.util.stream.Collectors.toList())).get();
+        } catch (InterruptedException | java.util.concurrent.ExecutionException e) {
+            throw new IllegalStateException(e);
+        } finally {
+            pool.shutdown();
+        }
+    }
+
+    private static List<String> one(StressStates gen, long i, boolean bothModes, Worker w) {
         List<String> bad = new ArrayList<>();
-        for (long i = first; i < first + n; i++) {
-            StressState s = gen.state(i);
-            StressState nb = gen.neighbour(s);
-            for (int mode = 0; mode < 2; mode++) {
-                if (!bothModes && mode != (int) (i % 2)) {
-                    continue;
+        StressState s = gen.state(i);
+        StressState nb = gen.neighbour(s);
+        for (int mode = 0; mode < 2; mode++) {
+            if (!bothModes && mode != (int) (i % 2)) {
+                continue;
+            }
+            StressSolve solve = w.solves[mode];
+            boolean pure = solve.pureOnly();
+            EquilibriumResult cold;
+            try {
+                cold = new EquilibriumSolver().solve(solve.problem(s));
+            } catch (ConvergenceException e) {
+                bad.add("cold " + s.pointCommand(pure) + ": " + e.getMessage());
+                continue;
+            }
+            String f = w.checks[mode].check(cold).failure();
+            if (f != null) {
+                bad.add("cold " + s.pointCommand(pure) + ": " + f);
+            }
+            try {
+                EquilibriumResult warm = solve.warmResult(nb, cold);
+                String fw = w.checks[mode].check(warm).failure();
+                if (fw != null) {
+                    bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + fw);
                 }
-                StressSolve solve = solves[mode];
-                boolean pure = solve.pureOnly();
-                EquilibriumResult cold;
-                try {
-                    cold = new EquilibriumSolver().solve(solve.problem(s));
-                } catch (ConvergenceException e) {
-                    bad.add("cold " + s.pointCommand(pure) + ": " + e.getMessage());
-                    continue;
-                }
-                String f = checks[mode].check(cold).failure();
-                if (f != null) {
-                    bad.add("cold " + s.pointCommand(pure) + ": " + f);
-                }
-                try {
-                    EquilibriumResult warm = solve.warmResult(nb, cold);
-                    String fw = checks[mode].check(warm).failure();
-                    if (fw != null) {
-                        bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + fw);
-                    }
-                } catch (ConvergenceException e) {
-                    bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + e.getMessage());
-                }
+            } catch (ConvergenceException e) {
+                bad.add("warm " + nb.pointCommand(pure) + " from " + s + ": " + e.getMessage());
             }
         }
         return bad;
