@@ -66,7 +66,20 @@ public final class EquilibriumSolver {
      * active-set Newton polish from its end point; null if either fails.
      */
     private Attempt globalSolve(EquilibriumProblem problem, StateData st, double[] startLambda) {
-        InteriorPoint ip = new InteriorPoint(st, problem.totals());
+        Attempt fast = globalSolve(problem, st, startLambda, InteriorPoint.FAST);
+        if (fast.result != null) {
+            return fast;
+        }
+        Attempt careful = globalSolve(problem, st, startLambda, InteriorPoint.CAREFUL);
+        if (careful.result == null) {
+            careful.failure = "first try: " + fast.failure + "; careful try: " + careful.failure;
+        }
+        return careful;
+    }
+
+    private Attempt globalSolve(EquilibriumProblem problem, StateData st, double[] startLambda,
+                                InteriorPoint.Settings settings) {
+        InteriorPoint ip = new InteriorPoint(st, problem.totals(), settings);
         Iterate it = ip.solve(startLambda);
         if (it == null) {
             Attempt a = new Attempt();

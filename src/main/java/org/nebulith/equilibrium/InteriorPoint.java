@@ -24,27 +24,29 @@ import java.util.List;
 final class InteriorPoint {
     /** Barrier weight of the first stage, relative to the total amount of elements. */
     private static final double MU_START = 1.0;
-    /** Barrier weight of the last stage. */
-    private static final double MU_END = 1e-10;
-    /** Reduction of mu per stage. */
-    private static final double MU_FACTOR = 0.02;
     /** Newton iterations over all stages before giving up. */
     private static final int MAX_ITERATIONS = 600;
+
     /**
-     * Newton iterations per barrier stage: the centring need not be exact (the polish makes the
-     * answer exact), and on badly conditioned states Newton converges only linearly near the end.
+     * Path-following settings.
+     *
+     * @param muEnd          barrier weight of the last stage
+     * @param muFactor       reduction of the weight per stage (squared after a stage of at most two steps)
+     * @param maxInner       Newton steps per stage
+     * @param decrement      inner stopping test: squared Newton decrement per unit of weight
+     * @param regularisation added to the unit diagonal of the scaled Hessian
+     * @param maxStep        largest change of a potential per step [RT]
      */
-    private static final int MAX_INNER = 10;
+    record Settings(double muEnd, double muFactor, int maxInner, double decrement, double regularisation, double maxStep) {
+    }
+
+    /** Few, long stages with loose centring: the first try. */
+    static final Settings FAST = new Settings(1e-10, 0.02, 10, 1e-3, 1e-9, 50);
     /**
-     * Added to the unit diagonal of the Jacobi-scaled barrier Hessian: where trace gases underflow,
-     * some combinations of potentials leave every weighted constraint unchanged (a flat direction);
-     * without it their rounding-level gradient would give astronomically long steps.
+     * Short stages centred tightly, to a smaller last weight: slower, but it follows the path where
+     * the first try, on badly scaled low-temperature states, stalls.
      */
-    private static final double REGULARISATION = 1e-9;
-    /** Largest change of any potential in one step [RT]. */
-    private static final double MAX_STEP = 50;
-    /** Inner stopping test: squared Newton decrement per unit of mu. */
-    private static final double DECREMENT = 1e-3;
+    static final Settings CAREFUL = new Settings(1e-12, 0.1, 60, 1e-8, 1e-13, 1e4);
 
     private final StateData st;
     private final ChemicalSystem sys;
@@ -65,7 +67,10 @@ final class InteriorPoint {
     /** why {@link #solve} returned null */
     String failure = "";
 
-    InteriorPoint(StateData st, double[] totals) {
+    private final Settings set;
+
+    InteriorPoint(StateData st, double[] totals, Settings set) {
+        this.set = set;
         this.st = st;
         this.sys = st.system;
         this.m = sys.elementCount();
@@ -131,7 +136,7 @@ final class InteriorPoint {
                 for (int j = 0; j < m; j++) {
                     dec -= gr[j] * d[j];
                 }
-                if (dec <= DECREMENT * mu || dec <= 1e-13 * (1 + Math.abs(f)) || ++inner > MAX_INNER) {
+                if (dec <= set.decrement() * mu || dec <= 1e-13 * (1 + Math.abs(f)) || ++inner > set.maxInner()) {
                     break;
                 }
                 double[] next = lineSearch(lambda, d, f, dec, mu);
@@ -140,11 +145,11 @@ final class InteriorPoint {
                 }
                 lambda = next;
             }
-            if (mu <= MU_END) {
+            if (mu <= set.muEnd()) {
                 break;
             }
             // a stage that needed at most two steps was close to the path: take a longer step along it
-            mu = Math.max(MU_END, mu * (inner <= 2 ? MU_FACTOR * MU_FACTOR : MU_FACTOR));
+            mu = Math.max(set.muEnd(), mu * (inner <= 2 ? set.muFactor() * set.muFactor() : set.muFactor()));
         }
         evaluate(lambda, mu, null, null);
         return toIterate(lambda, mu);
@@ -335,7 +340,7 @@ final class InteriorPoint {
             for (int l = 0; l < m; l++) {
                 a[j][l] = h[j][l] * scale[j] * scale[l];
             }
-            a[j][j] += REGULARISATION;
+            a[j][j] += set.regularisation();
             d[j] = -gr[j] * scale[j];
         }
         if (!LinearSystem.solve(a, d, m)) {
@@ -353,8 +358,8 @@ final class InteriorPoint {
         for (double v : d) {
             big = Math.max(big, Math.abs(v));
         }
-        if (big > MAX_STEP) {
-            alpha = MAX_STEP / big;
+        if (big > set.maxStep()) {
+            alpha = set.maxStep() / big;
         }
         double[] t = new double[m];
         for (int ls = 0; ls < 60; ls++) {
