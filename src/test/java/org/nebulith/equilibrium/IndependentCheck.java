@@ -31,7 +31,7 @@ import org.nebulith.thermo.Species;
  * </ol>
  * It also returns the total Gibbs energy G/RT of the reported state, computed from the same data.
  */
-final class IndependentCheck {
+public final class IndependentCheck {
     static final double BALANCE_LIMIT = 1e-10;
     static final double RESIDUAL_LIMIT = 1e-6;
     static final double AFFINITY_LIMIT = -1e-6;
@@ -49,10 +49,10 @@ final class IndependentCheck {
      * @param gibbs            total G/RT of the reported state [mol]
      * @param lambda           the refitted element potentials
      */
-    record Report(double balance, double residual, String worstSpecies, double minAffinity, String minAffinityPhase,
+    public record Report(double balance, double residual, String worstSpecies, double minAffinity, String minAffinityPhase,
                   double gibbs, double[] lambda) {
         /** @return null if every check passes, else what failed */
-        String failure() {
+        public String failure() {
             if (!(balance <= BALANCE_LIMIT)) {
                 return String.format(Locale.ROOT, "element balance error %.3g > %.1g", balance, BALANCE_LIMIT);
             }
@@ -72,7 +72,7 @@ final class IndependentCheck {
     private final Map<String, Species> byId = new HashMap<>();
 
     /** @param spec the species selection and solutions the result was computed with */
-    IndependentCheck(SystemSpec spec) {
+    public IndependentCheck(SystemSpec spec) {
         this.spec = spec;
         for (Species s : spec.species()) {
             byId.put(s.id(), s);
@@ -80,7 +80,7 @@ final class IndependentCheck {
     }
 
     /** @param r a result @return the report */
-    Report check(EquilibriumResult r) {
+    public Report check(EquilibriumResult r) {
         ChemicalSystem sys = r.system();
         List<Element> els = sys.elements();
         double tK = r.problem().temperatureK();
