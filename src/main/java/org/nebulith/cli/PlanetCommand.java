@@ -137,11 +137,15 @@ public final class PlanetCommand extends RunCommand {
             }
             PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
+                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
+                    chemistry.ciReference());
             PlanetReportWriter.write(run, data);
             Path done = run.commit();
             for (ZonePlanet zp : planets) {
                 context.out().println(PlanetReportWriter.summary(zp));
+            }
+            for (ZonePlanet zp : planets) {
+                org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
             }
             context.out().println("report: " + done.resolve("report.html"));
             PlanetReportWriter.CAUTIONS.forEach(context::warn);

@@ -49,10 +49,31 @@ public final class EquilibriumSolver {
      * @throws ConvergenceException naming the state if no checked equilibrium was found
      */
     public EquilibriumResult solve(EquilibriumProblem problem) {
+        if (problem.temperatureK() >= SHORT_CONTINUATION_K) {
+            try {
+                return coldSolve(problem);
+            } catch (ConvergenceException e) {
+                return globalCold(problem, e.getMessage());
+            }
+        }
+        return globalCold(problem, null);
+    }
+
+    /**
+     * Above this temperature [K] a cold start tries the continuation from the all-gas state first:
+     * its path from {@link SolverOptions#coldStartTK()} is a few steps long there and costs less than
+     * the interior-point path (measured with {@code nebulith bench}).
+     */
+    static final double SHORT_CONTINUATION_K = 1500;
+
+    private EquilibriumResult globalCold(EquilibriumProblem problem, String continuationFailure) {
         StateData st = new StateData(problem);
         Attempt g = globalSolve(problem, st, GasGuess.initial(st, problem.totals()).lambda);
         if (g.result != null) {
             return ResultBuilder.markCold(g.result, g.result.diagnostics().newtonIterations());
+        }
+        if (continuationFailure != null) {
+            throw new ConvergenceException(continuationFailure + "; interior-point path: " + g.failure);
         }
         try {
             return coldSolve(problem);
@@ -115,12 +136,12 @@ public final class EquilibriumSolver {
         if (a.result != null) {
             return a.result;
         }
-        Attempt global = globalSolve(problem, st, start.iterate.lambda);
-        if (global.result != null) {
-            return global.result;
-        }
         EquilibriumResult walked = continueFrom(problem, start);
-        return walked != null ? walked : solve(problem);
+        if (walked != null) {
+            return walked;
+        }
+        Attempt global = globalSolve(problem, st, start.iterate.lambda);
+        return global.result != null ? global.result : solve(problem);
     }
 
     /**

@@ -41,7 +41,12 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     public static final String DEFAULT_DISK = DiskPresets.STEADY_VISCOUS_DEFAULT;
     /** Default zone file of surveys (classpath copy of the top-level folder). */
     public static final String DEFAULT_ZONES = "feeding-zones/survey-default.csv";
-    /** Quantities reported per zone, in this order (0 where one does not apply). */
+    /**
+     * Quantities reported per zone, in this order; one that does not apply (no solids, no rock for a
+     * core mass fraction, no Si for a ratio to Si, no Mg and Fe in the mantle for Mg#, no mantle for
+     * its oxides) is marked {@link Quantity#notApplicable}, never 0. An oxide absent from a mantle
+     * that exists is a true 0.
+     */
     public static final List<String> QUANTITIES = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar",
             "Al_Si_molar", "Ti_Si_molar", "Ni_Fe_molar", "S_Si_molar", "O_Si_molar", "core_mass_fraction",
             "mantle_Mg_number", "ice_mass_fraction", "mantle_SiO2_wt_pct", "mantle_MgO_wt_pct", "mantle_FeO_wt_pct",
@@ -94,6 +99,9 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
 
     /** The disk must stay inside the data's temperatures and the model's pressures where equilibria are computed. */
     private static void checkDomain(String diskName, DiskModel d, List<FeedingZone> zones, FormationSettings fs) {
+        if (zones.isEmpty()) {
+            return;
+        }
         double lo = Double.POSITIVE_INFINITY;
         double hi = 0;
         for (FeedingZone zone : zones) {
@@ -109,6 +117,20 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
                             org.nebulith.equilibrium.StateDomain.maxTemperatureK(species))
                     + " and P within " + org.nebulith.equilibrium.StateDomain.pressureRange() + " above the floor temperature");
         }
+    }
+
+    /**
+     * @param settings the survey settings (disk, null for the default; solar reference; its zones are not read)
+     * @param zones    the zones to estimate
+     * @return the estimator
+     */
+    public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
+        DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
+        FormationSettings fs = FormationSettings.defaults().withIntegration(ZoneCondensation.fast());
+        checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, zones, fs);
+        PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
+        return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
+                java.util.Collections.emptyNavigableMap(), new AtomicLong());
     }
 
     private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {
@@ -137,19 +159,27 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         return out;
     }
 
-    /** @param zp a zone planet @return the fixed list of quantities (0 where one does not apply) */
+    /** @param zp a zone planet @return the fixed list of quantities (marked where one does not apply) */
     static List<Quantity> quantities(ZonePlanet zp) {
         Map<String, Quantity> have = new LinkedHashMap<>();
+        boolean mantle = false;
         if (zp.planet().hasSolids()) {
             PlanetComposition c = zp.planet().require();
             for (Quantity q : c.quantities()) {
                 have.put(q.name(), q);
+                mantle |= q.name().startsWith("mantle_") && q.name().endsWith("_wt_pct");
             }
         }
         List<Quantity> out = new ArrayList<>();
         for (String name : QUANTITIES) {
             Quantity q = have.get(name);
-            out.add(q != null ? q : new Quantity(name, 0.0, unitOf(name)));
+            if (q != null) {
+                out.add(q);
+            } else if (mantle && name.startsWith("mantle_") && name.endsWith("_wt_pct")) {
+                out.add(new Quantity(name, 0.0, unitOf(name)));
+            } else {
+                out.add(Quantity.notApplicable(name, unitOf(name)));
+            }
         }
         return out;
     }

@@ -49,10 +49,12 @@ final class SurveyReport {
         }
         r.table(stars(starsCsv), "survey-stars.csv (first " + SHOWN_STARS + " stars)");
         report.caution("Only the catalogue's random errors are propagated, not systematics between abundance analyses.");
+        report.caution("Draws that failed (failures.csv) or to which a quantity does not apply are left out of its "
+                + "percentiles (n_draws in survey.csv says how many remain); they are not a random sample.");
         report.caution("Each draw is an equilibrium-condensation planet estimate: ideal solutions, no kinetics, no "
                 + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
         report.inputs(inputs);
-        for (String f : List.of("survey.csv", StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
+        for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
                 SurveyChart.BASE + ".svg", "summary.md")) {
             report.outputFile(f);
         }

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
@@ -18,7 +19,9 @@ import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
+import org.nebulith.zones.IntegrationQuality;
 import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
 
 /** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
 public final class PlanetReportWriter {
@@ -55,11 +58,20 @@ public final class PlanetReportWriter {
      * @param settings     effective settings (key, value, origin)
      * @param inputs       the run's input files
      * @param sources      data sources (key, citation)
+     * @param ci           the CI-chondrite reference of the run (dust and comparisons)
      */
     public record RunData(String title, String command, String version, Instant started, String composition,
                           ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                           List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
-                          List<Report.Citation> sources) {
+                          List<Report.Citation> sources, org.nebulith.composition.CiReference ci) {
+        /** Run data with the default CI reference. */
+        public RunData(String title, String command, String version, Instant started, String composition,
+                       ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
+                       List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
+                       List<Report.Citation> sources) {
+            this(title, command, version, started, composition, host, disk, chemistry, planets, scan, settings, inputs,
+                    sources, org.nebulith.composition.CiReference.DEFAULT);
+        }
     }
 
     private PlanetReportWriter() {
@@ -72,7 +84,7 @@ public final class PlanetReportWriter {
      */
     public static Report write(RunFolder run, RunData data) {
         Table bulk = PlanetTables.bulkComposition(data.planets());
-        Table comparison = PlanetTables.comparison(data.planets(), data.host());
+        Table comparison = PlanetTables.comparison(data.planets(), data.host(), data.ci());
         Table phases = PlanetTables.zonePhases(data.planets());
         Table profile = PlanetTables.radialProfile(data.scan());
         run.writeCsv("bulk-composition.csv", bulk);
@@ -82,7 +94,7 @@ public final class PlanetReportWriter {
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
         ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets())
                 .chart(ChartSize.PAGE), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host())
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(), data.ci())
                 .chart(ChartSize.PAGE), run, "planet-comparison", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
@@ -92,6 +104,7 @@ public final class PlanetReportWriter {
         Report.Section planets = report.section("Planets");
         for (ZonePlanet zp : data.planets()) {
             planets.paragraph(summary(zp));
+            ZoneNotices.of(zp).forEach(n -> planets.paragraph("Notice: " + n + "."));
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
@@ -102,6 +115,10 @@ public final class PlanetReportWriter {
                 .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
                         + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
                 .table(phases, "zone-phases.csv: what each zone collected");
+        Report.Section integration = report.section("Radial integration");
+        for (ZonePlanet zp : data.planets()) {
+            integration.paragraph(integrationNote(zp));
+        }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         CAUTIONS.forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
@@ -128,7 +145,7 @@ public final class PlanetReportWriter {
         if (c.hasRock()) {
             sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
         }
-        if (c.oxides() != null && c.oxides().hasMgNumber()) {
+        if (c.hasMgNumber()) {
             sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
@@ -136,6 +153,23 @@ public final class PlanetReportWriter {
         }
         sb.append('.');
         return sb.toString();
+    }
+
+    /**
+     * @param zp a zone planet
+     * @return the run note on its radial integral: evaluations, the worst panel, its radius and its
+     *         estimated error, and panels accepted where the error stopped falling
+     */
+    public static String integrationNote(ZonePlanet zp) {
+        ZoneInventory inv = zp.inventory();
+        IntegrationQuality q = inv.quality();
+        if (q.fixedRule()) {
+            return zp.zoneName() + ": fixed composite rule, " + inv.evaluations() + " evaluations (no error estimate).";
+        }
+        return String.format(java.util.Locale.ROOT, "%s: %d evaluations, %d fronts; worst panel %.6g-%.6g AU"
+                + " (r = %.6g AU), estimated error %.2g relative; whole zone %.2g relative; %d panel(s) accepted"
+                + " where the error stopped falling when halved.", zp.zoneName(), inv.evaluations(), inv.fronts().size(),
+                q.worstLoAU(), q.worstHiAU(), q.worstRadiusAU(), q.worstRelError(), q.totalRelError(), q.acceptedPanels());
     }
 
     private static Table keyRows(List<ZonePlanet> planets) {
@@ -149,7 +183,7 @@ public final class PlanetReportWriter {
             PlanetComposition c = zp.planet().require();
             t.row(zp.zoneName(), c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar"),
                     c.hasRock() ? c.coreMassFraction() : null,
-                    c.oxides() != null && c.oxides().hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
+                    c.hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
         }
         return t;
     }

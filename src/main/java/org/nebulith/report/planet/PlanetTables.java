@@ -7,11 +7,12 @@ import java.util.Map;
 import java.util.StringJoiner;
 
 import org.nebulith.composition.ElementAbundances;
-import org.nebulith.planet.MassRadius;
+import org.nebulith.planet.PlanetRadius;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.Quantity;
 import org.nebulith.planet.ReferenceBodies;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
 import org.nebulith.report.Table;
@@ -44,13 +45,20 @@ public final class PlanetTables {
             }
             PlanetComposition c = zp.planet().require();
             for (Quantity q : c.quantities()) {
-                t.row(zp.zoneName(), q.name(), q.value(), q.unit());
+                t.row(zp.zoneName(), q.name(), q.valueOrNull(), q.unit());
             }
             t.row(zp.zoneName(), "solids_mass_g", c.bulk().massGrams(), "g");
             zp.inventory().zone().planetMassMearth().ifPresent(m -> {
+                PlanetRadius r = PlanetRadius.zeng2016(m, c);
+                t.row(zp.zoneName(), "radius_Rearth_Zeng2016", r.radiusRearth().orElse(null),
+                        "R_earth (for " + m + " M_earth" + (r.note().isEmpty() ? "" : "; " + r.note()) + ")");
                 if (c.hasRock()) {
-                    t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
-                            "R_earth (for " + m + " M_earth)");
+                    double refractory = c.refractoryOxideFraction();
+                    boolean fits = refractory <= ZoneNotices.REFRACTORY_LIMIT;
+                    t.row(zp.zoneName(), "radius_Rearth_structure", fits ? StructureRadius.of(c, m) : null,
+                            "R_earth (for " + m + " M_earth" + (fits ? "" : String.format(java.util.Locale.ROOT,
+                                    "; not applicable: solids %.0f %% refractory oxides, outside the model's Fe core"
+                                            + " + Mg-silicate mantle", 100 * refractory)) + ")");
                 }
             });
         }
@@ -63,12 +71,23 @@ public final class PlanetTables {
      * @return {@code comparison.csv}: zone,quantity,planet,host_star,bulk_earth,bulk_silicate_earth,ci_chondrite,unit
      */
     public static Table comparison(List<ZonePlanet> planets, ElementAbundances host) {
+        return comparison(planets, host, org.nebulith.composition.CiReference.DEFAULT);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's (gas) composition
+     * @param ci      the CI reference of the run (the {@code ci_chondrite} column)
+     * @return {@code comparison.csv} as {@link #comparison(List, ElementAbundances)}
+     */
+    public static Table comparison(List<ZonePlanet> planets, ElementAbundances host,
+                                   org.nebulith.composition.CiReference ci) {
         Table t = Table.withColumns("comparison.csv", "zone", "quantity", "planet", "host_star", "bulk_earth",
                 "bulk_silicate_earth", "ci_chondrite", "unit");
         Map<String, Double> hostRatios = MolarRatios.of(host);
         List<Map<String, Double>> refs = new ArrayList<>();
         for (String b : BODIES) {
-            ElementAbundances e = ReferenceBodies.get(b).elements();
+            ElementAbundances e = body(b, ci).elements();
             refs.add(e.isEmpty() ? Map.of() : MolarRatios.of(e));
         }
         for (ZonePlanet zp : planets) {
@@ -89,13 +108,17 @@ public final class PlanetTables {
             cmf.add(c.hasRock() ? c.coreMassFraction() : null);
             cmf.add(null);
             for (String b : BODIES) {
-                ReferenceBodies.Body body = ReferenceBodies.get(b);
+                ReferenceBodies.Body body = body(b, ci);
                 cmf.add(body.coreMassFraction().isPresent() ? body.coreMassFraction().getAsDouble() : null);
             }
             cmf.add("mass fraction of rock");
             t.row(cmf);
         }
         return t;
+    }
+
+    private static ReferenceBodies.Body body(String name, org.nebulith.composition.CiReference ci) {
+        return name.equals(ReferenceBodies.CI) ? ReferenceBodies.ci(ci) : ReferenceBodies.get(name);
     }
 
     /**
