@@ -24,8 +24,6 @@ import java.util.List;
 final class InteriorPoint {
     /** Barrier weight of the first stage, relative to the total amount of elements. */
     private static final double MU_START = 1.0;
-    /** Newton iterations over all stages before giving up. */
-    private static final int MAX_ITERATIONS = 600;
 
     /**
      * Path-following settings.
@@ -36,17 +34,19 @@ final class InteriorPoint {
      * @param decrement      inner stopping test: squared Newton decrement per unit of weight
      * @param regularisation added to the unit diagonal of the scaled Hessian
      * @param maxStep        largest change of a potential per step [RT]
+     * @param maxIterations  Newton steps over all stages before giving up
      */
-    record Settings(double muEnd, double muFactor, int maxInner, double decrement, double regularisation, double maxStep) {
+    record Settings(double muEnd, double muFactor, int maxInner, double decrement, double regularisation, double maxStep,
+                    int maxIterations) {
     }
 
     /** Few, long stages with loose centring: the first try. */
-    static final Settings FAST = new Settings(1e-10, 0.02, 10, 1e-3, 1e-9, 50);
+    static final Settings FAST = new Settings(1e-10, 0.02, 10, 1e-3, 1e-9, 50, 300);
     /**
      * Short stages centred tightly, to a smaller last weight: slower, but it follows the path where
      * the first try, on badly scaled low-temperature states, stalls.
      */
-    static final Settings CAREFUL = new Settings(1e-12, 0.1, 60, 1e-8, 1e-13, 1e4);
+    static final Settings CAREFUL = new Settings(1e-12, 0.1, 60, 1e-8, 1e-13, 1e4, 2000);
 
     private final StateData st;
     private final ChemicalSystem sys;
@@ -123,8 +123,8 @@ final class InteriorPoint {
         while (true) {
             int inner = 0;
             while (true) {
-                if (++iterations > MAX_ITERATIONS) {
-                    failure = "more than " + MAX_ITERATIONS + " interior-point iterations (barrier weight " + mu + ")";
+                if (++iterations > set.maxIterations()) {
+                    failure = "more than " + set.maxIterations() + " interior-point iterations (barrier weight " + mu + ")";
                     return null;
                 }
                 double f = evaluate(lambda, mu, gr, h);
