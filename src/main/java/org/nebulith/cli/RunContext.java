@@ -17,6 +17,7 @@ import org.nebulith.progress.ProgressMode;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
+import org.nebulith.report.RunMarker;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
@@ -44,7 +45,7 @@ public final class RunContext {
 
     private final String command;
     private final Verbosity verbosity;
-    private final RunOptions runOptions;
+    private final OutputTarget runOptions;
     private final PrintStream out;
     private final PrintStream err;
     private final RunInputs inputs = new RunInputs();
@@ -52,7 +53,7 @@ public final class RunContext {
     private final List<Setting> settings;
     private final Optional<PresetFile> preset;
 
-    private RunContext(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions,
+    private RunContext(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions,
                        final Optional<PresetFile> preset) {
         this.command = spec.name();
         this.verbosity = verbosity;
@@ -70,14 +71,20 @@ public final class RunContext {
      * @param runOptions its output options
      * @return the context; the preset (if any) is checked against the command and registered as an input
      */
-    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions) {
+    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions) {
         Optional<PresetFile> preset = Optional.empty();
         if (spec.defaultValueProvider() instanceof PresetDefaults) {
             preset = ((PresetDefaults) spec.defaultValueProvider()).preset();
         }
         preset.ifPresent(p -> p.checkFor(spec.name(), presetKeys(spec)));
         RunContext context = new RunContext(spec, verbosity, runOptions, preset);
-        preset.ifPresent(p -> context.inputs.add(p.file(), "preset"));
+        preset.ifPresent(p -> {
+            if (p.builtInContent().isPresent()) {
+                context.inputs.addBuiltIn(p.file().toString(), "settings preset", p.builtInContent().get());
+            } else {
+                context.inputs.add(p.file(), "settings preset");
+            }
+        });
         return context;
     }
 
@@ -116,6 +123,23 @@ public final class RunContext {
     }
 
     /**
+     * The standing cautions of a run: every one as a warning, or with --quiet one line pointing to
+     * where they are written.
+     *
+     * @param cautions the cautions
+     * @param where    the report that lists them
+     */
+    public void cautions(final List<String> cautions, final Path where) {
+        if (verbosity == Verbosity.QUIET) {
+            if (!cautions.isEmpty()) {
+                err.println("warning: " + cautions.size() + " cautions apply to these results; see " + where);
+            }
+            return;
+        }
+        cautions.forEach(this::warn);
+    }
+
+    /**
      * @param task  short task name
      * @param total number of steps
      * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
@@ -137,6 +161,23 @@ public final class RunContext {
         return file;
     }
 
+    /**
+     * Registers a named input (preset) found by the {@link PresetCatalogue}: a working-folder file
+     * like any input, a built-in copy under its shown name; both with their SHA-256.
+     *
+     * @param entry the input
+     * @param role  what it is for
+     * @return entry
+     */
+    public PresetCatalogue.Entry namedInput(final PresetCatalogue.Entry entry, final String role) {
+        if (entry.builtIn()) {
+            inputs.addBuiltIn(entry.shown(), role, entry.content());
+        } else {
+            inputs.add(entry.file(), role);
+        }
+        return entry;
+    }
+
     /** @return the registered inputs */
     public RunInputs inputs() {
         return inputs;
@@ -145,6 +186,11 @@ public final class RunContext {
     /** @return whether --force was given */
     public boolean force() {
         return runOptions.force();
+    }
+
+    /** @return whether --run-name was given */
+    public boolean hasRunName() {
+        return runOptions.runName() != null;
     }
 
     /** @return the --out value, if given (commands writing a single file use it as that file) */
@@ -157,17 +203,45 @@ public final class RunContext {
      * @return the output folder: --out, or reports/&lt;run-name&gt;
      */
     public Path outputFolder(final String defaultRunName) {
-        return runOptions.outputFolder(defaultRunName);
+        return RunOptions.outputFolder(runOptions, defaultRunName);
     }
 
     /**
-     * Register all inputs first: the folder may not be or contain one.
+     * The one rule for default run folders: {@code <command>-<yyyyMMdd-HHmmss>} of the start time
+     * (UTC), with {@code -2}, {@code -3}, ... appended if {@code reports/} already holds that name.
+     *
+     * @return the run name used when neither --out nor --run-name is given
+     */
+    public String defaultRunName() {
+        return DefaultRunName.of(command, started, RunOptions.REPORTS);
+    }
+
+    /**
+     * Checks the output folder and locks it; call it after every input is registered and before
+     * anything is computed (the folder may not be or contain an input).
      *
      * @param defaultRunName run name used when neither --out nor --run-name is given
      * @return an open run folder (commit it at the end; close it in any case)
      */
     public RunFolder openRunFolder(final String defaultRunName) {
-        return AtomicOutput.openRunFolder(outputFolder(defaultRunName), force(), inputs);
+        return RunFolder.open(outputFolder(defaultRunName), force(), inputs, marker());
+    }
+
+    /**
+     * Checks the single output file named by --out and locks it; call it after every input is
+     * registered and before anything is computed.
+     *
+     * @param firstLine the first line of every output of this command (an existing file is
+     *                  replaced with --force only if it starts with it)
+     * @return the reserved file, if --out was given
+     */
+    public Optional<AtomicOutput.OutputFile> reserveOutputFile(final String firstLine) {
+        return outOption().map(path -> AtomicOutput.reserveFile(path, force(), inputs, firstLine, command));
+    }
+
+    /** @return the marker of this run's output folder */
+    public RunMarker marker() {
+        return new RunMarker(command, toolVersion(), started);
     }
 
     /** @return when the run started */

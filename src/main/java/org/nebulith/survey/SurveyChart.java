@@ -13,15 +13,14 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.knowm.xchart.XYChart;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunInputs;
+import org.nebulith.report.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.chart.SurveyScatter;
 
 /**
- * The survey chart, {@code survey-chart.png} and {@code .svg}: molar Mg/Si against Fe/Si of the
+ * The survey chart, {@code survey-chart.png}, {@code .svg} and {@code .pdf}: molar Mg/Si against Fe/Si of the
  * host stars and of every predicted planet zone, medians with 16th-84th percentile bars, read back
  * from {@code survey.csv}. At most {@value #MAX_STARS} stars are drawn (the first ones).
  */
@@ -34,7 +33,7 @@ final class SurveyChart {
     }
 
     /** @return the PNG bytes of the chart, or null if there is nothing to draw */
-    static byte[] write(Path survey, Path folder, RunInputs inputs) throws IOException {
+    static byte[] write(Path survey, RunFolder run) throws IOException {
         List<SurveyScatter.Point> stars = new ArrayList<>();
         List<SurveyScatter.Point> planets = new ArrayList<>();
         Map<String, double[]> pending = new HashMap<>();
@@ -66,9 +65,10 @@ final class SurveyChart {
         }
         XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"), out -> ChartRenderer.vector(chart, ChartFormat.SVG, out),
-                true, inputs);
+        run.write(BASE + ".png", out -> out.write(png));
+        for (ChartFormat vector : List.of(ChartFormat.SVG, ChartFormat.PDF)) {
+            run.write(BASE + "." + vector.extension(), out -> ChartRenderer.vector(chart, vector, out));
+        }
         return png;
     }
 

@@ -12,7 +12,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
 import org.nebulith.report.Table;
 import org.nebulith.report.chart.ChartRenderer;
@@ -31,7 +31,7 @@ final class SurveyReport {
     private SurveyReport() {
     }
 
-    static void write(Path folder, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
+    static void write(RunFolder run, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
         Report report = new Report("Nebulith host-star survey", "nebulith survey", org.nebulith.report.RunFolder.class
                 .getPackage().getImplementationVersion() == null ? "dev"
                 : org.nebulith.report.RunFolder.class.getPackage().getImplementationVersion(), Instant.now());
@@ -55,12 +55,12 @@ final class SurveyReport {
                 + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
         report.inputs(inputs);
         for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
-                SurveyChart.BASE + ".svg", "summary.md")) {
+                SurveyChart.BASE + ".svg", SurveyChart.BASE + ".pdf", "summary.md")) {
             report.outputFile(f);
         }
         report.finish(Instant.now());
-        AtomicOutput.writeText(folder.resolve("report.html"), HtmlReportWriter.write(report), true, inputs);
-        AtomicOutput.writeText(folder.resolve("summary.md"), MarkdownSummaryWriter.write(report), true, inputs);
+        run.writeText("report.html", HtmlReportWriter.write(report));
+        run.writeText("summary.md", MarkdownSummaryWriter.write(report));
     }
 
     private static Table stars(Path csv) throws IOException {
