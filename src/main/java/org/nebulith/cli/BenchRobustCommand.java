@@ -30,17 +30,18 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "bench-robust",
         description = {
-            "Stress benchmark of the equilibrium engine: N seeded random states over the whole domain",
-            "(T 200-2500 K, P 1e-10-1 bar, every element scaled by 10^U(-0.7,0.7), C/O 0.1-2,",
-            "dust enrichment 1-1000), with all solutions and pure phases, each solved cold and warm.",
-            "Prints converged counts, every failure as a point command, median and 99th-percentile",
-            "time and Newton iterations. Exit 3 if any state failed.",
+            "Stress benchmark of the equilibrium engine: N seeded random states",
+            "(T 200-2500 K, P 1e-10-1 bar, every element x 10^U(-0.7,0.7), C/O 0.1-2,",
+            "dust enrichment 1-1000), with all solutions and with pure phases, each",
+            "solved cold and warm. Prints converged counts, every failure as a point",
+            "command, median and 99th-percentile time and Newton iterations.",
+            "Exit 3 if any state failed.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
             "  nebulith bench-robust --states 1000 --seed 1",
             "  nebulith bench-robust --states 100000 --seed 1 --threads 2",
-            "  nebulith bench-robust --seed 1 --only 4711       (rerun one state of the series)",
+            "  nebulith bench-robust --seed 1 --only 4711   (rerun one state)",
         })
 public final class BenchRobustCommand extends RunCommand {
 
