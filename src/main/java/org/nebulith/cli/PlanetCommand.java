@@ -123,6 +123,9 @@ public final class PlanetCommand extends RunCommand {
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
+        DomainChecks.temperature("--floor-K", floorK, spec.species());
+        DomainChecks.disk("--disk", disk, diskModel, scanMin(diskModel, zoneList), scanMax(diskModel, zoneList), floorK,
+                spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             return compute(context, run, gas, spec, diskModel, zoneList);
         }
