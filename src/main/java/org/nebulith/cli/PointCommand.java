@@ -11,15 +11,12 @@ import java.util.Optional;
 
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.equilibrium.ChemicalSystem;
-import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.equilibrium.EquilibriumProblem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.PhaseKind;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.errors.Messages;
-import org.nebulith.errors.NumericalException;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.CsvTableWriter;
 
@@ -68,7 +65,7 @@ public final class PointCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
         EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
-        EquilibriumResult result = solve(problem, comp);
+        EquilibriumResult result = solve(problem);
         String csv = csv(result);
         Optional<Path> out = context.outOption();
         if (out.isPresent()) {
@@ -91,15 +88,8 @@ public final class PointCommand extends RunCommand {
         }
     }
 
-    private static EquilibriumResult solve(final EquilibriumProblem problem, final ElementAbundances comp) {
-        try {
-            return new EquilibriumSolver().solve(problem);
-        } catch (ConvergenceException e) {
-            String prefix = "no converged equilibrium at " + problem.describe() + ": ";
-            String what = e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length()) : e.getMessage();
-            throw new NumericalException(Messages.NUMERICAL_FAILURE, e, "no converged equilibrium (" + what + ")",
-                    problem.temperatureK(), problem.pressureBar(), comp.toInline());
-        }
+    private static EquilibriumResult solve(final EquilibriumProblem problem) {
+        return new EquilibriumSolver().solve(problem);
     }
 
     private static String csv(final EquilibriumResult result) {

@@ -44,7 +44,7 @@ class MainTest {
         protected int execute(final RunContext context) {
             seen = context;
             switch (fail) {
-                case "input": throw InputException.atField("zones.csv", 3, "shape", "unknown shape 'box'",
+                case "input": throw InputException.atField("zones.csv", 3, "shape", "box", "unknown shape",
                         "tophat, gaussian");
                 case "numerical": throw NumericalException.noConvergence(1400, 1e-4, "H=1,O=5e-4", 100, 1e-3);
                 case "illegal": throw new IllegalArgumentException("bad thing in a reader");
@@ -81,7 +81,7 @@ class MainTest {
     }
 
     @ParameterizedTest
-    @CsvSource({"input,2", "numerical,3", "illegal,2", "bug,1"})
+    @CsvSource({"input,2", "numerical,3", "illegal,1", "bug,1"})
     void failuresMapToExitCodesWithOneLineAndNoStackTrace(final String kind, final int code) {
         assertEquals(code, run("probe", "--fail", kind, "--out", dir.resolve("o").toString()));
         String[] lines = err().strip().split("\n");
@@ -155,7 +155,7 @@ class MainTest {
     void presetErrorsNameFileLineAndField() throws Exception {
         Path unknown = Files.writeString(dir.resolve("a.settings"), "T-K = 1500\nzones = z.csv\n");
         assertEquals(2, run("probe", "--preset", unknown.toString(), "--out", dir.resolve("o").toString()));
-        assertTrue(err().contains(unknown + ": line 2: field \"zones\": not a setting of the 'probe' command"),
+        assertTrue(err().contains(unknown + ": line 2: field \"zones\": value \"z.csv\": not a setting of the 'probe' command"),
                 err());
         Path badValue = Files.writeString(dir.resolve("b.settings"), "\nT-K = hot\n");
         assertEquals(2, run("probe", "--preset", badValue.toString()));

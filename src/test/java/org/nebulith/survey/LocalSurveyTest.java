@@ -130,7 +130,7 @@ class LocalSurveyTest {
         assertTrue(e.getMessage().contains("nothing was computed"), e.getMessage());
         assertFalse(Files.exists(out));
         assertEquals(2, warnings.size(), warnings.toString());
-        assertTrue(warnings.get(0).startsWith("bad.csv: line 3: field \"Mg_H\": star 'Bad One': an error without a value"));
+        assertTrue(warnings.get(0).startsWith("bad.csv: line 3: field \"Mg_H\": value \"\": star 'Bad One': an error without a value"));
         assertTrue(warnings.get(1).contains("line 5") && warnings.get(1).contains("duplicate star"));
 
         LocalSurvey.Result r = run(bad, out, 2, true, false, false, SETTINGS, s -> new FullyCondensedEstimator());

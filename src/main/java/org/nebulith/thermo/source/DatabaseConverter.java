@@ -14,7 +14,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.nebulith.thermo.DataFormatException;
+import org.nebulith.errors.InputException;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.Nasa9Model;
@@ -55,7 +55,7 @@ public final class DatabaseConverter {
             Path tmp = Files.createTempFile(dir, "species", ".tmp");
             Files.writeString(tmp, csv, StandardCharsets.UTF_8);
             Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } catch (DataFormatException ex) {
+        } catch (InputException ex) {
             System.err.println(ex.getMessage());
             System.exit(2);
         } catch (IOException ex) {
@@ -78,7 +78,7 @@ public final class DatabaseConverter {
         try {
             nasa = NasaGlennReader.read(new StringReader(new String(nasaBytes, StandardCharsets.US_ASCII)), nasaName);
         } catch (IllegalArgumentException ex) {
-            throw new DataFormatException(nasaName, 0, "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
+            throw InputException.atField(nasaName, 0, "record", "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
         }
         List<MineralRow> minerals = MineralTableReader.read(
                 new StringReader(new String(mineralBytes, StandardCharsets.UTF_8)), mineralName);
@@ -154,8 +154,8 @@ public final class DatabaseConverter {
         for (String n : m.nasaEntries()) {
             NasaGlennReader.Entry e = byName.get(n);
             if (e == null || !e.condensed() || !m.formula().equals(formula(e))) {
-                throw new DataFormatException(mineralName, m.line(), "source_table_or_file", "NASA species '" + n
-                        + "' is missing or has another composition", "names of NASA condensed entries of formula "
+                throw InputException.atField(mineralName, m.line(), "source_table_or_file", n,
+                        "NASA species missing or of another composition", "names of NASA condensed entries of formula "
                         + m.formula().notation());
             }
             writeNasa(w, e, m.id(), "solid", m.role(), m.variant(), nasaName, mineralName + ":" + m.line());
