@@ -1,14 +1,9 @@
 package org.nebulith.cli;
 
 import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.EnumSet;
-import java.util.List;
-import java.util.Optional;
 import java.util.Set;
 
 import org.nebulith.composition.AbundancePresets;
@@ -16,21 +11,17 @@ import org.nebulith.composition.AbundanceSet;
 import org.nebulith.composition.CarbonToOxygen;
 import org.nebulith.composition.DustEnrichment;
 import org.nebulith.composition.ElementAbundances;
-import org.nebulith.equilibrium.SolutionModel;
-import org.nebulith.equilibrium.SolutionModels;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.thermo.DataSet;
 import org.nebulith.thermo.Element;
-import org.nebulith.thermo.SpeciesDatabase;
-import org.nebulith.thermo.SpeciesListReader;
 
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
  * The options shared by every command that builds a gas composition and a chemical system:
- * composition (preset, file or inline), dust enrichment, C/O, data set, alternative mineral rows,
- * user species, species restrictions and solutions.
+ * composition (preset, file or inline), dust enrichment, C/O, and the {@link SystemOptions} (data
+ * set, alternative mineral rows, user species, species restrictions and solutions).
  */
 public final class ChemistryOptions {
 
@@ -63,30 +54,8 @@ public final class ChemistryOptions {
             description = "Set the C/O atom ratio by changing C only.")
     private Double carbonToOxygen;
 
-    @Option(names = "--data", paramLabel = "SET", defaultValue = DataSet.DEFAULT,
-            description = "Thermodynamic data set: default, nasa, reference-pure. Default: ${DEFAULT-VALUE}.")
-    private String dataSet;
-
-    @Option(names = "--variant", paramLabel = "TAG",
-            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) for a sensitivity run; repeatable.")
-    private List<String> variants = new ArrayList<>();
-
-    @Option(names = "--species-file", paramLabel = "FILE",
-            description = "Add species from a file in the project's species format.")
-    private Path speciesFile;
-
-    @Option(names = "--gases", paramLabel = "FILE", description = "Use only the gas ids listed in FILE, one per line.")
-    private Path gasList;
-
-    @Option(names = "--condensed", paramLabel = "FILE",
-            description = "Use only the condensed ids listed in FILE, one per line.")
-    private Path condensedList;
-
-    @Option(names = "--solutions", paramLabel = "LIST",
-            description = "Ideal solutions: 'all', 'none' (pure phases) or a comma list of metal, olivine, "
-                    + "orthopyroxene, melilite, plagioclase, spinel-hercynite. Default: all for the default "
-                    + "data set, none otherwise.")
-    private String solutions;
+    @Mixin
+    private SystemOptions system = new SystemOptions();
 
     /**
      * @param context the run (inputs are registered with it)
@@ -145,52 +114,10 @@ public final class ChemistryOptions {
     /**
      * @param context the run (list and species files are registered as inputs)
      * @return the system specification
+     * @throws IOException if a list or species file cannot be read
      */
     public SystemSpec systemSpec(RunContext context) throws IOException {
-        if (!DataSet.NAMES.contains(dataSet)) {
-            throw InputException.atOption("--data", dataSet, "unknown data set", String.join(", ", DataSet.NAMES));
-        }
-        DataSet ds = DataSet.named(dataSet);
-        Optional<SpeciesDatabase> user = Optional.empty();
-        if (speciesFile != null) {
-            Path f = context.input(speciesFile, "species file");
-            user = Optional.of(SpeciesDatabase.load(f.toString(), () -> Files.newInputStream(f)));
-            ds = ds.plus(user.get());
-        }
-        Optional<Set<String>> gases = readList(context, gasList, ds, true);
-        Optional<Set<String>> condensed = readList(context, condensedList, ds, false);
-        return new SystemSpec(dataSet, variants, user, gases, condensed, solutionModels());
-    }
-
-    private static Optional<Set<String>> readList(RunContext context, Path file, DataSet ds, boolean gas)
-            throws IOException {
-        if (file == null) {
-            return Optional.empty();
-        }
-        Path f = context.input(file, gas ? "gas list" : "condensed list");
-        try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
-            return Optional.of(SpeciesListReader.read(r, file.toString(), ds, gas));
-        }
-    }
-
-    private List<SolutionModel> solutionModels() {
-        String s = solutions != null ? solutions : (DataSet.DEFAULT.equals(dataSet) ? "all" : "none");
-        if (s.equalsIgnoreCase("all")) {
-            return SolutionModels.all();
-        }
-        if (s.equalsIgnoreCase("none")) {
-            return List.of();
-        }
-        List<SolutionModel> out = new ArrayList<>();
-        for (String name : s.split(",")) {
-            try {
-                out.add(SolutionModels.byName(name.trim()));
-            } catch (IllegalArgumentException e) {
-                throw InputException.atOption("--solutions", s, "unknown solution '" + name.trim() + "'",
-                        "all, none, or a comma list of metal, olivine, orthopyroxene, melilite, plagioclase, spinel-hercynite");
-            }
-        }
-        return out;
+        return system.systemSpec(context);
     }
 
     /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */

@@ -20,7 +20,6 @@ import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.planet.CoreOptions;
 import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
@@ -74,21 +73,8 @@ public final class PlanetCommand extends RunCommand {
                     + "Default: the demo system " + DEMO_ZONES + ".")
     private Path zones;
 
-    @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
-    private boolean sulfideInMantle;
-
-    @Option(names = "--core-Si-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "Si in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreSi;
-
-    @Option(names = "--core-O-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "O in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreO;
-
-    @Option(names = "--floor-K", paramLabel = "T", defaultValue = "300",
-            description = "Lowest equilibrium temperature [K]; colder gas keeps its rock and adds water ice. "
-                    + "Default: ${DEFAULT-VALUE}.")
-    private double floorK;
+    @Mixin
+    private PlanetOptions planet = new PlanetOptions();
 
     @Option(names = "--profile-points", paramLabel = "N", defaultValue = "160",
             description = "Radii of the radial profile. Default: ${DEFAULT-VALUE}.")
@@ -104,8 +90,7 @@ public final class PlanetCommand extends RunCommand {
         if (profilePoints < 2) {
             throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
         }
-        FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
-                new CoreOptions(!sulfideInMantle, coreSi, coreO));
+        FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
         List<ZonePlanet> planets = new ArrayList<>();
         LocalCondensation local = formation.localCondensation(gas);

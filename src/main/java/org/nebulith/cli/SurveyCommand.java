@@ -15,6 +15,7 @@ import org.nebulith.survey.SurveySettings;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -69,6 +70,12 @@ public class SurveyCommand extends RunCommand {
             description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
     private String solarReference;
 
+    @Mixin
+    private SystemOptions system = new SystemOptions();
+
+    @Mixin
+    private PlanetOptions planet = new PlanetOptions();
+
     @Option(names = "--skip-bad", description = "Skip bad catalogue rows and failing stars (listed) instead of stopping.")
     private boolean skipBad;
 
@@ -116,7 +123,8 @@ public class SurveyCommand extends RunCommand {
         context.input(catalogue, "catalogue");
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
-        SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones);
+        SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones,
+                planet.formationOptions(system, context));
         String base = catalogue.getFileName().toString().replaceFirst("\\.csv$", "");
         Path folder = context.outputFolder("survey-" + (base.matches("[A-Za-z0-9._-]+") ? base : "catalogue"));
         LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,

@@ -19,7 +19,6 @@ import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
-import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.Quantity;
@@ -78,14 +77,15 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     }
 
     /**
-     * @param settings the survey settings (disk and zones, null for the defaults; solar reference)
+     * @param settings the survey settings (disk and zones, null for the defaults; solar reference; planet
+     *                 options: data set, variants, species, solutions, floor temperature, core)
      * @return the estimator
      * @throws IOException if a disk or zone file cannot be read
      */
     public static PlanetSurveyEstimator create(SurveySettings settings) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
         List<FeedingZone> z = readZones(settings.zones(), d);
-        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+        PlanetFormation f = new PlanetFormation(settings.planet().settings(ZoneCondensation.fast()),
                 new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
