@@ -68,7 +68,7 @@ public final class BenchCommand extends RunCommand {
     protected int execute(final RunContext context) {
         check();
         ElementAbundances comp = AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances().perH();
-        ChemicalSystem system = SystemSpec.defaults().build(ChemistryOptions.elementsOf(comp));
+        ChemicalSystem system = SystemSpec.defaults().build(comp.elements());
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {
             totals[j] = comp.moles(system.elements().get(j));

@@ -3,8 +3,6 @@ package org.nebulith.cli;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.EnumSet;
-import java.util.Set;
 
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.AbundanceSet;
@@ -13,7 +11,6 @@ import org.nebulith.composition.DustEnrichment;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.thermo.Element;
 
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -118,16 +115,5 @@ public final class ChemistryOptions {
      */
     public SystemSpec systemSpec(RunContext context) throws IOException {
         return system.systemSpec(context);
-    }
-
-    /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */
-    public static Set<Element> elementsOf(ElementAbundances comp) {
-        Set<Element> e = EnumSet.noneOf(Element.class);
-        for (Element el : comp.elements()) {
-            if (comp.moles(el) > 0) {
-                e.add(el);
-            }
-        }
-        return e;
     }
 }

@@ -63,7 +63,7 @@ public final class PointCommand extends RunCommand {
         checkState();
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
-        ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
+        ChemicalSystem system = spec.build(comp.elements());
         EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
         EquilibriumResult result = solve(problem);
         String csv = csv(result);

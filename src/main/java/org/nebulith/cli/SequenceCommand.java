@@ -96,7 +96,7 @@ public final class SequenceCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         PressurePath path = pressurePath(context);
         SequenceSettings settings = settings(path);
-        Set<Element> elements = ChemistryOptions.elementsOf(comp);
+        Set<Element> elements = comp.elements();
         ChemicalSystem system = spec.build(elements);
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {

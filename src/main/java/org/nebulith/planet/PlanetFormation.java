@@ -83,11 +83,7 @@ public final class PlanetFormation {
     public LocalCondensation localCondensation(ElementAbundances gas,
                                                java.util.NavigableMap<Double, LocalCondensation.Local> reference) {
         Set<Element> els = EnumSet.noneOf(Element.class);
-        for (Element e : gas.elements()) {
-            if (gas.moles(e) > 0) {
-                els.add(e);
-            }
-        }
+        els.addAll(gas.elements());
         ChemicalSystem sys = systems.computeIfAbsent(els, k -> settings.system().build(k));
         double mass = gas.massGrams();
         double[] b = new double[sys.elementCount()];

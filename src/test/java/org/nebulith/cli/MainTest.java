@@ -4,9 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -60,24 +57,22 @@ class MainTest {
         }
     }
 
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
     private Probe probe;
+    private final CliRun cli = new CliRun(() -> {
+        probe = new Probe();
+        return List.of(probe);
+    });
 
     private int run(final String... args) {
-        probe = new Probe();
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), List.of(probe));
+        return cli.run(args);
     }
 
     private String out() {
-        return out.toString(StandardCharsets.UTF_8);
+        return cli.out();
     }
 
     private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+        return cli.err();
     }
 
     @ParameterizedTest
