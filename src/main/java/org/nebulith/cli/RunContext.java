@@ -14,6 +14,7 @@ import java.util.stream.Collectors;
 
 import org.nebulith.progress.Progress;
 import org.nebulith.progress.ProgressMode;
+import org.nebulith.progress.terminal.ProgressDisplays;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
@@ -121,7 +122,7 @@ public final class RunContext {
      * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
      */
     public Progress progress(final String task, final long total) {
-        return Progress.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
+        return ProgressDisplays.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
                 task, total, err);
     }
 

@@ -1,6 +1,8 @@
-package org.nebulith.progress;
+package org.nebulith.progress.terminal;
 
 import java.io.PrintStream;
+
+import org.nebulith.progress.Progress;
 
 import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
