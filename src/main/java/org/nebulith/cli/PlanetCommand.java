@@ -30,7 +30,6 @@ import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
-import org.nebulith.zones.RadialScan;
 import org.nebulith.zones.ZoneCondensation;
 import org.nebulith.zones.ZoneFileReader;
 
@@ -92,17 +91,9 @@ public final class PlanetCommand extends RunCommand {
         }
         FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
-        List<ZonePlanet> planets = new ArrayList<>();
-        LocalCondensation local = formation.localCondensation(gas);
-        try (Progress progress = context.progress("zones", zoneList.size() + 1)) {
-            for (FeedingZone z : zoneList) {
-                planets.add(formation.zonePlanet(z, diskModel, local));
-                progress.step();
-            }
-            List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
-                    scanMax(diskModel, zoneList), profilePoints);
-            progress.step();
-            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+        try (Progress progress = context.progress("zones", PlanetFormation.steps(zoneList, profilePoints))) {
+            PlanetFormation.Formation run = formation.run(gas, diskModel, zoneList, profilePoints, progress);
+            return writeOutputs(context, gas, diskModel, spec, run.planets(), run.profile());
         }
     }
 
@@ -126,7 +117,7 @@ public final class PlanetCommand extends RunCommand {
                 context.out().println(PlanetReportWriter.summary(zp));
             }
             context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+            PlanetReportWriter.cautions(spec.describe()).forEach(context::warn);
         }
         return ExitCodes.OK;
     }
@@ -153,21 +144,5 @@ public final class PlanetCommand extends RunCommand {
         try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
             return ZoneFileReader.read(r, DEMO_ZONES, diskModel);
         }
-    }
-
-    private static double scanMin(DiskModel d, List<FeedingZone> zs) {
-        double lo = Double.POSITIVE_INFINITY;
-        for (FeedingZone z : zs) {
-            lo = Math.min(lo, z.rInnerAU());
-        }
-        return Math.max(d.rMinAU(), lo / 2);
-    }
-
-    private static double scanMax(DiskModel d, List<FeedingZone> zs) {
-        double hi = 0;
-        for (FeedingZone z : zs) {
-            hi = Math.max(hi, z.rOuterAU());
-        }
-        return Math.min(d.rMaxAU(), hi * 2);
     }
 }

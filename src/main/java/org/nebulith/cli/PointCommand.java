@@ -18,6 +18,7 @@ import org.nebulith.equilibrium.PhaseKind;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
 import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.Cautions;
 import org.nebulith.report.CsvTableWriter;
 
 import picocli.CommandLine.Command;
@@ -116,7 +117,7 @@ public final class PointCommand extends RunCommand {
             solutions += r.system().phaseKind(p) == PhaseKind.SOLUTION ? 1 : 0;
         }
         if (solutions > 0) {
-            context.info("caution: solutions are ideal (no excess Gibbs energy); silicate liquids are not modelled");
+            context.info(Cautions.point());
         }
         out.ifPresent(f -> context.info("wrote " + f));
     }

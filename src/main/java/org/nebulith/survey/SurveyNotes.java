@@ -1,6 +1,7 @@
 package org.nebulith.survey;
 
 import org.nebulith.composition.SolarReference;
+import org.nebulith.report.Cautions;
 
 /** The text of {@code survey-notes.txt}: settings, counts, method and cautions of a survey. */
 final class SurveyNotes {
@@ -36,17 +37,8 @@ final class SurveyNotes {
                   results do not depend on threads, order or machine.
 
                 Cautions
-                - Elements a star lacks follow its [Fe/H] (common practice): a ratio that involves such an
-                  element reflects the solar ratio scaled by [Fe/H], not a measurement of this star.
-                - Only the catalogue's random errors are propagated; systematic offsets between abundance
-                  analyses, and the error of the solar reference itself, are not.
-                - With few draws the 16th and 84th percentiles are noisy: for a Gaussian spread sigma their
-                  standard error is about 1.5 sigma / sqrt(draws) (0.15 sigma at 100 draws, 0.05 sigma at
-                  1000; asymptotic error of a sample quantile, common practice).
-                - The planet quantities inherit every assumption of the planet estimate (equilibrium
-                  condensation in the given disk, solids accreted where they condensed, no later
-                  processing); they are a composition expected from the star, not a measurement.
                 """);
+        Cautions.survey().forEach(c -> t.append("- ").append(c).append('\n'));
         if (s.solar() == SolarReference.LODDERS2003) {
             t.append("- The Lodders 2003 reference is proto-solar: metals/H are then bulk (settling-corrected)"
                     + " values; metal ratios such as Mg/Si and Fe/Si are nearly unaffected.\n");

@@ -13,6 +13,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.Cautions;
 import org.nebulith.report.RunInputs;
 import org.nebulith.report.Table;
 import org.nebulith.report.chart.ChartRenderer;
@@ -48,9 +49,7 @@ final class SurveyReport {
                             + "(medians, 16th-84th percentile bars).");
         }
         r.table(stars(starsCsv), "survey-stars.csv (first " + SHOWN_STARS + " stars)");
-        report.caution("Only the catalogue's random errors are propagated, not systematics between abundance analyses.");
-        report.caution("Each draw is an equilibrium-condensation planet estimate: ideal solutions, no kinetics, no "
-                + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
+        Cautions.survey().forEach(report::caution);
         report.inputs(inputs);
         for (String f : List.of("survey.csv", StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
                 SurveyChart.BASE + ".svg", "summary.md")) {

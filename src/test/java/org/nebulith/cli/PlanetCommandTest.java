@@ -13,6 +13,7 @@ import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nebulith.composition.AbundancePresets;
@@ -27,6 +28,7 @@ import org.nebulith.report.html.ChromiumProbe;
 import org.nebulith.zones.ZoneFileReader;
 
 /** {@code nebulith planet} in-process: outputs read back against the library's results, bad input. */
+@Tag("slow")
 class PlanetCommandTest {
     @TempDir
     Path dir;

@@ -14,6 +14,7 @@ import java.util.stream.Stream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -34,6 +35,7 @@ import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.thermo.Element;
 
 /** {@code nebulith sequence} end to end: the four CSVs read back against a library run of the same settings. */
+@Tag("slow")
 class SequenceCommandTest {
     private static final String[] GRID = {"--T-max-K", "1700", "--T-min-K", "1300", "--T-step-K", "10", "--P-bar", "1e-4"};
 

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
@@ -20,7 +21,8 @@ import org.nebulith.zones.KernelShape;
 import org.nebulith.zones.RadialIntegrator;
 import org.nebulith.zones.ZoneCondensation;
 
-/** Checks of the disk-to-planet pipeline (issue 5, item 8). */
+/** Checks of the disk-to-planet pipeline. */
+@Tag("slow")
 class PlanetFormationTest {
     private static final ElementAbundances PROTOSOLAR =
             AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances();

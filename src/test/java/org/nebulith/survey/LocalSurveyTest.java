@@ -15,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.function.Function;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nebulith.composition.SolarReference;
@@ -26,6 +27,7 @@ import org.nebulith.report.RunInputs;
 import org.nebulith.thermo.Element;
 
 /** Whole surveys on the demo catalogue: threads, resume, bad input, skipping. */
+@Tag("slow")
 class LocalSurveyTest {
 
     @TempDir

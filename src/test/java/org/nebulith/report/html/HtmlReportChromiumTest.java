@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.regex.Pattern;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -30,6 +31,7 @@ import org.nebulith.report.chart.ChartRenderer;
  * page must raise no error and log nothing to the console. Skipped only when no Chromium binary
  * is installed ({@code .ci/run} installs Debian's {@code chromium}).
  */
+@Tag("slow")
 class HtmlReportChromiumTest {
 
     @TempDir
