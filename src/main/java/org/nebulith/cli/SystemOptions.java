@@ -32,8 +32,8 @@ public final class SystemOptions {
     private String dataSet;
 
     @Option(names = "--variant", paramLabel = "TAG",
-            description = "Use alternative mineral rows for a sensitivity run (a tag of the data set, listed by "
-                    + "'nebulith presets'); repeatable.")
+            description = "Use alternative mineral rows for a sensitivity run: a variant tag of the data set (an "
+                    + "unknown tag is refused with the list of the data set's tags); repeatable.")
     private List<String> variants = new ArrayList<>();
 
     @Option(names = "--species-file", paramLabel = "FILE",

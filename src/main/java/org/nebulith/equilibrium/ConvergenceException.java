@@ -4,9 +4,11 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.StringJoiner;
 
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
+import org.nebulith.format.Decimal;
 
 /**
  * The solver could not find an equilibrium that passes its checks. The message names the state and
@@ -49,7 +51,9 @@ public class ConvergenceException extends NumericalException {
      * @param phases    names of the phases present in the last iterate (may be empty)
      * @param residuals named residuals of the last rejected result, e.g. {@code balance},
      *                  {@code potential_RT}, {@code affinity_RT} (may be empty)
-     * @return the exception; its message reads {@code no converged equilibrium at <state>: <what>}
+     * @return the exception; its message reads {@code no converged equilibrium at T = .. K, P = .. bar,
+     *         composition (mol) H=..,O=..: <what>}, every number in its shortest round-trip form so that
+     *         the state can be reproduced
      */
     public static ConvergenceException at(EquilibriumProblem problem, String what, List<String> phases,
                                           Map<String, Double> residuals) {
@@ -58,7 +62,10 @@ public class ConvergenceException extends NumericalException {
         for (int j = 0; j < system.elementCount(); j++) {
             comp.put(system.elements().get(j).symbol(), problem.total(j));
         }
-        String message = "no converged equilibrium at " + problem.describe() + ": " + what;
+        StringJoiner inline = new StringJoiner(",");
+        comp.forEach((el, mol) -> inline.add(el + "=" + Decimal.format(mol)));
+        String message = "no converged equilibrium at T = " + Decimal.format(problem.temperatureK()) + " K, P = "
+                + Decimal.format(problem.pressureBar()) + " bar, composition (mol) " + inline + ": " + what;
         return new ConvergenceException(message, problem.temperatureK(), problem.pressureBar(), comp, phases,
                 residuals);
     }
