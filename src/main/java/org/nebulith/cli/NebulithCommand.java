@@ -26,6 +26,8 @@ import picocli.CommandLine.Spec;
             SequenceCommand.class,
             PlanetCommand.class,
             SurveyCommand.class,
+            InteriorCommand.class,
+            MeasuredCommand.class,
             SurveyBenchCommand.class,
             BenchCommand.class,
             PresetsCommand.class,

@@ -51,6 +51,8 @@ public final class PlanetTables {
                 if (c.hasRock()) {
                     t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
                             "R_earth (for " + m + " M_earth)");
+                    t.row(zp.zoneName(), "radius_Rearth_structure", StructureRadius.of(c, m),
+                            "R_earth (for " + m + " M_earth)");
                 }
             });
         }
