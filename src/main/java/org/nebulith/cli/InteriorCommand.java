@@ -166,7 +166,7 @@ public final class InteriorCommand extends RunCommand {
                 String[] f = text.split(",", -1);
                 if (line == 1) {
                     if (!text.startsWith("zone,quantity,value,unit")) {
-                        throw InputException.atField(bulk, 1, "(header)", "not a bulk-composition.csv",
+                        throw InputException.atField(bulk, 1, "(header)", text, "not a bulk-composition.csv",
                                 "zone,quantity,value,unit");
                     }
                     continue;
@@ -175,7 +175,7 @@ public final class InteriorCommand extends RunCommand {
                     try {
                         values.put(f[1], Double.parseDouble(f[2]));
                     } catch (NumberFormatException e) {
-                        throw InputException.atField(bulk, line, "value", "not a number", "a number");
+                        throw InputException.atField(bulk, line, "value", f[2], "not a number", "a number");
                     }
                 }
             }

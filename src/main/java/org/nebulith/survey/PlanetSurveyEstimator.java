@@ -92,13 +92,14 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     }
 
     /**
-     * @param settings the survey settings (disk, null for the default; solar reference; its zones are not read)
+     * @param settings the survey settings (disk, null for the default; solar reference; planet options; its
+     *                 zones are not read)
      * @param zones    the zones to estimate
      * @return the estimator
      */
     public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
-        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+        PlanetFormation f = new PlanetFormation(settings.planet().settings(ZoneCondensation.fast()),
                 new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
