@@ -93,6 +93,11 @@ public final class ChemistryOptions {
         } catch (IOException e) {
             throw InputException.atOption("--composition", compositionArg(), "cannot be read (" + e.getMessage() + ")",
                     "a preset name, a readable abundance file, or Element=amount pairs");
+        } catch (IllegalArgumentException e) {
+            throw InputException.atOption(elements != null ? "--elements" : "--composition",
+                    elements != null ? elements : compositionArg(), e.getMessage(),
+                    "a preset (" + String.join(", ", AbundancePresets.NAMES) + "), an abundance file, or "
+                            + "Element=amount pairs such as H=1,O=4.9e-4");
         }
     }
 

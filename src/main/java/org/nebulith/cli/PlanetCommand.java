@@ -127,6 +127,10 @@ public final class PlanetCommand extends RunCommand {
         if (!DiskPresets.NAMES.contains(disk) && Files.exists(p)) {
             context.input(p, "disk");
         }
+        if (!DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(p)) {
+            throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
+                    String.join(", ", DiskPresets.NAMES) + ", or a disk file");
+        }
         return DiskPresets.resolve(disk);
     }
 

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 
 import org.nebulith.composition.SolarReference;
+import org.nebulith.disk.DiskPresets;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.survey.EstimatorCache;
@@ -121,6 +122,10 @@ public class SurveyCommand extends RunCommand {
             throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
         }
         context.input(catalogue, "catalogue");
+        if (disk != null && !DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(Path.of(disk))) {
+            throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
+                    String.join(", ", DiskPresets.NAMES) + ", or a disk file");
+        }
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
         SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones,

@@ -67,6 +67,23 @@ class OptionMessagesTest {
         assertFalse(dir.resolve("o").toFile().exists());
     }
 
+    /** Values a library precondition would refuse are refused first against their option. */
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "--elements|point --elements Xx=1 --T-K 1000 --P-bar 1e-4",
+        "--elements|point --elements H=abc --T-K 1000 --P-bar 1e-4",
+        "--composition|point --composition no-such-preset --T-K 1000 --P-bar 1e-4",
+        "--disk|planet --disk no-such-disk",
+        "--disk|survey-recording --catalogue presets/demo-catalogue.csv --disk no-such-disk",
+    })
+    void libraryPreconditionsAreCheckedAgainstTheOption(String option, String commandLine) {
+        List<String> args = new ArrayList<>(List.of(commandLine.split(" ")));
+        args.addAll(List.of("--out", dir.resolve("o").toString()));
+        assertEquals(2, cli.run(args.toArray(String[]::new)), cli.err());
+        assertTrue(cli.err().strip().startsWith("nebulith: option " + option + ": value \""), cli.err());
+        assertEquals(1, cli.err().strip().lines().count(), cli.err());
+    }
+
     @Test
     void surveyEstimatesGetEveryPlanetOption() {
         RecordingSurvey.SEEN.clear();
