@@ -42,7 +42,7 @@ import picocli.CommandLine.Option;
             "  nebulith bench --warmup 1 --repeats 3 --T-min-K 1000     (quicker, less steady)",
         })
 public final class BenchCommand extends RunCommand {
-    /** Target of the engine benchmark [us per state] (issue: one core of this machine). */
+    /** Target of the engine benchmark [us per state] (on one core of this machine). */
     static final double TARGET_US_PER_STATE = 200;
     /** Target of the engine benchmark [Newton iterations per state]. */
     static final double TARGET_ITERATIONS = 3;

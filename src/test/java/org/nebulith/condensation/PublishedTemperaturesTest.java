@@ -14,8 +14,8 @@ import org.nebulith.thermo.Element;
  * 50% condensation temperatures at 1e-4 bar, default data set, all solutions, against Lodders (2003)
  * ApJ 591, 1220, Table 8. Na, Mg, Al, Si, P, S: Table 8 as transcribed beside Wood et al. (2019) on
  * the skyfallmeteorites.com page "Condensation Temperatures of the Elements"; the others from memory.
- * The tolerances are the issue's (30 K; 100 K for Na, K, P, Mn). Misses are not loosened: each asserts
- * its documented cause instead (see docs-condensation-temperatures.md).
+ * The tolerances are 30 K (100 K for Na, K, P, Mn). Misses are not loosened: each asserts its
+ * documented cause instead (see the contributors' guide, DEVELOPERS.md, section "Condensation temperatures").
  */
 class PublishedTemperaturesTest {
 
@@ -59,7 +59,7 @@ class PublishedTemperaturesTest {
         // thermo-sources README 9: ds62 troilite and NASA FeS appear about 25 K apart
         assertEquals(25, SequenceProbe.firstAppearance(SequenceRuns.sulfide(1e-4, true), "troilite")
                 - SequenceProbe.sulfideAppearance(SequenceRuns.sulfide(1e-4, false)), 10);
-        assertEquals(664, troilite, 30, "with ds62 troilite S is within the issue's tolerance");
+        assertEquals(664, troilite, 30, "with ds62 troilite S is within the 30 K tolerance");
     }
 
     @Test

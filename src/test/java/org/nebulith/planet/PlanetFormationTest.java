@@ -62,8 +62,8 @@ class PlanetFormationTest {
     @Test
     void protosolarMetalWithoutTroiliteGivesAnEarthLikeCoreMassFraction() {
         // Proto-solar gas (Lodders 2003) at 1000 K, 1e-4 bar: Fe, Mg, Si condensed, troilite not yet stable
-        // (it forms near 670 K). Bulk Earth: core mass fraction 0.325 (McDonough 2003); the issue asks
-        // for 0.30-0.36.
+        // (it forms near 670 K). Bulk Earth: core mass fraction 0.325 (McDonough 2003); accepted
+        // here: 0.30-0.36.
         ZonePlanet zp = one(flat(1000, 1e-4), new FeedingZone("warm", KernelShape.TOPHAT, 1.0, 0.2, OptionalDouble.empty()));
         PlanetComposition c = zp.planet().require();
         assertEquals(0.0, c.molarRatios().get("S_Si_molar"), 1e-6);
