@@ -19,7 +19,7 @@ import org.nebulith.planet.interior.MantleComposition;
 import org.nebulith.planet.interior.Structure;
 import org.nebulith.planet.interior.StructureException;
 import org.nebulith.planet.interior.StructureSolver;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.interior.InteriorReportWriter;
 

@@ -26,7 +26,7 @@ import org.nebulith.planet.interior.InteriorModel;
 import org.nebulith.planet.interior.MantleComposition;
 import org.nebulith.planet.interior.StructureException;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.Curve;
 import org.nebulith.report.interior.InteriorReportWriter;
 import org.nebulith.survey.CatalogueProblem;

@@ -24,7 +24,7 @@ import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;

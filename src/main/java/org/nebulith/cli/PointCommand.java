@@ -17,9 +17,9 @@ import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.PhaseKind;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.files.AtomicOutput;
 import org.nebulith.report.Cautions;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CsvTableWriter;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

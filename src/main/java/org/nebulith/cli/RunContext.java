@@ -15,9 +15,9 @@ import java.util.stream.Collectors;
 import org.nebulith.progress.Progress;
 import org.nebulith.progress.ProgressMode;
 import org.nebulith.progress.terminal.ProgressDisplays;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;

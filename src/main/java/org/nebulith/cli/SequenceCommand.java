@@ -28,7 +28,7 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.thermo.Element;
 
 import picocli.CommandLine.Command;

@@ -9,7 +9,7 @@ import org.nebulith.disk.DiskPresets;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.survey.EstimatorCache;
-import org.nebulith.survey.LocalSurvey;
+import org.nebulith.report.survey.LocalSurvey;
 import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.SurveyRunner;
 import org.nebulith.survey.SurveySettings;

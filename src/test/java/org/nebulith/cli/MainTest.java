@@ -15,7 +15,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.NumericalException;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;

@@ -14,7 +14,7 @@ import org.nebulith.planet.Quantity;
 import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
-import org.nebulith.report.Table;
+import org.nebulith.files.Table;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;
 

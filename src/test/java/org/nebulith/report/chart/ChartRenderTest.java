@@ -25,9 +25,9 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.knowm.xchart.XYChart;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
 import org.w3c.dom.Document;
 
 /** Every chart kind renders headless to valid, non-empty PNG, SVG and PDF files. */

@@ -1,7 +1,8 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import org.nebulith.composition.SolarReference;
 import org.nebulith.report.Cautions;
+import org.nebulith.survey.SurveySettings;
 
 /** The text of {@code survey-notes.txt}: settings, counts, method and cautions of a survey. */
 final class SurveyNotes {

@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.IOException;
 import java.io.Reader;
@@ -12,10 +12,10 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.files.AtomicOutput;
 import org.nebulith.report.Cautions;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.Table;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
@@ -33,9 +33,9 @@ final class SurveyReport {
     }
 
     static void write(Path folder, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
-        Report report = new Report("Nebulith host-star survey", "nebulith survey", org.nebulith.report.RunFolder.class
+        Report report = new Report("Nebulith host-star survey", "nebulith survey", org.nebulith.files.RunFolder.class
                 .getPackage().getImplementationVersion() == null ? "dev"
-                : org.nebulith.report.RunFolder.class.getPackage().getImplementationVersion(), Instant.now());
+                : org.nebulith.files.RunFolder.class.getPackage().getImplementationVersion(), Instant.now());
         Report.Section s = report.section("Run notes");
         for (String line : notes.split("\n")) {
             if (!line.isBlank()) {

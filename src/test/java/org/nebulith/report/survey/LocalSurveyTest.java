@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -23,7 +23,16 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.planet.Quantity;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.RunInputs;
+import org.nebulith.survey.EstimatorCache;
+import org.nebulith.survey.FullyCondensedEstimator;
+import org.nebulith.survey.PlanetEstimator;
+import org.nebulith.survey.StarJob;
+import org.nebulith.survey.StarJobException;
+import org.nebulith.survey.StarRow;
+import org.nebulith.survey.SurveyCsv;
+import org.nebulith.survey.SurveySettings;
+import org.nebulith.survey.SurveyTestData;
 import org.nebulith.thermo.Element;
 
 /** Whole surveys on the demo catalogue: threads, resume, bad input, skipping. */

@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.BufferedReader;
 import java.io.IOException;
@@ -13,12 +13,13 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.knowm.xchart.XYChart;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunInputs;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.chart.SurveyScatter;
+import org.nebulith.survey.StarJob;
 
 /**
  * The survey chart, {@code survey-chart.png} and {@code .svg}: molar Mg/Si against Fe/Si of the

@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.BufferedReader;
 import java.io.Closeable;
@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.nebulith.errors.InputException;
+import org.nebulith.survey.SurveyCsv;
 
 /**
  * Reads an earlier {@code survey.csv} (complete, or the partial file of an interrupted run) star by

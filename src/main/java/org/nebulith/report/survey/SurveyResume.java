@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.IOException;
 import java.util.Iterator;
@@ -6,6 +6,14 @@ import java.util.List;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.progress.Progress;
+import org.nebulith.survey.EstimatorCache;
+import org.nebulith.survey.StarJob;
+import org.nebulith.survey.StarJobException;
+import org.nebulith.survey.StarRow;
+import org.nebulith.survey.SurveyCsv;
+import org.nebulith.survey.SurveyRow;
+import org.nebulith.survey.SurveyRunner;
+import org.nebulith.survey.SurveySettings;
 
 /**
  * The first phase of {@code --resume}: walks the catalogue and an earlier survey table together,

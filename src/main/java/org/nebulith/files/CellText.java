@@ -1,4 +1,4 @@
-package org.nebulith.report;
+package org.nebulith.files;
 
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;

@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.IOException;
 import java.io.Writer;
@@ -8,7 +8,10 @@ import java.util.Set;
 import java.util.StringJoiner;
 
 import org.nebulith.composition.SolarReference;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CsvTableWriter;
+import org.nebulith.survey.StarJob;
+import org.nebulith.survey.StarJobException;
+import org.nebulith.survey.StarRow;
 import org.nebulith.thermo.Element;
 
 /**

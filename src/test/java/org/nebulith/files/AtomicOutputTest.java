@@ -1,4 +1,4 @@
-package org.nebulith.report;
+package org.nebulith.files;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

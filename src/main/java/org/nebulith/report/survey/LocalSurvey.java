@@ -1,4 +1,4 @@
-package org.nebulith.survey;
+package org.nebulith.report.survey;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
@@ -17,8 +17,18 @@ import java.util.function.LongFunction;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunInputs;
+import org.nebulith.survey.CatalogueCheck;
+import org.nebulith.survey.CatalogueProblem;
+import org.nebulith.survey.CatalogueReader;
+import org.nebulith.survey.EstimatorCache;
+import org.nebulith.survey.StarJobException;
+import org.nebulith.survey.StarRow;
+import org.nebulith.survey.SurveyCsv;
+import org.nebulith.survey.SurveyRow;
+import org.nebulith.survey.SurveyRunner;
+import org.nebulith.survey.SurveySettings;
 
 /**
  * A whole survey on this machine: validating pass over the catalogue, then the streaming compute

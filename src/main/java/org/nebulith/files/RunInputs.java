@@ -1,4 +1,4 @@
-package org.nebulith.report;
+package org.nebulith.files;
 
 import java.io.IOException;
 import java.io.InputStream;

@@ -1,4 +1,4 @@
-package org.nebulith.report;
+package org.nebulith.files;
 
 import java.util.ArrayList;
 import java.util.Arrays;
