@@ -54,6 +54,12 @@ public final class ChemistryOptions {
     @Mixin
     private SystemOptions system = new SystemOptions();
 
+    @Option(names = "--ci-reference", paramLabel = "NAME",
+            description = "CI-chondrite composition of the dust (--dust-enrichment) and of the comparisons: "
+                    + "lodders-palme-gail2009 (Lodders, Palme & Gail 2009; the only CI table here with C, N, O, Cl) "
+                    + "or palme-oneill2014 (Palme & O'Neill 2014; no C, N, Cl). Default: ${DEFAULT-VALUE}.")
+    private String ciReference = org.nebulith.composition.CiReference.DEFAULT.optionName();
+
     /**
      * @param context the run (inputs are registered with it)
      * @return the gas composition after dust enrichment and C/O override [mol]
@@ -65,8 +71,7 @@ public final class ChemistryOptions {
                     "enrichment below 1 would remove dust", "a factor >= 1");
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances(),
-                    dustEnrichment);
+            base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
@@ -105,7 +110,8 @@ public final class ChemistryOptions {
     public String describeComposition() {
         StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : compositionArg());
         if (dustEnrichment != 1) {
-            sb.append("; dust enrichment ").append(dustEnrichment);
+            sb.append("; dust enrichment ").append(dustEnrichment).append(" (CI chondrite of ")
+                    .append(ciReference().citation()).append(')');
         }
         if (carbonToOxygen != null) {
             sb.append("; C/O set to ").append(carbonToOxygen);
@@ -120,5 +126,18 @@ public final class ChemistryOptions {
      */
     public SystemSpec systemSpec(RunContext context) throws IOException {
         return system.systemSpec(context);
+    }
+
+    /**
+     * @return the CI-chondrite reference of the run (dust and comparisons)
+     * @throws InputException for an unknown name
+     */
+    public org.nebulith.composition.CiReference ciReference() {
+        try {
+            return org.nebulith.composition.CiReference.fromOptionName(ciReference);
+        } catch (IllegalArgumentException e) {
+            throw InputException.atOption("--ci-reference", ciReference, "unknown CI reference",
+                    org.nebulith.composition.CiReference.accepted());
+        }
     }
 }

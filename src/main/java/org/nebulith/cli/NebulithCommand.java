@@ -31,6 +31,7 @@ import picocli.CommandLine.Spec;
             SurveyBenchCommand.class,
             BenchCommand.class,
             PresetsCommand.class,
+            DataAuditCommand.class,
             CompletionCommand.class,
             CommandLine.HelpCommand.class,
         },

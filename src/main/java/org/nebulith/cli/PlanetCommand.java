@@ -110,7 +110,8 @@ public final class PlanetCommand extends RunCommand {
             }
             PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
+                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
+                    chemistry.ciReference());
             PlanetReportWriter.write(run, data);
             Path done = run.commit();
             for (ZonePlanet zp : planets) {

@@ -6,6 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
@@ -48,8 +49,10 @@ public final class SystemOptions {
     private Path condensedList;
 
     @Option(names = "--solutions", paramLabel = "LIST",
-            description = "Ideal solutions: 'all', 'none' (pure phases) or a comma list of metal, olivine, "
-                    + "orthopyroxene, melilite, plagioclase, spinel-hercynite. Default: all for the default "
+            description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
+                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg "
+                    + "(without tephroite), orthopyroxene-mn (with Mn2Si2O6), plagioclase (anorthite-albite, "
+                    + "sanidine pure), spinel-hercynite (without chromite). Default: all for the default "
                     + "data set, none otherwise.")
     private String solutions;
 
@@ -135,13 +138,25 @@ public final class SystemOptions {
             return List.of();
         }
         List<String> out = new ArrayList<>();
+        Set<String> members = new HashSet<>();
         for (String name : solutions.split(",")) {
+            SolutionModel m;
             try {
-                out.add(SolutionModels.byName(name.trim()).name());
+                m = SolutionModels.byName(name.trim());
             } catch (IllegalArgumentException e) {
                 throw InputException.atOption("--solutions", solutions, "unknown solution '" + name.trim() + "'",
-                        "all, none, or a comma list of metal, olivine, orthopyroxene, melilite, plagioclase, spinel-hercynite");
+                        "all, none, or a comma list of " + SolutionModels.offeredNames());
             }
+            for (SolutionModel.EndMember em : m.endMembers()) {
+                for (String id : em.speciesIds()) {
+                    if (!members.add(id)) {
+                        throw InputException.atOption("--solutions", solutions, "species '" + id
+                                + "' would be in two solutions",
+                                "at most one of the forms of each solution (e.g. olivine or olivine-fe-mg)");
+                    }
+                }
+            }
+            out.add(m.name());
         }
         return out;
     }

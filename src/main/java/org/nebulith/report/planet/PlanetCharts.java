@@ -57,6 +57,17 @@ public final class PlanetCharts {
      * @return planets beside the host, bulk Earth and CI for the key ratios and the core mass fraction
      */
     public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host) {
+        return comparison(planets, host, org.nebulith.composition.CiReference.DEFAULT);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's composition
+     * @param ci      the run's CI reference
+     * @return the comparison chart data, the CI bar labelled with its publication
+     */
+    public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host,
+                                            org.nebulith.composition.CiReference ci) {
         List<String> q = new ArrayList<>(SHOWN);
         q.add("core_mass_fraction");
         List<BodyComparison.Body> bodies = new ArrayList<>();
@@ -67,10 +78,11 @@ public final class PlanetCharts {
             }
         }
         bodies.add(BodyComparison.Body.of("host star", values(MolarRatios.of(host), Double.NaN)));
-        for (String name : List.of("bulk-earth", "ci-chondrite")) {
-            ReferenceBodies.Body b = ReferenceBodies.get(name);
+        for (String name : List.of("bulk-earth", ReferenceBodies.CI)) {
+            ReferenceBodies.Body b = name.equals(ReferenceBodies.CI) ? ReferenceBodies.ci(ci) : ReferenceBodies.get(name);
             double cmf = b.coreMassFraction().isPresent() ? b.coreMassFraction().getAsDouble() : Double.NaN;
-            bodies.add(BodyComparison.Body.of(name.replace('-', ' '), values(MolarRatios.of(b.elements()), cmf)));
+            String label = name.equals(ReferenceBodies.CI) ? "CI chondrite (" + ci.citation() + ")" : name.replace('-', ' ');
+            bodies.add(BodyComparison.Body.of(label, values(MolarRatios.of(b.elements()), cmf)));
         }
         return new BodyComparison(q, bodies);
     }

@@ -48,11 +48,20 @@ public final class PlanetReportWriter {
      * @param settings     effective settings (key, value, origin)
      * @param inputs       the run's input files
      * @param sources      data sources (key, citation)
+     * @param ci           the CI-chondrite reference of the run (dust and comparisons)
      */
     public record RunData(String title, String command, String version, Instant started, String composition,
                           ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                           List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
-                          List<Report.Citation> sources) {
+                          List<Report.Citation> sources, org.nebulith.composition.CiReference ci) {
+        /** Run data with the default CI reference. */
+        public RunData(String title, String command, String version, Instant started, String composition,
+                       ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
+                       List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
+                       List<Report.Citation> sources) {
+            this(title, command, version, started, composition, host, disk, chemistry, planets, scan, settings, inputs,
+                    sources, org.nebulith.composition.CiReference.DEFAULT);
+        }
     }
 
     private PlanetReportWriter() {
@@ -65,7 +74,7 @@ public final class PlanetReportWriter {
      */
     public static Report write(RunFolder run, RunData data) {
         Table bulk = PlanetTables.bulkComposition(data.planets());
-        Table comparison = PlanetTables.comparison(data.planets(), data.host());
+        Table comparison = PlanetTables.comparison(data.planets(), data.host(), data.ci());
         Table phases = PlanetTables.zonePhases(data.planets());
         Table profile = PlanetTables.radialProfile(data.scan());
         run.writeCsv("bulk-composition.csv", bulk);
@@ -75,7 +84,7 @@ public final class PlanetReportWriter {
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
         ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets())
                 .chart(ChartSize.PAGE), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host())
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(), data.ci())
                 .chart(ChartSize.PAGE), run, "planet-comparison", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
