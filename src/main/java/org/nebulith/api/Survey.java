@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.nebulith.survey.DrawFailure;
 import org.nebulith.survey.SurveyRow;
 
 /**
@@ -12,9 +13,16 @@ import org.nebulith.survey.SurveyRow;
  */
 public final class Survey {
     private final List<SurveyRow> rows;
+    private final List<DrawFailure> failures;
 
-    Survey(List<SurveyRow> rows) {
+    Survey(List<SurveyRow> rows, List<DrawFailure> failures) {
         this.rows = List.copyOf(rows);
+        this.failures = List.copyOf(failures);
+    }
+
+    /** @return the estimates that failed (star, draw, zone, state, reason), in catalogue order */
+    public List<DrawFailure> failures() {
+        return failures;
     }
 
     /** @return every row, in catalogue order */
@@ -44,7 +52,8 @@ public final class Survey {
 
     /** @return one line per row: star, zone, quantity, median [p16, p84] unit */
     public String summary() {
-        StringBuilder b = new StringBuilder("survey of " + stars() + " stars, " + rows.size() + " rows");
+        StringBuilder b = new StringBuilder("survey of " + stars() + " stars, " + rows.size() + " rows, "
+                + failures.size() + " failed estimates");
         for (SurveyRow r : rows) {
             b.append(String.format(Locale.ROOT, "%n  %s / %s / %s: %.4g [%.4g, %.4g] %s", r.star(), r.zone(),
                     r.quantity(), r.median(), r.p16(), r.p84(), r.unit()));

@@ -5,21 +5,25 @@ import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.stream.IntStream;
 
 import org.nebulith.composition.SolarReference;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.planet.FormationOptions;
-import org.nebulith.progress.Progress;
 import org.nebulith.survey.CatalogueCheck;
 import org.nebulith.survey.CatalogueProblem;
 import org.nebulith.survey.CatalogueReader;
+import org.nebulith.survey.DrawFailure;
 import org.nebulith.survey.EstimatorCache;
+import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.PlanetSurveyEstimator;
-import org.nebulith.survey.StarJobException;
+import org.nebulith.survey.StarJob;
+import org.nebulith.survey.StarResult;
 import org.nebulith.survey.StarRow;
 import org.nebulith.survey.SurveyRow;
-import org.nebulith.survey.SurveyRunner;
 import org.nebulith.survey.SurveySettings;
 
 /**
@@ -35,7 +39,7 @@ public final class SurveyBuilder {
     private SolarReference solar = SolarReference.ASPLUND2009;
     private String disk;
     private String zones;
-    private int threads = SurveyRunner.defaultThreads();
+    private int threads = Runtime.getRuntime().availableProcessors();
     private FormationOptions planet = FormationOptions.defaults();
 
     SurveyBuilder() {
@@ -90,9 +94,9 @@ public final class SurveyBuilder {
     }
 
     /**
-     * @return the survey rows, in catalogue order
+     * @return the survey rows, in catalogue order, and the estimates that failed (a failed draw is
+     *         left out of its star's percentiles; a star whose nominal estimate fails has no rows)
      * @throws InputException for the first problem of the catalogue (nothing is computed)
-     * @throws StarJobException for the first star whose estimate failed
      */
     public Survey run() {
         if (catalogue == null) {
@@ -107,35 +111,47 @@ public final class SurveyBuilder {
                 throw new InputException(Messages.BAD_INPUT_FIELD, null, catalogue, p.line(), p.column(),
                         InputException.shown(p.value()), p.problem(), p.accepted());
             }
+            List<StarRow> stars = stars();
+            List<PlanetEstimator> perStar = new ArrayList<>();
+            for (StarRow row : stars) {
+                perStar.add(estimators.get(settings.forStar(row)));
+            }
+            ForkJoinPool pool = new ForkJoinPool(threads);
+            List<StarResult> results;
+            try {
+                results = pool.submit(() -> IntStream.range(0, stars.size()).parallel()
+                        .mapToObj(i -> StarJob.survey(stars.get(i), settings, perStar.get(i))).toList()).get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("survey interrupted", e);
+            } catch (ExecutionException e) {
+                throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
+            } finally {
+                pool.shutdownNow();
+            }
             List<SurveyRow> rows = new ArrayList<>();
-            SurveyRunner.run(stars(), settings, estimators, threads, false, Progress.none(), new SurveyRunner.Sink() {
-                @Override
-                public void completed(StarRow row, List<SurveyRow> starRows, String block) {
-                    rows.addAll(starRows);
-                }
-
-                @Override
-                public void failed(StarRow row, StarJobException failure) {
-                    throw failure;
-                }
+            List<DrawFailure> failures = new ArrayList<>();
+            results.forEach(r -> {
+                rows.addAll(r.rows());
+                failures.addAll(r.failures());
             });
-            return new Survey(rows);
+            return new Survey(rows, failures);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
     }
 
-    private java.util.Iterator<StarRow> stars() throws IOException {
+    private List<StarRow> stars() throws IOException {
         List<StarRow> out = new ArrayList<>();
         try (CatalogueReader reader = CatalogueReader.open(catalogue)) {
             for (CatalogueReader.Parsed p = reader.next(); p != null; p = reader.next()) {
                 out.add(p.row());
             }
         }
-        return out.iterator();
+        return out;
     }
 
-    private static org.nebulith.survey.PlanetEstimator estimator(SurveySettings s) {
+    private static PlanetEstimator estimator(SurveySettings s) {
         try {
             return PlanetSurveyEstimator.create(s);
         } catch (IOException e) {

@@ -42,6 +42,11 @@ public final class Cautions {
     public static final String FEW_DRAWS = "With few draws the 16th and 84th percentiles are noisy: for a Gaussian "
             + "spread sigma their standard error is about 1.5 sigma / sqrt(draws) (0.15 sigma at 100 draws, 0.05 "
             + "sigma at 1000; asymptotic error of a sample quantile, common practice).";
+    /** Draws left out of the percentiles. */
+    public static final String DRAWS_LEFT_OUT = "Draws that failed (failures.csv) or to which a quantity does not "
+            + "apply are left out of its percentiles (n_draws in survey.csv says how many remain); they are not a "
+            + "random sample: if they cluster in one part of the abundance distribution, the percentiles describe "
+            + "the rest.";
     /** What survey planets are. */
     public static final String SURVEY_PLANETS = "The planet quantities inherit every assumption of the planet "
             + "estimate (equilibrium condensation in the given disk, solids accreted where they condensed, no later "
@@ -90,7 +95,7 @@ public final class Cautions {
 
     /** @return the cautions of a survey (beyond those of the planet estimate) */
     public static List<String> survey() {
-        return List.of(FOLLOW_FE_H, RANDOM_ERRORS_ONLY, FEW_DRAWS, SURVEY_PLANETS);
+        return List.of(FOLLOW_FE_H, RANDOM_ERRORS_ONLY, FEW_DRAWS, DRAWS_LEFT_OUT, SURVEY_PLANETS);
     }
 
     /** @return the one-line caution of a single state */

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.Cautions;
 import org.nebulith.files.RunFolder;
@@ -20,7 +21,9 @@ import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
 import org.nebulith.thermo.DataSet;
+import org.nebulith.zones.IntegrationQuality;
 import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
 
 /** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
 public final class PlanetReportWriter {
@@ -94,6 +97,7 @@ public final class PlanetReportWriter {
         Report.Section planets = report.section("Planets");
         for (ZonePlanet zp : data.planets()) {
             planets.paragraph(summary(zp));
+            ZoneNotices.of(zp).forEach(n -> planets.paragraph("Notice: " + n + "."));
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
@@ -104,6 +108,10 @@ public final class PlanetReportWriter {
                 .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
                         + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
                 .table(phases, "zone-phases.csv: what each zone collected");
+        Report.Section integration = report.section("Radial integration");
+        for (ZonePlanet zp : data.planets()) {
+            integration.paragraph(integrationNote(zp));
+        }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         cautions(data.chemistry()).forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
@@ -130,7 +138,7 @@ public final class PlanetReportWriter {
         if (c.hasRock()) {
             sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
         }
-        if (c.oxides() != null && c.oxides().hasMgNumber()) {
+        if (c.hasMgNumber()) {
             sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
@@ -138,6 +146,23 @@ public final class PlanetReportWriter {
         }
         sb.append('.');
         return sb.toString();
+    }
+
+    /**
+     * @param zp a zone planet
+     * @return the run note on its radial integral: evaluations, the worst panel, its radius and its
+     *         estimated error, and panels accepted where the error stopped falling
+     */
+    public static String integrationNote(ZonePlanet zp) {
+        ZoneInventory inv = zp.inventory();
+        IntegrationQuality q = inv.quality();
+        if (q.fixedRule()) {
+            return zp.zoneName() + ": fixed composite rule, " + inv.evaluations() + " evaluations (no error estimate).";
+        }
+        return String.format(java.util.Locale.ROOT, "%s: %d evaluations, %d fronts; worst panel %.6g-%.6g AU"
+                + " (r = %.6g AU), estimated error %.2g relative; whole zone %.2g relative; %d panel(s) accepted"
+                + " where the error stopped falling when halved.", zp.zoneName(), inv.evaluations(), inv.fronts().size(),
+                q.worstLoAU(), q.worstHiAU(), q.worstRadiusAU(), q.worstRelError(), q.totalRelError(), q.acceptedPanels());
     }
 
     private static Table keyRows(List<ZonePlanet> planets) {
@@ -151,7 +176,7 @@ public final class PlanetReportWriter {
             PlanetComposition c = zp.planet().require();
             t.row(zp.zoneName(), c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar"),
                     c.hasRock() ? c.coreMassFraction() : null,
-                    c.oxides() != null && c.oxides().hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
+                    c.hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
         }
         return t;
     }

@@ -20,6 +20,7 @@ import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
+import org.nebulith.survey.SurveyFailures;
 
 /**
  * {@code report.html} and {@code summary.md} of a survey: the run notes, the chart and the first
@@ -51,7 +52,7 @@ final class SurveyReport {
         r.table(stars(starsCsv), "survey-stars.csv (first " + SHOWN_STARS + " stars)");
         Cautions.survey().forEach(report::caution);
         report.inputs(inputs);
-        for (String f : List.of("survey.csv", StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
+        for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
                 SurveyChart.BASE + ".svg", "summary.md")) {
             report.outputFile(f);
         }
