@@ -59,6 +59,9 @@ public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
 
+    /** Most radii of the radial profile (each is an equilibrium solve). */
+    static final int MAX_PROFILE_POINTS = 10_000;
+
     @Mixin
     private ChemistryOptions chemistry;
 
@@ -82,47 +85,55 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
+            throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
+                    : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
+        }
         ElementAbundances gas = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
-        if (profilePoints < 2) {
-            throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
-        }
-        FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
-        PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
-        try (Progress progress = context.progress("zones", PlanetFormation.steps(zoneList, profilePoints))) {
-            PlanetFormation.Formation run = formation.run(gas, diskModel, zoneList, profilePoints, progress);
-            return writeOutputs(context, gas, diskModel, spec, run.planets(), run.profile());
-        }
-    }
-
-    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
-                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+        ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
         String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
                 .format(context.started());
         try (RunFolder run = context.openRunFolder(runName)) {
-            List<Report.Setting> settings = new ArrayList<>();
-            context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-            List<Report.Citation> sources = new ArrayList<>();
-            for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
-                sources.add(new Report.Citation(e.getKey(), e.getValue()));
-            }
-            PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
-                    "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
-                    chemistry.ciReference());
-            PlanetReportWriter.write(run, data);
-            Path done = run.commit();
-            for (ZonePlanet zp : planets) {
-                context.out().println(PlanetReportWriter.summary(zp));
-            }
-            for (ZonePlanet zp : planets) {
-                org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
-            }
-            context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.cautions(spec.describe()).forEach(context::warn);
+            return compute(context, run, gas, spec, diskModel, zoneList);
         }
+    }
+
+    private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
+                        List<FeedingZone> zoneList) {
+        FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
+        PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
+        try (Progress progress = context.progress("zones", PlanetFormation.steps(zoneList, profilePoints))) {
+            PlanetFormation.Formation result = formation.run(gas, diskModel, zoneList, profilePoints, progress);
+            return writeOutputs(context, run, gas, diskModel, spec, result.planets(), result.profile());
+        }
+    }
+
+    private int writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
+                             SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+        List<Report.Setting> settings = new ArrayList<>();
+        context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
+        List<Report.Citation> sources = new ArrayList<>();
+        for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
+            sources.add(new Report.Citation(e.getKey(), e.getValue()));
+        }
+        PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
+                "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
+                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
+                chemistry.ciReference());
+        PlanetReportWriter.write(run, data);
+        Path done = run.commit();
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
+        }
+        for (ZonePlanet zp : planets) {
+            org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.cautions(context.verbosity() == Verbosity.QUIET ? PlanetReportWriter.cautions(spec.describe(), planets)
+                : PlanetReportWriter.cautions(spec.describe()), done.resolve("report.html"));
         return ExitCodes.OK;
     }
 

@@ -7,6 +7,7 @@ import java.util.EnumMap;
 import java.util.List;
 
 import org.nebulith.errors.InputException;
+import org.nebulith.errors.Messages;
 import org.nebulith.format.HeaderedLines;
 import org.nebulith.thermo.Element;
 
@@ -22,6 +23,11 @@ public final class AbundanceFileReader {
 
     private AbundanceFileReader() {
     }
+
+    /** Largest accepted log eps: 10^8 times hydrogen (log eps(H) = 12 by definition). */
+    static final double MAX_LOG_EPS = 20;
+    /** Smallest accepted log eps (10^-62 times hydrogen; anything less is absent). */
+    static final double MIN_LOG_EPS = -50;
 
     /**
      * @param in   the file contents (closed by this method)
@@ -39,6 +45,10 @@ public final class AbundanceFileReader {
                 (line, lineNo) -> unit[0] = readRow(line, lineNo, name, unit[0], amounts));
         if (!headerSeen || amounts.isEmpty()) {
             throw InputException.atField(name, 0, "element", "", "no data rows", "header " + HEADER + " and one row per element");
+        }
+        if (amounts.values().stream().allMatch(v -> v == 0)) {
+            throw InputException.atField(name, 0, "value", "", "every amount is zero",
+                    "at least one element with an amount > 0");
         }
         return new AbundanceSet(name, provenance, ElementAbundances.of(amounts));
     }
@@ -80,6 +90,10 @@ public final class AbundanceFileReader {
         if (!ok) {
             throw InputException.atField(name, lineNo, "value", s, "out of range",
                     u == AbundanceUnit.LOG_EPS ? "a finite number" : "a finite number >= 0");
+        }
+        if (u == AbundanceUnit.LOG_EPS && (v > MAX_LOG_EPS || v < MIN_LOG_EPS)) {
+            throw InputException.atField(name, lineNo, "value", s, "log eps outside its range",
+                    (int) MIN_LOG_EPS + " to " + (int) MAX_LOG_EPS + " (log eps(H) = 12 by definition)");
         }
         return v;
     }

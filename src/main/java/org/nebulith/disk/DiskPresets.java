@@ -75,7 +75,7 @@ public final class DiskPresets {
      */
     public static DiskModel read(Reader in, String name) throws IOException {
         String text;
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             text = br.lines().collect(Collectors.joining("\n", "", "\n"));
         }
         List<String> lines = text.lines().map(String::strip).toList();

@@ -18,8 +18,8 @@ public final class InputException extends NebulithException {
         super(key, cause, parts);
     }
 
-    /** Longest value shown in a message; longer values are cut and end in "...". */
-    public static final int VALUE_SHOWN = 80;
+    /** Longest value shown in a message ({@link Messages#ECHO_LIMIT}); longer values are cut. */
+    public static final int VALUE_SHOWN = Messages.ECHO_LIMIT;
 
     /**
      * A bad field of an input file, in the one shape every reader uses:
@@ -35,16 +35,17 @@ public final class InputException extends NebulithException {
      */
     public static InputException atField(final Object file, final long line, final String field, final Object value,
                                          final String problem, final String accepted) {
-        return new InputException(Messages.BAD_INPUT_FIELD, null, file, line, field, shown(value), problem, accepted);
+        Object shown = value instanceof Number ? value : shown(value);
+        return new InputException(Messages.BAD_INPUT_FIELD, null, file, line, field, shown, problem, accepted);
     }
 
     /**
      * @param value any value
-     * @return its text on one line, stripped and cut to {@value #VALUE_SHOWN} characters
+     * @return its text on one line, stripped and cut to {@value #VALUE_SHOWN} characters, the full
+     *         length noted after the cut ({@link Messages#echo})
      */
     public static String shown(final Object value) {
-        String text = String.valueOf(value).replaceAll("[\\r\\n\\t]+", " ").strip();
-        return text.length() <= VALUE_SHOWN ? text : text.substring(0, VALUE_SHOWN - 3) + "...";
+        return Messages.echo(String.valueOf(value).replaceAll("[\\r\\n\\t]+", " ").strip());
     }
 
     /**
@@ -70,6 +71,7 @@ public final class InputException extends NebulithException {
      */
     public static InputException atOption(final String option, final Object value, final String problem,
                                           final String accepted) {
-        return new InputException(Messages.BAD_OPTION_VALUE, null, option, shown(value), problem, accepted);
+        Object shown = value instanceof Number ? value : shown(value);
+        return new InputException(Messages.BAD_OPTION_VALUE, null, option, shown, problem, accepted);
     }
 }

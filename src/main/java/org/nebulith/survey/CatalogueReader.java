@@ -16,6 +16,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.nebulith.errors.Messages;
 import org.nebulith.thermo.Element;
 
 /**

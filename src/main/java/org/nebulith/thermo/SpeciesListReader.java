@@ -31,7 +31,7 @@ public final class SpeciesListReader {
             known.add(s.id());
         }
         Set<String> ids = new LinkedHashSet<>();
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             int lineNo = 0;
             for (String line = br.readLine(); line != null; line = br.readLine()) {
                 lineNo++;

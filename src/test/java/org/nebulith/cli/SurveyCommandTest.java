@@ -153,6 +153,6 @@ class SurveyCommandTest {
         assertEquals(3, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
                 "--out", dir.resolve("limit").toString()));
         assertTrue(cli.err().contains("4 of 12 draws failed, more than --max-failed-fraction 0.01"), cli.err());
-        assertTrue(Files.exists(dir.resolve("limit").resolve(".survey.csv.partial")));
+        assertTrue(Files.exists(org.nebulith.report.survey.LocalSurvey.partialTable(dir.resolve("limit"))));
     }
 }

@@ -71,6 +71,23 @@ public final class PlanetReportWriter {
     }
 
     /**
+     * @param planets the zone planets, inner first
+     * @param chemistry description of the chemical system (data set and solutions)
+     * @return the standing cautions ({@link #cautions(String)}), then one per pair of overlapping feeding zones
+     */
+    public static List<String> cautions(String chemistry, List<ZonePlanet> planets) {
+        List<String> all = new java.util.ArrayList<>(cautions(chemistry));
+        List<org.nebulith.zones.FeedingZone> zones = new java.util.ArrayList<>();
+        planets.forEach(p -> zones.add(p.inventory().zone()));
+        org.nebulith.zones.ZoneFileReader.overlaps(zones).forEach(line -> all.add(capitalised(line) + "."));
+        return all;
+    }
+
+    private static String capitalised(String line) {
+        return Character.toUpperCase(line.charAt(0)) + line.substring(1);
+    }
+
+    /**
      * @param run  the open run folder (committed by the caller)
      * @param data the run's data
      * @return the report (for printing a summary)
@@ -113,7 +130,7 @@ public final class PlanetReportWriter {
             integration.paragraph(integrationNote(zp));
         }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
-        cautions(data.chemistry()).forEach(report::caution);
+        cautions(data.chemistry(), data.planets()).forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",

@@ -15,6 +15,7 @@ import org.apache.commons.csv.CSVRecord;
 import org.knowm.xchart.XYChart;
 import org.nebulith.files.AtomicOutput;
 import org.nebulith.files.RunInputs;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
@@ -35,7 +36,7 @@ final class SurveyChart {
     }
 
     /** @return the PNG bytes of the chart, or null if there is nothing to draw */
-    static byte[] write(Path survey, Path folder, RunInputs inputs) throws IOException {
+    static byte[] write(Path survey, RunFolder run) throws IOException {
         List<SurveyScatter.Point> stars = new ArrayList<>();
         List<SurveyScatter.Point> planets = new ArrayList<>();
         Map<String, double[]> pending = new HashMap<>();
@@ -67,9 +68,8 @@ final class SurveyChart {
         }
         XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"), out -> ChartRenderer.vector(chart, ChartFormat.SVG, out),
-                true, inputs);
+        run.write(BASE + ".png", out -> out.write(png));
+        run.write(BASE + ".svg", out -> ChartRenderer.vector(chart, ChartFormat.SVG, out));
         return png;
     }
 

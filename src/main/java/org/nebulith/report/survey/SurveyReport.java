@@ -16,6 +16,9 @@ import org.nebulith.files.AtomicOutput;
 import org.nebulith.report.Cautions;
 import org.nebulith.files.RunInputs;
 import org.nebulith.files.Table;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
@@ -33,7 +36,7 @@ final class SurveyReport {
     private SurveyReport() {
     }
 
-    static void write(Path folder, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
+    static void write(RunFolder run, String notes, byte[] png, Path starsCsv, RunInputs inputs) throws IOException {
         Report report = new Report("Nebulith host-star survey", "nebulith survey", org.nebulith.files.RunFolder.class
                 .getPackage().getImplementationVersion() == null ? "dev"
                 : org.nebulith.files.RunFolder.class.getPackage().getImplementationVersion(), Instant.now());
@@ -57,8 +60,8 @@ final class SurveyReport {
             report.outputFile(f);
         }
         report.finish(Instant.now());
-        AtomicOutput.writeText(folder.resolve("report.html"), HtmlReportWriter.write(report), true, inputs);
-        AtomicOutput.writeText(folder.resolve("summary.md"), MarkdownSummaryWriter.write(report), true, inputs);
+        run.writeText("report.html", HtmlReportWriter.write(report));
+        run.writeText("summary.md", MarkdownSummaryWriter.write(report));
     }
 
     private static Table stars(Path csv) throws IOException {
