@@ -85,6 +85,7 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        planet.check();
         if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);

@@ -37,6 +37,12 @@ public final class PlanetOptions {
                     + "water ice. Default: ${DEFAULT-VALUE}.")
     private double floorK;
 
+    /** Checks every option of this group (before anything is read or computed). */
+    void check() {
+        floorK();
+        core();
+    }
+
     /** @return the checked core options */
     CoreOptions core() {
         checkWtPct("--core-Si-wt-pct", coreSi);

@@ -132,11 +132,11 @@ class BadInputTest {
         "planet --disk {d}/ff-disk.csv --out {d}/o | {d}/ff-disk.csv: line 3: byte 0xFF is not UTF-8 text",
         "survey --catalogue {d}/ff-catalogue.csv --out {d}/o | {d}/ff-catalogue.csv: line 5: byte 0xFF",
         "point --composition {d}/ff-composition.csv --T-K 1500 --P-bar 1e-4 | {d}/ff-composition.csv: line 4: byte 0xFF",
-        "point --composition {d}/zero.csv --T-K 1500 --P-bar 1e-4 | {d}/zero.csv: field 'value': every amount is zero",
+        "point --composition {d}/zero.csv --T-K 1500 --P-bar 1e-4 | {d}/zero.csv: line 0: field \"value\": value \"\": every amount is zero",
         "point --elements H=0,Mg=0 --T-K 1500 --P-bar 1e-4 | option --elements: value \"H=0,Mg=0\": every amount is zero",
-        "point --composition {d}/eps400.csv --T-K 1500 --P-bar 1e-4 | {d}/eps400.csv:3: field 'value': log eps 400 is outside",
+        "point --composition {d}/eps400.csv --T-K 1500 --P-bar 1e-4 | {d}/eps400.csv: line 3: field \"value\": value \"400\": log eps outside",
         "point --dust-enrichment 1e308 --T-K 1500 --P-bar 1e-4 | option --dust-enrichment: value \"1.0E308\"",
-        "point --composition {d}/huge.csv --T-K 1500 --P-bar 1e-4 | ... (20000000 characters)' is not a number",
+        "point --composition {d}/huge.csv --T-K 1500 --P-bar 1e-4 | ... (20000000 characters)\": not a number",
         "point --T-K 1500 --P-bar 1e-4 --out {d}/existing --force | {d}/existing: cannot write the output here: it is a folder",
         "point --T-K 1500 --P-bar 1e-4 --out {d}/dangling | {d}/dangling: cannot write the output here: it is a dangling",
         "sequence --out {d}/dangling | {d}/dangling: cannot write the output here: it is a dangling symbolic link",
@@ -252,7 +252,7 @@ class BadInputTest {
         Path outDir = dir.resolve("p");
         assertEquals(0, run("planet", "-q", "--zones", zones.toString(), "--profile-points", "2", "--out",
                 outDir.toString()), err());
-        assertEquals("warning: 7 cautions apply to these results; see " + outDir.resolve("report.html"), err().strip(),
+        assertEquals("warning: 8 cautions apply to these results; see " + outDir.resolve("report.html"), err().strip(),
                 "quiet: one line, no standing warnings");
         String html = Files.readString(outDir.resolve("report.html"));
         assertTrue(html.contains("Feeding zones &#39;a|b*c&#39; (0.700-1.30 AU) and &#39;&lt;z&gt;&#39; (1.10-1.70 AU)"
@@ -286,8 +286,9 @@ class BadInputTest {
         Path cat = Files.writeString(dir.resolve("huge-cat.csv"), "star,Fe_H,Fe_H_err\n" + "S".repeat(5_000_000) + ","
                 + "9".repeat(5_000_000) + ",0.05\n");
         assertEquals(2, run("survey-standin", "--catalogue", cat.toString(), "--out", dir.resolve("o").toString()));
-        assertTrue(err().contains("star '" + "S".repeat(80) + "... (5000000 characters)': value " + "9".repeat(80)
-                + "... (5000000 characters) is out of range"), err().substring(0, Math.min(2000, err().length())));
+        assertTrue(err().contains("field \"Fe_H\": value \"" + "9".repeat(80) + "... (5000000 characters)\": star '"
+                + "S".repeat(80) + "... (5000000 characters)': out of range"), err().substring(0, Math.min(2000,
+                err().length())));
         assertTrue(err().length() < 1500, err().length() + " characters");
     }
 

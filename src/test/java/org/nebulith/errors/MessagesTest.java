@@ -70,8 +70,7 @@ class MessagesTest {
     @Test
     void longValuesAreCutTo80CharactersOnOneLine() {
         String shown = InputException.shown("x".repeat(200) + "\nnext");
-        assertEquals(InputException.VALUE_SHOWN, shown.length());
-        assertEquals("x".repeat(77) + "...", shown);
+        assertEquals("x".repeat(InputException.VALUE_SHOWN) + "... (205 characters)", shown);
         assertEquals("a b", InputException.shown(" a\r\nb "));
     }
 }
