@@ -26,6 +26,7 @@ import org.nebulith.disk.DiskPresets;
 import org.nebulith.disk.TabulatedDiskReader;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
+import org.nebulith.measured.PlanetsFileReader;
 import org.nebulith.survey.CatalogueCheck;
 import org.nebulith.survey.EstimatorCache;
 import org.nebulith.survey.FullyCondensedEstimator;
@@ -33,6 +34,8 @@ import org.nebulith.survey.SurveySettings;
 import org.nebulith.thermo.DataSet;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.thermo.SpeciesListReader;
+import org.nebulith.thermo.audit.AcceptedFindings;
+import org.nebulith.thermo.source.Corrections;
 import org.nebulith.zones.ZoneFileReader;
 
 /**
@@ -84,6 +87,15 @@ class ReaderMessageShapeTest {
                         3, "T_K"),
                 Arguments.of("preset file", (Reader) (t, d) -> thrown(() -> PresetFile.parse(Path.of("bad.csv"),
                         new StringReader(t))), "# settings\nT-K = 1500\nT-K = " + LONG + "\n", 3, "T-K"),
+                Arguments.of("measured planets", (Reader) (t, d) -> thrown(() -> PlanetsFileReader.read(
+                        new StringReader(t), "bad.csv")), PlanetsFileReader.HEADER + "\nb,NDC Alder," + LONG
+                        + ",0.1,1,0.05\n", 2, "mass_Mearth"),
+                Arguments.of("data corrections", (Reader) (t, d) -> thrown(() -> Corrections.read(new StringReader(t),
+                        "bad.csv")), "species,field,file_value,corrected_value,source,reason\nSiO," + LONG
+                        + ",1,2,a source,a reason\n", 2, "field"),
+                Arguments.of("accepted audit findings", (Reader) (t, d) -> thrown(() -> AcceptedFindings.read(
+                        new StringReader(t), "bad.csv")), "check,subject,max_value,reason\njump,SiO," + LONG
+                        + ",a reason\n", 2, "max_value"),
                 Arguments.of("star catalogue", (Reader) ReaderMessageShapeTest::catalogue,
                         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err\nA,0.1,0.05,0.1,0.05\nB,0.1,0.05," + LONG + ",0.05\n",
                         3, "Mg_H"));
