@@ -3,6 +3,7 @@ package org.nebulith.report.sequence;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.condensation.SequenceStep;
@@ -89,19 +90,21 @@ public final class SequenceCharts {
         double scale = 1e6 / seq.inputTotals()[norm];
         List<Curve> all = new ArrayList<>();
         List<Double> peaks = new ArrayList<>();
-        for (int p : tables.phasesShown()) {
+        for (Map.Entry<String, List<Integer>> group : tables.shownGroups().entrySet()) {
             double[] v = new double[seq.steps().size()];
             double peak = 0;
             for (int i = 0; i < v.length; i++) {
                 SequenceStep s = seq.steps().get(i);
                 double n = 0;
-                for (int k = 0; k < sys.memberNames(p).size(); k++) {
-                    n += s.result().memberMoles(p, k);
+                for (int p : group.getValue()) {
+                    for (int k = 0; k < sys.memberNames(p).size(); k++) {
+                        n += s.result().memberMoles(p, k);
+                    }
                 }
                 v[i] = n > 0 ? n * scale : Double.NaN;
                 peak = Math.max(peak, n * scale);
             }
-            all.add(new Curve(sys.phaseName(p), v));
+            all.add(new Curve(group.getKey(), v));
             peaks.add(peak);
         }
         List<Integer> order = new ArrayList<>();

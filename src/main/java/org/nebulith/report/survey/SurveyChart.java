@@ -23,7 +23,7 @@ import org.nebulith.report.chart.SurveyScatter;
 import org.nebulith.survey.StarJob;
 
 /**
- * The survey chart, {@code survey-chart.png} and {@code .svg}: molar Mg/Si against Fe/Si of the
+ * The survey chart, {@code survey-chart.png}, {@code .svg} and {@code .pdf}: molar Mg/Si against Fe/Si of the
  * host stars and of every predicted planet zone, medians with 16th-84th percentile bars, read back
  * from {@code survey.csv}. At most {@value #MAX_STARS} stars are drawn (the first ones).
  */
@@ -69,7 +69,9 @@ final class SurveyChart {
         XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
         run.write(BASE + ".png", out -> out.write(png));
-        run.write(BASE + ".svg", out -> ChartRenderer.vector(chart, ChartFormat.SVG, out));
+        for (ChartFormat vector : List.of(ChartFormat.SVG, ChartFormat.PDF)) {
+            run.write(BASE + "." + vector.extension(), out -> ChartRenderer.vector(chart, vector, out));
+        }
         return png;
     }
 

@@ -56,7 +56,7 @@ final class SurveyReport {
         Cautions.survey().forEach(report::caution);
         report.inputs(inputs);
         for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
-                SurveyChart.BASE + ".svg", "summary.md")) {
+                SurveyChart.BASE + ".svg", SurveyChart.BASE + ".pdf", "summary.md")) {
             report.outputFile(f);
         }
         report.finish(Instant.now());
