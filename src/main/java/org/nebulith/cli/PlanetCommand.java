@@ -109,6 +109,9 @@ public final class PlanetCommand extends RunCommand {
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
+        DomainChecks.temperature("--floor-K", planet.floorK(), spec.species());
+        DomainChecks.disk("--disk", disk, diskModel, PlanetFormation.profileMinAU(diskModel, zoneList),
+                PlanetFormation.profileMaxAU(diskModel, zoneList), planet.floorK(), spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             return compute(context, run, gas, spec, diskModel, zoneList);
         }

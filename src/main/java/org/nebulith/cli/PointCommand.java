@@ -74,6 +74,8 @@ public final class PointCommand extends RunCommand {
         checkState();
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
+        DomainChecks.temperature("--T-K", temperatureK, spec.species());
+        DomainChecks.pressure("--P-bar", pressureBar);
         Optional<Path> out = context.outOption();
         try (AtomicOutput.OutputFile file = context.reserveOutputFile(String.join(",", PointTable.COLUMNS)).orElse(null)) {
             ChemicalSystem system = spec.build(comp.elements());

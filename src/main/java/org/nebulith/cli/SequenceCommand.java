@@ -118,6 +118,7 @@ public final class SequenceCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         PressurePath path = pressurePath(context);
         settings(path);
+        checkDomain(spec, path);
         Set<Element> elements = comp.elements();
         ChemicalSystem system = spec.build(elements);
         double[] totals = new double[system.elementCount()];
@@ -284,6 +285,21 @@ public final class SequenceCommand extends RunCommand {
                     "0 (equilibrium) to 1 (fully fractional)");
         }
         return new SequenceSettings(path, tMaxK, tMinK, tStepK, removalFraction, 0.05);
+    }
+
+    /** The grid's temperatures and the path's pressures over the grid lie inside what the data cover. */
+    private void checkDomain(final SystemSpec spec, final PressurePath path) {
+        List<org.nebulith.thermo.Species> species = spec.species();
+        DomainChecks.temperature("--T-max-K", tMaxK, species);
+        DomainChecks.temperature("--T-min-K", tMinK, species);
+        int n = 2000;
+        for (int i = 0; i <= n; i++) {
+            double t = tMaxK - (tMaxK - tMinK) * i / n;
+            double p = path.pressureBar(t);
+            if (!org.nebulith.equilibrium.StateDomain.coversPressure(p)) {
+                DomainChecks.pressure(pathFile == null ? "--P-bar" : "--path", p);
+            }
+        }
     }
 
     private String describe(final PressurePath path) {

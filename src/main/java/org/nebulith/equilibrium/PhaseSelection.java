@@ -214,7 +214,12 @@ final class PhaseSelection {
         return ab / Math.sqrt(aa * bb);
     }
 
-    /** @return the active index of the solution with the smallest scaled amount, or -1 */
+    /**
+     * @return the active index of the solution with the smallest scaled amount if that amount is
+     *         really small (below {@link #SMALL_SOLUTION_LN} of its largest amount), or -1: dropping a
+     *         substantial solution because Newton failed loses its elements' carrier and leads the
+     *         search astray
+     */
     private int smallestSolution(Iterate it) {
         int best = -1;
         for (int q = 0; q < it.active.length; q++) {
@@ -222,8 +227,11 @@ final class PhaseSelection {
                 best = q;
             }
         }
-        return best;
+        return best >= 0 && it.u[best] < SMALL_SOLUTION_LN ? best : -1;
     }
+
+    /** ln of the scaled amount below which a solution may be dropped after a Newton failure. */
+    static final double SMALL_SOLUTION_LN = Math.log(1e-4);
 
     /** Driving force per atom of absent phase p [RT]; positive means supersaturated. */
     double drivingForce(int p, double[] lambda) {

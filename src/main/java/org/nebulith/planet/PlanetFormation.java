@@ -97,7 +97,7 @@ public final class PlanetFormation {
     }
 
     /** @return inner end of the profile [AU]: half the innermost inner edge, inside the disk */
-    static double profileMinAU(DiskModel d, List<FeedingZone> zones) {
+    public static double profileMinAU(DiskModel d, List<FeedingZone> zones) {
         double lo = Double.POSITIVE_INFINITY;
         for (FeedingZone z : zones) {
             lo = Math.min(lo, z.rInnerAU());
@@ -106,7 +106,7 @@ public final class PlanetFormation {
     }
 
     /** @return outer end of the profile [AU]: twice the outermost outer edge, inside the disk */
-    static double profileMaxAU(DiskModel d, List<FeedingZone> zones) {
+    public static double profileMaxAU(DiskModel d, List<FeedingZone> zones) {
         double hi = 0;
         for (FeedingZone z : zones) {
             hi = Math.max(hi, z.rOuterAU());

@@ -19,6 +19,7 @@ import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.Quantity;
@@ -90,10 +91,33 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     public static PlanetSurveyEstimator create(SurveySettings settings) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
         List<FeedingZone> z = readZones(settings.zones(), d);
-        PlanetFormation f = new PlanetFormation(settings.planet().settings(ZoneCondensation.fast()),
-                new EquilibriumSolver());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
+        checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, z, fs);
+        PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
+    }
+
+    /** The disk must stay inside the data's temperatures and the model's pressures where equilibria are computed. */
+    private static void checkDomain(String diskName, DiskModel d, List<FeedingZone> zones, FormationSettings fs) {
+        if (zones.isEmpty()) {
+            return;
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (FeedingZone zone : zones) {
+            lo = Math.min(lo, zone.rInnerAU());
+            hi = Math.max(hi, zone.rOuterAU());
+        }
+        List<org.nebulith.thermo.Species> species = fs.system().species();
+        String problem = org.nebulith.zones.DiskDomain.problem(d, lo, hi, fs.floorK(), species);
+        if (problem != null) {
+            throw org.nebulith.errors.InputException.atOption("--disk", diskName, problem, "a disk whose T stays within "
+                    + org.nebulith.equilibrium.StateDomain.temperatureRange(
+                            org.nebulith.equilibrium.StateDomain.minTemperatureK(species),
+                            org.nebulith.equilibrium.StateDomain.maxTemperatureK(species))
+                    + " and P within " + org.nebulith.equilibrium.StateDomain.pressureRange() + " above the floor temperature");
+        }
     }
 
     /**
@@ -104,8 +128,9 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
      */
     public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
-        PlanetFormation f = new PlanetFormation(settings.planet().settings(ZoneCondensation.fast()),
-                new EquilibriumSolver());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
+        checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, zones, fs);
+        PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
     }

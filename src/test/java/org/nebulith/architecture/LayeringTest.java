@@ -29,7 +29,7 @@ class LayeringTest {
     /** Lowest first: each layer may use only the layers before it (and itself). */
     static final List<String> LAYERS = List.of(
             "format", "errors", "progress", "files",
-            "thermo", "equilibrium", "composition", "condensation", "disk", "zones", "planet", "survey", "measured",
+            "thermo", "equilibrium", "composition", "stress", "condensation", "disk", "zones", "planet", "survey", "measured",
             "api",
             "report", "progress.terminal", "cli");
 
