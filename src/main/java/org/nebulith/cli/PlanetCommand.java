@@ -18,18 +18,16 @@ import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.planet.CoreOptions;
 import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
-import org.nebulith.zones.RadialScan;
 import org.nebulith.zones.ZoneCondensation;
 import org.nebulith.zones.ZoneFileReader;
 
@@ -91,21 +89,8 @@ public final class PlanetCommand extends RunCommand {
                     + "zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]. Default: " + DEMO_ZONES_NAME + ".")
     private String zones;
 
-    @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
-    private boolean sulfideInMantle;
-
-    @Option(names = "--core-Si-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "Si in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreSi;
-
-    @Option(names = "--core-O-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "O in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreO;
-
-    @Option(names = "--floor-K", paramLabel = "T", defaultValue = "300",
-            description = "Lowest equilibrium temperature [K]; colder gas keeps its rock and adds water ice. "
-                    + "Default: ${DEFAULT-VALUE}.")
-    private double floorK;
+    @Mixin
+    private PlanetOptions planet = new PlanetOptions();
 
     @Option(names = "--profile-points", paramLabel = "N", defaultValue = "160",
             description = "Radii of the radial profile. Default: ${DEFAULT-VALUE}.")
@@ -114,6 +99,7 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        planet.check();
         if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
@@ -123,9 +109,9 @@ public final class PlanetCommand extends RunCommand {
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
-        DomainChecks.temperature("--floor-K", floorK, spec.species());
-        DomainChecks.disk("--disk", disk, diskModel, scanMin(diskModel, zoneList), scanMax(diskModel, zoneList), floorK,
-                spec.species());
+        DomainChecks.temperature("--floor-K", planet.floorK(), spec.species());
+        DomainChecks.disk("--disk", disk, diskModel, PlanetFormation.profileMinAU(diskModel, zoneList),
+                PlanetFormation.profileMaxAU(diskModel, zoneList), planet.floorK(), spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             return compute(context, run, gas, spec, diskModel, zoneList);
         }
@@ -133,23 +119,16 @@ public final class PlanetCommand extends RunCommand {
 
     private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
                         List<FeedingZone> zoneList) {
-        FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
-                new CoreOptions(!sulfideInMantle, coreSi, coreO));
+        FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
-        List<ZonePlanet> planets = new ArrayList<>();
-        LocalCondensation local = formation.localCondensation(gas);
+        List<ZonePlanet> planets;
         Path done;
         String task = "planet (" + zoneList.size() + (zoneList.size() == 1 ? " zone" : " zones")
                 + ", radial profile, report)";
-        try (Progress progress = context.progress(task, zoneList.size() + 2L)) {
-            for (FeedingZone z : zoneList) {
-                planets.add(formation.zonePlanet(z, diskModel, local));
-                progress.step();
-            }
-            List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
-                    scanMax(diskModel, zoneList), profilePoints);
-            progress.step();
-            done = writeOutputs(context, run, gas, diskModel, spec, planets, scan);
+        try (Progress progress = context.progress(task, PlanetFormation.steps(zoneList, profilePoints) + 1L)) {
+            PlanetFormation.Formation result = formation.run(gas, diskModel, zoneList, profilePoints, progress);
+            planets = result.planets();
+            done = writeOutputs(context, run, gas, diskModel, spec, planets, result.profile());
             progress.step();
         }
         for (ZonePlanet zp : planets) {
@@ -159,7 +138,8 @@ public final class PlanetCommand extends RunCommand {
             org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
         }
         context.out().println("report: " + done.resolve("report.html"));
-        context.info("cautions: " + PlanetReportWriter.CAUTIONS.size() + " on model assumptions and data limits, in "
+        context.info("cautions: " + PlanetReportWriter.cautions(spec.describe()).size()
+                + " on model assumptions and data limits, in "
                 + done.resolve("report.html") + " (and summary.md)");
         return ExitCodes.OK;
     }
@@ -190,6 +170,10 @@ public final class PlanetCommand extends RunCommand {
         if (Files.exists(p)) {
             context.input(p, "disk");
         }
+        if (!DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(p)) {
+            throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
+                    String.join(", ", DiskPresets.NAMES) + ", or a disk file");
+        }
         return DiskPresets.resolve(disk);
     }
 
@@ -204,21 +188,5 @@ public final class PlanetCommand extends RunCommand {
         try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
             return ZoneFileReader.read(r, zones, diskModel);
         }
-    }
-
-    private static double scanMin(DiskModel d, List<FeedingZone> zs) {
-        double lo = Double.POSITIVE_INFINITY;
-        for (FeedingZone z : zs) {
-            lo = Math.min(lo, z.rInnerAU());
-        }
-        return Math.max(d.rMinAU(), lo / 2);
-    }
-
-    private static double scanMax(DiskModel d, List<FeedingZone> zs) {
-        double hi = 0;
-        for (FeedingZone z : zs) {
-            hi = Math.max(hi, z.rOuterAU());
-        }
-        return Math.min(d.rMaxAU(), hi * 2);
     }
 }

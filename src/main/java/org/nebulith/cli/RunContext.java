@@ -14,10 +14,11 @@ import java.util.stream.Collectors;
 
 import org.nebulith.progress.Progress;
 import org.nebulith.progress.ProgressMode;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.RunMarker;
+import org.nebulith.progress.terminal.ProgressDisplays;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.RunMarker;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
@@ -145,7 +146,7 @@ public final class RunContext {
      * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
      */
     public Progress progress(final String task, final long total) {
-        return Progress.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
+        return ProgressDisplays.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
                 task, total, err);
     }
 

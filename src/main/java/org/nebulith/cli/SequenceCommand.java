@@ -31,7 +31,7 @@ import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.PhaseNames;
 
@@ -119,7 +119,7 @@ public final class SequenceCommand extends RunCommand {
         PressurePath path = pressurePath(context);
         settings(path);
         checkDomain(spec, path);
-        Set<Element> elements = ChemistryOptions.elementsOf(comp);
+        Set<Element> elements = comp.elements();
         ChemicalSystem system = spec.build(elements);
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {

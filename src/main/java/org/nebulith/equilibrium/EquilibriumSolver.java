@@ -186,6 +186,7 @@ public final class EquilibriumSolver {
         EquilibriumResult result;
         Iterate iterate;
         String failure;
+        EquilibriumResult rejected;
         int iterations;
     }
 
@@ -208,6 +209,7 @@ public final class EquilibriumSolver {
         String bad = ResultChecks.failure(r, options);
         if (bad != null) {
             a.failure = bad;
+            a.rejected = r;
             return a;
         }
         a.result = r;
@@ -261,7 +263,7 @@ public final class EquilibriumSolver {
         Iterate it = GasGuess.initial(st0, first.totals());
         Attempt a = attempt(first, st0, it);
         if (a.result == null) {
-            throw failure(problem, "cold start at " + t0 + " K: " + a.failure);
+            throw failure(problem, "cold start at " + t0 + " K: " + a.failure, a);
         }
         int totalIterations = a.iterations;
         double invT = 1.0 / t0;
@@ -285,7 +287,7 @@ public final class EquilibriumSolver {
             if (s.result == null) {
                 h *= 0.5;
                 if (h < 1e-9) {
-                    throw failure(problem, "continuation stalled at T = " + (1.0 / invT) + " K: " + s.failure);
+                    throw failure(problem, "continuation stalled at T = " + (1.0 / invT) + " K: " + s.failure, s);
                 }
                 continue;
             }
@@ -306,6 +308,24 @@ public final class EquilibriumSolver {
     }
 
     static ConvergenceException failure(EquilibriumProblem problem, String what) {
-        return new ConvergenceException("no converged equilibrium at " + problem.describe() + ": " + what);
+        return ConvergenceException.at(problem, what, List.of(), java.util.Map.of());
+    }
+
+    /** The failure with the phases of the attempt's last iterate and the residuals of its rejected result. */
+    private static ConvergenceException failure(EquilibriumProblem problem, String what, Attempt a) {
+        List<String> phases = new ArrayList<>();
+        if (a.iterate != null) {
+            for (int p : a.iterate.active) {
+                phases.add(problem.system().phaseName(p));
+            }
+        }
+        java.util.Map<String, Double> residuals = new java.util.LinkedHashMap<>();
+        if (a.rejected != null) {
+            EquilibriumResult.Diagnostics d = a.rejected.diagnostics();
+            residuals.put("balance", d.maxBalanceError());
+            residuals.put("potential_RT", d.maxPotentialResidual());
+            residuals.put("affinity_RT", d.minAbsentAffinity());
+        }
+        return ConvergenceException.at(problem, what, phases, residuals);
     }
 }

@@ -90,14 +90,15 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     }
 
     /**
-     * @param settings the survey settings (disk and zones, null for the defaults; solar reference)
+     * @param settings the survey settings (disk and zones, null for the defaults; solar reference; planet
+     *                 options: data set, variants, species, solutions, floor temperature, core)
      * @return the estimator
      * @throws IOException if a disk or zone file cannot be read
      */
     public static PlanetSurveyEstimator create(SurveySettings settings) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
         List<FeedingZone> z = readZones(settings.zones(), d);
-        FormationSettings fs = FormationSettings.defaults().withIntegration(ZoneCondensation.fast());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
         checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, z, fs);
         PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
@@ -127,13 +128,14 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     }
 
     /**
-     * @param settings the survey settings (disk, null for the default; solar reference; its zones are not read)
+     * @param settings the survey settings (disk, null for the default; solar reference; planet options; its
+     *                 zones are not read)
      * @param zones    the zones to estimate
      * @return the estimator
      */
     public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
-        FormationSettings fs = FormationSettings.defaults().withIntegration(ZoneCondensation.fast());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
         checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, zones, fs);
         PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),

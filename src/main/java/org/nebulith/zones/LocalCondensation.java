@@ -93,12 +93,16 @@ public final class LocalCondensation {
 
     /**
      * @param s the disk state at r
-     * @return the local condensation (cached by r)
+     * @return the local condensation (cached by r for one disk: a state of another disk at a cached
+     *         radius, with another temperature or pressure, starts a new cache)
      */
     public Local at(DiskState s) {
         Local hit = cache.get(s.rAU());
         if (hit != null) {
-            return hit;
+            if (sameConditions(hit.state(), s)) {
+                return hit;
+            }
+            cache.clear();
         }
         double tEq = Math.max(s.temperatureK(), floorK);
         EquilibriumProblem pr = new EquilibriumProblem(system, tEq, s.pressureBar(), totalsPerGram);
@@ -115,6 +119,10 @@ public final class LocalCondensation {
         Local l = new Local(s, tEq, r, ice);
         cache.put(s.rAU(), l);
         return l;
+    }
+
+    private static boolean sameConditions(DiskState a, DiskState b) {
+        return a.temperatureK() == b.temperatureK() && a.pressureBar() == b.pressureBar();
     }
 
     /** @return an unmodifiable copy of the states solved so far, by radius (a warm-start reference) */

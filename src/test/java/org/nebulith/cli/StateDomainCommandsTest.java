@@ -98,6 +98,7 @@ class StateDomainCommandsTest {
     /** Once exit 3 at the documented floor (the assemblage at 200 K had no valid condensed data). */
     @Test
     @Tag("slow")
+    @Tag("long")
     void planetAtTheDocumentedFloorFinishes() {
         Path planet = dir.resolve("planet");
         assertEquals(0, run("planet", "--floor-K", "200", "--out", planet.toString(), "-q"), err());
@@ -109,6 +110,7 @@ class StateDomainCommandsTest {
      */
     @Test
     @Tag("slow")
+    @Tag("long")
     void demoCatalogueWithTheMmsnDiskFinishes() {
         Path survey = dir.resolve("survey");
         assertEquals(0, run("survey", "--catalogue", "presets/demo-catalogue.csv", "--disk", "mmsn-hayashi1981", "--draws",

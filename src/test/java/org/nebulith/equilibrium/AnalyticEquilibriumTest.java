@@ -62,8 +62,8 @@ class AnalyticEquilibriumTest {
      * of lowest g valid at T. Outside values, from memory (no stored copy of the NIST-JANAF Fe(g)
      * table, Chase 1998, was found): the vapour-pressure table of the elements of the CRC Handbook of
      * Chemistry and Physics, which rests on the same assessments, gives 1 Pa over solid iron at
-     * 1728 K and 10 Pa over liquid iron at 1890 K; the 0.03 dex tolerance (about 2.5 K in temperature) reflects that the figures
-     * are recalled, not read.
+     * 1728 K and 10 Pa over liquid iron at 1890 K. Those figures could not be checked against a stored copy,
+     * so they are printed beside the computed pressure (report only), not asserted.
      */
     @ParameterizedTest(name = "T = {0} K")
     @CsvSource({"1728, Fe(d), 1", "1890, Fe(L), 10"})
@@ -87,7 +87,8 @@ class AnalyticEquilibriumTest {
                         other + " is less stable than " + stableEntry);
             }
         }
-        System.out.printf("iron vapour pressure at %.0f K: %.4g Pa (handbook %s Pa)%n", tK, pFe * 1e5, handbookPa);
-        assertEquals(Math.log10(handbookPa * 1e-5), Math.log10(pFe), 0.03, "CRC Handbook vapour pressure of iron, from memory");
+        // report only: the handbook figures are recalled, not read from a stored copy, so they are not asserted
+        System.out.printf("iron vapour pressure at %.0f K: %.4g Pa (handbook, from memory: %s Pa)%n", tK, pFe * 1e5,
+                handbookPa);
     }
 }

@@ -8,6 +8,7 @@ import java.util.SplittableRandom;
 import java.util.stream.IntStream;
 import java.util.stream.Stream;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.nebulith.composition.AbundancePresets;
@@ -25,6 +26,7 @@ import org.nebulith.thermo.Element;
  * 1e-10, refitted potentials, no supersaturated absent phase). A failure prints
  * the seed and the state so that it can be rerun alone.
  */
+@Tag("slow")
 class RandomStatesTest {
     /** Number of states. */
     static final int STATES = 300;

@@ -50,6 +50,7 @@ class StressSeriesTest {
 
     @Test
     @Tag("slow")
+    @Tag("long")
     void tenThousandStatesInBothModes() {
         List<String> bad = run(2000, 10000, true);
         assertTrue(bad.isEmpty(), bad.size() + " failures:\n" + String.join("\n", bad));

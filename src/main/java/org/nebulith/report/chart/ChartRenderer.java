@@ -25,7 +25,7 @@ import javax.imageio.stream.ImageOutputStream;
 
 import org.knowm.xchart.VectorGraphicsEncoder;
 import org.knowm.xchart.internal.chartpart.Chart;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 
 /**
  * Renders a chart to PNG (at {@link ChartStyle#PNG_DPI}, with the resolution recorded in the

@@ -8,7 +8,7 @@ import java.util.Map;
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.ChemicalSystem;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
