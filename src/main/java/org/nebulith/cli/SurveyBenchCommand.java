@@ -117,7 +117,7 @@ public final class SurveyBenchCommand extends RunCommand {
     private static void throwFirst(final Path file, final List<CatalogueProblem> problems) {
         if (!problems.isEmpty()) {
             CatalogueProblem p = problems.get(0);
-            throw InputException.atField(file, p.line(), p.column(), p.problem(), p.accepted());
+            throw InputException.atField(file, p.line(), p.column(), p.value(), p.problem(), p.accepted());
         }
     }
 
