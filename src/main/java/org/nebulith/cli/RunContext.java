@@ -124,20 +124,16 @@ public final class RunContext {
     }
 
     /**
-     * The standing cautions of a run: every one as a warning, or with --quiet one line pointing to
-     * where they are written.
+     * The standing cautions of a run are written in its report; the terminal gets one line pointing
+     * to them (nothing with --quiet).
      *
      * @param cautions the cautions
      * @param where    the report that lists them
      */
     public void cautions(final List<String> cautions, final Path where) {
-        if (verbosity == Verbosity.QUIET) {
-            if (!cautions.isEmpty()) {
-                err.println("warning: " + cautions.size() + " cautions apply to these results; see " + where);
-            }
-            return;
+        if (!cautions.isEmpty()) {
+            info("cautions: " + cautions.size() + " on model assumptions and data limits, in " + where);
         }
-        cautions.forEach(this::warn);
     }
 
     /**
