@@ -149,6 +149,8 @@ public class SurveyCommand extends RunCommand {
                     "a number from 0 to 1");
         }
         context.input(catalogue, "catalogue");
+        disk = workingCopy(PresetCatalogue.Kind.DISK, disk);
+        zones = workingCopy(PresetCatalogue.Kind.ZONES, zones);
         if (disk != null && !DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(Path.of(disk))) {
             throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
                     String.join(", ", DiskPresets.NAMES) + ", or a disk file");
@@ -202,5 +204,19 @@ public class SurveyCommand extends RunCommand {
         if (value != null && Files.isRegularFile(Path.of(value))) {
             context.input(Path.of(value), role);
         }
+    }
+
+    /**
+     * @param kind the kind of named input
+     * @param name a preset name, a file or null
+     * @return the working folder's copy of a named preset as a file path (it wins over the built-in
+     *         copy, as for the other commands), else the value unchanged
+     */
+    private static String workingCopy(final PresetCatalogue.Kind kind, final String name) {
+        if (name == null) {
+            return null;
+        }
+        return PresetCatalogue.here().find(kind, name).filter(e -> !e.builtIn()).map(e -> e.file().toString())
+                .orElse(name);
     }
 }
