@@ -56,20 +56,27 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     private final DiskModel disk;
     private final List<FeedingZone> zones;
     private final NavigableMap<Double, LocalCondensation.Local> reference;
-    private final AtomicLong equilibria;
+    private final Counters counters;
+
+    /** Benchmark counters shared by the estimator and the per-star estimators made from it. */
+    private static final class Counters {
+        final AtomicLong equilibria = new AtomicLong();
+        final AtomicLong estimateNanos = new AtomicLong();
+        final AtomicLong firstNanos = new AtomicLong();
+    }
 
     private PlanetSurveyEstimator(PlanetFormation formation, DiskModel disk, List<FeedingZone> zones,
                                   ElementAbundances nominal, NavigableMap<Double, LocalCondensation.Local> start,
-                                  AtomicLong equilibria) {
+                                  Counters counters) {
         this.formation = formation;
         this.disk = disk;
         this.zones = zones;
-        this.equilibria = equilibria;
+        this.counters = counters;
         LocalCondensation ref = formation.localCondensation(nominal, start);
         for (FeedingZone z : zones) {
             formation.zonePlanet(z, disk, ref);
         }
-        equilibria.addAndGet(ref.equilibriaSolved());
+        counters.equilibria.addAndGet(ref.equilibriaSolved());
         this.reference = ref.snapshot();
     }
 
@@ -79,7 +86,7 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
      */
     @Override
     public PlanetEstimator near(ElementAbundances nominal) {
-        return new PlanetSurveyEstimator(formation, disk, zones, nominal, reference, equilibria);
+        return new PlanetSurveyEstimator(formation, disk, zones, nominal, reference, counters);
     }
 
     /**
@@ -95,7 +102,7 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, z, fs);
         PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
-                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+                java.util.Collections.emptyNavigableMap(), new Counters());
     }
 
     /** The disk must stay inside the data's temperatures and the model's pressures where equilibria are computed. */
@@ -132,7 +139,7 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, zones, fs);
         PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
-                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+                java.util.Collections.emptyNavigableMap(), new Counters());
     }
 
     private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {
@@ -152,12 +159,15 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
 
     @Override
     public LinkedHashMap<String, List<Quantity>> estimate(ElementAbundances gas) {
+        long start = System.nanoTime();
         LocalCondensation local = formation.localCondensation(gas, reference);
         LinkedHashMap<String, List<Quantity>> out = new LinkedHashMap<>();
         for (FeedingZone z : zones) {
             out.put(z.name(), quantities(formation.zonePlanet(z, disk, local)));
         }
-        equilibria.addAndGet(local.equilibriaSolved());
+        counters.equilibria.addAndGet(local.equilibriaSolved());
+        counters.firstNanos.addAndGet(local.firstSolveNanos());
+        counters.estimateNanos.addAndGet(System.nanoTime() - start);
         return out;
     }
 
@@ -205,7 +215,17 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
 
     @Override
     public long equilibria() {
-        return equilibria.get();
+        return counters.equilibria.get();
+    }
+
+    @Override
+    public long estimateNanos() {
+        return counters.estimateNanos.get();
+    }
+
+    @Override
+    public long firstEquilibriumNanos() {
+        return counters.firstNanos.get();
     }
 
     /** @return the zones */

@@ -29,6 +29,7 @@ public final class LocalCondensation {
     private final TreeMap<Double, Local> cache = new TreeMap<>();
     private final NavigableMap<Double, Local> reference;
     private int solved;
+    private long firstSolveNanos;
 
     /**
      * The local state at one radius.
@@ -85,6 +86,11 @@ public final class LocalCondensation {
         return solved;
     }
 
+    /** @return wall time of the first equilibrium this instance solved [ns] (0 before it) */
+    public long firstSolveNanos() {
+        return firstSolveNanos;
+    }
+
     /**
      * @param s the disk state at r
      * @return the local condensation (cached by r for one disk: a state of another disk at a cached
@@ -100,7 +106,11 @@ public final class LocalCondensation {
         }
         double tEq = Math.max(s.temperatureK(), floorK);
         EquilibriumProblem pr = new EquilibriumProblem(system, tEq, s.pressureBar(), totalsPerGram);
+        long start = solved == 0 ? System.nanoTime() : 0;
         EquilibriumResult r = solver.solve(pr, warmStart(s.rAU(), tEq));
+        if (solved == 0) {
+            firstSolveNanos = System.nanoTime() - start;
+        }
         solved++;
         double ice = 0;
         if (s.temperatureK() < floorK && waterIndex >= 0) {
