@@ -158,7 +158,12 @@ final class PhaseSelection {
     /**
      * A phase whose addition made the Newton system fail is often nearly dependent on a present
      * phase (a solution taking over from its pure end-member at a polymorph change): tries to
-     * replace each of the most similar present phases by it, keeping the first state that converges.
+     * replace each of the most similar present phases by it. The swap that the reaction really makes
+     * removes the phase it exhausts, so the first swap that converges with every pure amount
+     * non-negative is kept; failing that, the first that converges (the next steps then drop the
+     * negative phase). Taking the most similar phase regardless can remove a phase that stays
+     * stable (diopside when titanite replaces rutile beside orthopyroxene), and the assemblage
+     * left after the negative one is dropped may have no Newton solution.
      *
      * @return true if a swap succeeded (it then holds the new state)
      */
@@ -171,7 +176,8 @@ final class PhaseSelection {
             sim[q] = cosine(target, dominantStoichiometry(backup.active[q], backup.lambda));
         }
         Arrays.sort(order, (a, b) -> Double.compare(sim[b], sim[a]));
-        for (int i = 0; i < Math.min(3, order.length); i++) {
+        Iterate fallback = null;
+        for (int i = 0; i < Math.min(SWAP_TRIALS, order.length); i++) {
             if (sim[order[i]] <= 0) {
                 break;
             }
@@ -179,12 +185,24 @@ final class PhaseSelection {
             trial.remove(order[i]);
             trial.add(cand, sys.phaseKind(cand) == PhaseKind.SOLUTION ? NewtonKernel.START_LN : 0.0);
             if (kernel.converge(trial) && kernel.vanishing(trial) < 0) {
-                restore(trial, it);
-                return true;
+                if (mostNegative(trial) < 0) {
+                    restore(trial, it);
+                    return true;
+                }
+                if (fallback == null) {
+                    fallback = trial;
+                }
             }
+        }
+        if (fallback != null) {
+            restore(fallback, it);
+            return true;
         }
         return false;
     }
+
+    /** How many of the most similar present phases {@link #swapIn} tries to replace. */
+    private static final int SWAP_TRIALS = 3;
 
     private double[] dominantStoichiometry(int p, double[] lambda) {
         PhaseDef ph = sys.phase(p);

@@ -1,5 +1,6 @@
 package org.nebulith.equilibrium;
 
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -24,13 +25,36 @@ class StressSeriesTest {
     static final long SEED = 20261201L;
 
     /**
-     * States of the CI series known to fail (listed in the contributors' guide, "Known limits of the
-     * solver"): state 540 (272.9 K, 4.1e-3 bar, all solutions, cold) fails since the solutions gained
-     * Mn, K and Cr end-members; the polish of the interior-point path does not converge there. The
-     * test still requires every other state, and that each listed state still fails (so that the
-     * list is emptied when it is fixed).
+     * States of the CI series known to fail, each listed in the contributors' guide ("Known limits of
+     * the solver"); none at present. The test requires every other state, and that each listed state
+     * still fails (so that the list is emptied when it is fixed).
      */
-    static final java.util.Set<Long> KNOWN_FAILURES = java.util.Set.of(540L);
+    static final java.util.Set<Long> KNOWN_FAILURES = java.util.Set.of();
+
+    /**
+     * State 540 of the CI series (272.9 K, 4.1e-3 bar, C/O 1.6) failed from a cold start with all
+     * solutions: titanite became supersaturated beside diopside, rutile and orthopyroxene, and the
+     * phase selection swapped out diopside (the most similar phase) instead of rutile (the phase the
+     * reaction exhausts), which left an assemblage with no Newton solution. It must now converge in
+     * both modes, cold, warm from its neighbour and for its neighbour warm from it, and pass the
+     * independent check each time.
+     */
+    @Test
+    void stateFiveHundredFortyConvergesColdAndWarmInBothModes() {
+        StressStates gen = new StressStates(SEED);
+        StressState s = gen.state(540);
+        StressState nb = gen.neighbour(s);
+        Worker w = new Worker();
+        for (int mode = 0; mode < 2; mode++) {
+            StressSolve solve = w.solves[mode];
+            IndependentCheck check = w.checks[mode];
+            EquilibriumResult cold = new EquilibriumSolver().solve(solve.problem(s));
+            assertNull(check.check(cold).failure(), "cold, pure only " + solve.pureOnly());
+            EquilibriumResult nbCold = new EquilibriumSolver().solve(solve.problem(nb));
+            assertNull(check.check(solve.warmResult(s, nbCold)).failure(), "warm, pure only " + solve.pureOnly());
+            assertNull(check.check(solve.warmResult(nb, cold)).failure(), "neighbour warm, pure only " + solve.pureOnly());
+        }
+    }
 
     @Test
     void twoThousandStatesConvergeAndPassTheIndependentCheck() {
