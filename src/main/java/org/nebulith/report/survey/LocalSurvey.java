@@ -183,57 +183,66 @@ public final class LocalSurvey {
         Counter counter = new Counter();
         counter.runDraws = check.goodRows() * request.settings().draws();
         boolean finished = false;
-        try (Progress bar = progress.apply(check.goodRows() * request.settings().draws());
-             CatalogueReader reader = CatalogueReader.open(request.catalogue());
-             BufferedWriter starsOut = writer(starsPartial, run.target().resolve(StarsTable.FILE))) {
-            StarsTable stars = new StarsTable(starsOut, check.bad(), reasons, request.settings().solar());
-            Iterator<StarRow> rows = goodRows(reader, check.bad());
-            OutputSink sink = new OutputSink(writer(writing, run.target().resolve(SurveyCsv.FILE)),
-                    writer(failuresWriting, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
-            try {
-                sink.header();
-                if (source != null) {
-                    Path oldFailures = source.equals(partial) ? failuresPartial
-                            : request.folder().resolve(SurveyFailures.FILE);
-                    try (ExistingSurvey existing = ExistingSurvey.open(source);
-                         ExistingFailures old = ExistingFailures.open(oldFailures)) {
-                        counter.resumed = SurveyResume.copyDone(existing, old, rows, request.settings(), estimators,
-                                bar, sink);
-                    }
-                    sink.close();
-                    Files.move(writing, partial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-                    Files.move(failuresWriting, failuresPartial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-                    sink = new OutputSink(appender(partial, run.target().resolve(SurveyCsv.FILE)),
-                            appender(failuresPartial, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
-                }
-                SurveyRunner.Summary s = SurveyRunner.run(rows, request.settings(), estimators, request.threads(),
-                        bar, sink);
-                counter.draws = s.draws();
-            } finally {
-                sink.close();
-            }
-            stars.finish();
-            finished = true;
-        } finally {
-            if (!finished) {
-                Files.deleteIfExists(starsPartial);
-                Files.deleteIfExists(folder.resolve(NEXT));
-                Files.deleteIfExists(folder.resolve(FAILURES_NEXT));
-            }
-        }
         long skipped = check.bad().size();
-        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed, counter.failedDraws,
-                counter.runDraws);
-        run.writeText(NOTES, notes);
-        rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
-        byte[] png = SurveyChart.write(partial, run);
-        SurveyReport.write(run, notes, png, run.file(StarsTable.FILE), inputs);
-        rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));
-        rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
+        try (Progress bar = progress.apply(check.goodRows() * request.settings().draws() + REPORT_STEPS)) {
+            try (CatalogueReader reader = CatalogueReader.open(request.catalogue());
+                 BufferedWriter starsOut = writer(starsPartial, run.target().resolve(StarsTable.FILE))) {
+                StarsTable stars = new StarsTable(starsOut, check.bad(), reasons, request.settings().solar());
+                Iterator<StarRow> rows = goodRows(reader, check.bad());
+                OutputSink sink = new OutputSink(writer(writing, run.target().resolve(SurveyCsv.FILE)),
+                        writer(failuresWriting, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
+                try {
+                    sink.header();
+                    if (source != null) {
+                        Path oldFailures = source.equals(partial) ? failuresPartial
+                                : request.folder().resolve(SurveyFailures.FILE);
+                        try (ExistingSurvey existing = ExistingSurvey.open(source);
+                             ExistingFailures old = ExistingFailures.open(oldFailures)) {
+                            counter.resumed = SurveyResume.copyDone(existing, old, rows, request.settings(), estimators,
+                                    bar, sink);
+                        }
+                        sink.close();
+                        Files.move(writing, partial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                        Files.move(failuresWriting, failuresPartial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                        sink = new OutputSink(appender(partial, run.target().resolve(SurveyCsv.FILE)),
+                                appender(failuresPartial, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
+                    }
+                    SurveyRunner.Summary s = SurveyRunner.run(rows, request.settings(), estimators, request.threads(),
+                            bar, sink);
+                    counter.draws = s.draws();
+                } finally {
+                    sink.close();
+                }
+                stars.finish();
+                finished = true;
+            } finally {
+                if (!finished) {
+                    Files.deleteIfExists(starsPartial);
+                    Files.deleteIfExists(folder.resolve(NEXT));
+                    Files.deleteIfExists(folder.resolve(FAILURES_NEXT));
+                }
+            }
+            String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed, counter.failedDraws,
+                    counter.runDraws);
+            run.writeText(NOTES, notes);
+            rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
+            byte[] png = SurveyChart.write(partial, run);
+            SurveyReport.write(run, notes, png, run.file(StarsTable.FILE), inputs);
+            rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));
+            rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
+            bar.advance(REPORT_STEPS);
+        }
         Path done = run.commit();
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, counter.failedDraws,
                 counter.runDraws, done.resolve(SurveyCsv.FILE));
     }
+
+    /**
+     * Weight of the tables, chart and report written at the end, in draws, so that the progress
+     * display's time estimate includes them (about 1-2 s, some 50 draws of 20-40 ms on this kind of
+     * machine).
+     */
+    static final long REPORT_STEPS = 50;
 
     /** Most draws per star (memory: about 500 bytes a draw per star in flight). */
     public static final int MAX_DRAWS = 100_000;
