@@ -65,15 +65,7 @@ final class ExistingFailures implements Closeable {
     }
 
     private String readLine() throws IOException {
-        StringBuilder line = new StringBuilder(96);
-        int c;
-        while ((c = in.read()) >= 0) {
-            line.append((char) c);
-            if (c == '\n') {
-                return line.toString();
-            }
-        }
-        return null;
+        return ExistingSurvey.terminatedLine(in);
     }
 
     @Override

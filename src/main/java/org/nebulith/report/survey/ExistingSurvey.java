@@ -87,8 +87,16 @@ final class ExistingSurvey implements Closeable {
         return new Block(star, text.toString(), false);
     }
 
-    /** @return the next line with its '\n', or null at the end or for a final line without one */
     private String readLine() throws IOException {
+        return terminatedLine(in);
+    }
+
+    /**
+     * @param in a reader of a table written by this tool
+     * @return the next line with its '\n', or null at the end or for a final line without one (a
+     *         line cut by an interruption)
+     */
+    static String terminatedLine(final java.io.Reader in) throws IOException {
         StringBuilder line = new StringBuilder(96);
         int c;
         while ((c = in.read()) >= 0) {
