@@ -199,6 +199,20 @@ final class NewtonKernel {
     }
 
     /**
+     * Consecutive steps cut below {@link #STALL_STEP} by the line search, each reducing 0.5 |r|^2 by
+     * less than a factor {@link #STALL_DECREASE}, after which the iteration is abandoned as stalled:
+     * the Newton system of an assemblage without a solution (a pure phase beside a solution whose
+     * end-members combine to its formula, or an element left without a carrier) creeps with steps
+     * of 1e-5 and would spend the whole iteration limit, with a dozen line-search trials each, before
+     * the phase selection could swap or drop a phase.
+     */
+    static final int STALL_ITERATIONS = 4;
+    /** Step fraction below which a Newton step counts towards a stall. */
+    static final double STALL_STEP = 1e-2;
+    /** Reduction of 0.5 |r|^2 per step above which a step counts towards a stall. */
+    static final double STALL_DECREASE = 0.9;
+
+    /**
      * Iterates to convergence from it (modified in place).
      *
      * @return true when converged within the options' tolerances
@@ -211,6 +225,7 @@ final class NewtonKernel {
         double[][] jacTrial = new double[n][n];
         double[] d = new double[n];
         double f = evaluate(it, r, jac);
+        int stalled = 0;
         for (int iter = 0; iter < opt.maxNewtonIterations(); iter++) {
             if (converged(r, n)) {
                 return true;
@@ -225,9 +240,12 @@ final class NewtonKernel {
             double alpha = stepLimit(d, it);
             Iterate trial = null;
             double fTrial = Double.POSITIVE_INFINITY;
-            for (int ls = 0; ls < 40; ls++) {
+            int ls = 0;
+            for (; ls < 40; ls++) {
                 trial = step(it, d, alpha);
-                fTrial = evaluate(trial, rTrial, jacTrial);
+                // the first trial usually passes and gets its Jacobian with the residual; shorter
+                // trials get the residual only, and the accepted one its Jacobian afterwards
+                fTrial = evaluate(trial, rTrial, ls == 0 ? jacTrial : null);
                 if (fTrial <= (1 - 1e-4 * alpha) * f || fTrial < 1e-28) {
                     break;
                 }
@@ -236,6 +254,14 @@ final class NewtonKernel {
             if (!(fTrial < f) && !(fTrial < 1e-28)) {
                 evaluate(it, r, jac);
                 return converged(r, n);
+            }
+            if (ls > 0) {
+                fTrial = evaluate(trial, rTrial, jacTrial);
+            }
+            stalled = alpha < STALL_STEP && fTrial > STALL_DECREASE * f ? stalled + 1 : 0;
+            if (stalled >= STALL_ITERATIONS) {
+                copyInto(trial, it);
+                return false;
             }
             copyInto(trial, it);
             if (vanishing(it) >= 0) {

@@ -78,4 +78,44 @@ public final class WarmStart {
         }
         return new WarmStart(a, last.problem());
     }
+
+    /**
+     * A start for {@code from}'s composition at the state of {@code refTo}, made by carrying over
+     * the change that another composition of the same system makes between two states:
+     * mu = mu(from) + mu(refTo) - mu(refFrom) for the chemical potentials mu = lambda RT, and the same
+     * difference for ln N_gas and for the amounts of the phases present in all three (a negative pure
+     * amount keeps {@code from}'s value). The active phases are {@code from}'s: the composition
+     * follows its own assemblage, the reference path supplies the change with temperature and
+     * pressure.
+     *
+     * @param from    a solved state of the composition to continue
+     * @param refFrom the reference composition at {@code from}'s temperature and pressure
+     * @param refTo   the reference composition at the state to solve
+     * @return the start (its origin is {@code from}: a continuation falls back to a path from there)
+     */
+    public static WarmStart transported(EquilibriumResult from, EquilibriumResult refFrom, EquilibriumResult refTo) {
+        if (from.system() != refFrom.system() || from.system() != refTo.system()) {
+            return of(from);
+        }
+        double t = from.problem().temperatureK();
+        double t0 = refFrom.problem().temperatureK();
+        double t1 = refTo.problem().temperatureK();
+        Iterate a = from.iterate.copy();
+        Iterate r0 = refFrom.iterate;
+        Iterate r1 = refTo.iterate;
+        for (int j = 0; j < a.lambda.length; j++) {
+            a.lambda[j] = (a.lambda[j] * t + r1.lambda[j] * t1 - r0.lambda[j] * t0) / t1;
+        }
+        a.lnGas += r1.lnGas - r0.lnGas;
+        for (int q = 0; q < a.active.length; q++) {
+            int q0 = r0.indexOf(a.active[q]);
+            int q1 = r1.indexOf(a.active[q]);
+            if (q0 >= 0 && q1 >= 0) {
+                double v = a.u[q] + r1.u[q1] - r0.u[q0];
+                boolean logAmount = from.system().phaseKind(a.active[q]) == PhaseKind.SOLUTION;
+                a.u[q] = logAmount || v > 0 ? v : a.u[q];
+            }
+        }
+        return new WarmStart(a, from.problem());
+    }
 }

@@ -135,6 +135,12 @@ public final class LocalCondensation {
      * one side; falls back to the nearest state (own or reference); null (cold start) if none.
      */
     private WarmStart warmStart(double r, double tEq) {
+        if (cache.size() == 1) {
+            WarmStart carried = carried(cache.firstEntry().getValue(), r, tEq);
+            if (carried != null) {
+                return carried;
+            }
+        }
         if (cache.size() >= 2) {
             Map.Entry<Double, Local> lo = cache.lowerEntry(r);
             Map.Entry<Double, Local> hi = cache.higherEntry(r);
@@ -154,6 +160,22 @@ public final class LocalCondensation {
         }
         Local near = nearest(r);
         return near == null ? null : WarmStart.of(near.result());
+    }
+
+    /**
+     * The second radius of this composition, from its first: that state plus the change of the
+     * reference composition between the two radii ({@link WarmStart#transported}), if the reference
+     * holds both. Without it the start would be the first state as is, ten kelvin or more away,
+     * which costs several times the Newton steps of the later radii.
+     */
+    private WarmStart carried(Local own, double r, double tEq) {
+        Local refFrom = reference.get(own.state().rAU());
+        Local refTo = reference.get(r);
+        if (refFrom == null || refTo == null || refTo.equilibriumK() != tEq || refFrom.equilibriumK() != own.equilibriumK()
+                || refFrom.state().pressureBar() != own.state().pressureBar()) {
+            return null;
+        }
+        return WarmStart.transported(own.result(), refFrom.result(), refTo.result());
     }
 
     private Local nearest(double r) {
