@@ -20,12 +20,15 @@ final class StateData {
     /** largest amount of phase p that the element totals allow [mol] (scale of its amount variable) */
     final double[] scale;
     final int excludedGas;
+    /** the data that depend on T and P only (shared) */
+    final Thermal thermal;
 
     StateData(EquilibriumProblem problem) {
         this.system = problem.system();
         this.tK = problem.temperatureK();
         this.lnP = Math.log(problem.pressureBar());
         Thermal th = system.thermal(tK, problem.pressureBar());
+        thermal = th;
         c = th.c;
         chosen = th.chosen;
         available = th.available;
@@ -50,6 +53,10 @@ final class StateData {
         final Species[][] chosen;
         final boolean[] available;
         int excludedGas;
+        /** id of the species chosen for each member, null where none is valid (shared by results) */
+        final String[][] memberSpecies;
+        /** a zero amount for every member of each phase (shared by results for absent phases) */
+        final double[][] zeroMoles;
 
         /**
          * @param system the system
@@ -62,8 +69,15 @@ final class StateData {
             c = new double[np][];
             chosen = new Species[np][];
             available = new boolean[np];
+            memberSpecies = new String[np][];
+            zeroMoles = new double[np][];
             for (int p = 0; p < np; p++) {
                 evaluatePhase(system.phase(p), p, tK, lnP);
+                memberSpecies[p] = new String[chosen[p].length];
+                for (int k = 0; k < chosen[p].length; k++) {
+                    memberSpecies[p][k] = chosen[p][k] == null ? null : chosen[p][k].id();
+                }
+                zeroMoles[p] = new double[chosen[p].length];
             }
         }
 
