@@ -32,7 +32,7 @@ final class NewtonKernel {
      * adds nothing measurable to the Jacobian (its entries would be 1e-22 of the diagonal), so only
      * its residual contribution is kept: this skips most of the hundreds of trace gases per step.
      */
-    private static final double NEGLIGIBLE = 1e-22;
+    static final double NEGLIGIBLE = 1e-22;
     private final double[] gasJacobianFloor;
     /** mole fractions (not normalised) of the mixture members from the latest evaluation */
     final double[][] lastX;
@@ -46,15 +46,7 @@ final class NewtonKernel {
         this.m = sys.elementCount();
         this.opt = opt;
         this.lastX = new double[sys.phaseCount()][];
-        PhaseDef gas = sys.phase(0);
-        this.gasJacobianFloor = new double[gas.members.length];
-        for (int k = 0; k < gasJacobianFloor.length; k++) {
-            double bmin = Double.POSITIVE_INFINITY;
-            for (int j : gas.members[k].nzIndex) {
-                bmin = Math.min(bmin, totals[j]);
-            }
-            gasJacobianFloor[k] = NEGLIGIBLE * bmin;
-        }
+        this.gasJacobianFloor = st.gasJacobianFloor;
     }
 
     /** Mole fraction of member k of phase p (not normalised). */

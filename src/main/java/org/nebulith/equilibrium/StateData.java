@@ -17,8 +17,10 @@ final class StateData {
     final double[][] c;
     final Species[][] chosen;
     final boolean[] available;
-    /** largest amount of phase p that the element totals allow [mol] (scale of its amount variable) */
+    /** largest amount of phase p that the element totals allow [mol] (scale of its amount variable; 1 for the gas) */
     final double[] scale;
+    /** moles of each gas species below which it is left out of the Jacobian ({@link NewtonKernel}) */
+    final double[] gasJacobianFloor;
     final int excludedGas;
     /** the data that depend on T and P only (shared) */
     final Thermal thermal;
@@ -35,7 +37,8 @@ final class StateData {
         excludedGas = th.excludedGas;
         int np = system.phaseCount();
         scale = new double[np];
-        for (int p = 0; p < np; p++) {
+        scale[0] = 1.0; // the gas amount is ln N_gas, never scaled
+        for (int p = 1; p < np; p++) {
             PhaseDef ph = system.phase(p);
             double sc = 0;
             for (int k = 0; k < ph.members.length; k++) {
@@ -44,6 +47,15 @@ final class StateData {
                 }
             }
             scale[p] = sc > 0 ? sc : 1.0;
+        }
+        PhaseDef gas = system.phase(0);
+        gasJacobianFloor = new double[gas.members.length];
+        for (int k = 0; k < gasJacobianFloor.length; k++) {
+            double bmin = Double.POSITIVE_INFINITY;
+            for (int j : gas.members[k].nzIndex) {
+                bmin = Math.min(bmin, problem.total(j));
+            }
+            gasJacobianFloor[k] = NewtonKernel.NEGLIGIBLE * bmin;
         }
     }
 
