@@ -49,7 +49,11 @@ final class LinearSystem {
             }
             for (int i = col + 1; i < n; i++) {
                 double[] rowi = a[i];
-                double f = rowi[col] / d;
+                double v = rowi[col];
+                if (v == 0) {
+                    continue;
+                }
+                double f = v / d;
                 if (f != 0) {
                     for (int t = 0; t < count; t++) {
                         int k = nz[t];
