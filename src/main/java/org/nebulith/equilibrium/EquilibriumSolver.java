@@ -131,8 +131,7 @@ public final class EquilibriumSolver {
         StateData st = new StateData(problem);
         Iterate it = adapt(start.iterate.copy(), st);
         boolean sameTotals = java.util.Arrays.equals(start.fromTotals, problem.totals());
-        Attempt a = attempt(problem, st, it, sameTotals ? PhaseSelection.ITERATION_BUDGET
-                : PhaseSelection.OTHER_COMPOSITION_BUDGET);
+        Attempt a = attempt(problem, st, it, !sameTotals);
         if (a.result != null) {
             return a.result;
         }
@@ -204,13 +203,17 @@ public final class EquilibriumSolver {
     }
 
     private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it) {
-        return attempt(problem, st, it, PhaseSelection.ITERATION_BUDGET);
+        return attempt(problem, st, it, false);
     }
 
-    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it, int budget) {
+    /** @param otherComposition the start comes from another composition ({@link PhaseSelection#forOtherComposition}) */
+    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it, boolean otherComposition) {
         Attempt a = new Attempt();
         NewtonKernel kernel = new NewtonKernel(st, problem.totals(), options);
-        PhaseSelection sel = new PhaseSelection(st, kernel, options).withBudget(budget);
+        PhaseSelection sel = new PhaseSelection(st, kernel, options);
+        if (otherComposition) {
+            sel.forOtherComposition();
+        }
         String failure = sel.run(it);
         a.iterations = kernel.iterations;
         a.iterate = it;
