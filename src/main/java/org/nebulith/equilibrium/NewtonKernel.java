@@ -152,27 +152,40 @@ final class NewtonKernel {
             xs = new double[ph.members.length];
             lastX[p] = xs;
         }
-        for (int k = 0; k < ph.members.length; k++) {
-            double xk = x(p, k, lambda);
+        double[] cs = st.c[p];
+        int[] start = ph.start;
+        int[] idx = ph.index;
+        double[] cnt = ph.count;
+        double[] mult = ph.multiplicity;
+        for (int k = 0; k < xs.length; k++) {
+            double c = cs[k];
+            if (c == Double.POSITIVE_INFINITY) {
+                xs[k] = 0;
+                continue;
+            }
+            int from = start[k];
+            int to = start[k + 1];
+            double dot = 0;
+            for (int a = from; a < to; a++) {
+                dot += cnt[a] * lambda[idx[a]];
+            }
+            double xk = Math.exp(Math.min((dot - c) / mult[k], MAX_EXP));
             xs[k] = xk;
             if (xk == 0) {
                 continue;
             }
             sum += xk;
-            Constituent mem = ph.members[k];
             double nk = n * xk;
-            int[] idx = mem.nzIndex;
-            double[] cnt = mem.nzCount;
-            double invM = 1.0 / mem.multiplicity;
+            double invM = 1.0 / mult[k];
             boolean negligible = p == 0 && nk < gasJacobianFloor[k];
-            for (int a = 0; a < idx.length; a++) {
+            for (int a = from; a < to; a++) {
                 int j = idx[a];
                 r[j] += nk * cnt[a];
                 if (jac != null && !negligible) {
                     double w = nk * cnt[a] * invM;
                     double[] rowj = jac[j];
-                    for (int c = 0; c < idx.length; c++) {
-                        rowj[idx[c]] += w * cnt[c];
+                    for (int b = from; b < to; b++) {
+                        rowj[idx[b]] += w * cnt[b];
                     }
                     rowj[amountCol] += colScale * xk * cnt[a];
                     grad[j] += xk * cnt[a] * invM;
