@@ -229,6 +229,8 @@ final class NewtonKernel {
         double[][] jac = new double[n][n];
         double[][] jacTrial = new double[n][n];
         double[] d = new double[n];
+        // the trial point reuses two buffers, swapped with the iterate's arrays when it is accepted
+        Iterate trial = new Iterate(new double[m], 0, it.active, new double[it.u.length]);
         double f = evaluate(it, r, jac);
         int stalled = 0;
         for (int iter = 0; iter < opt.maxNewtonIterations(); iter++) {
@@ -243,11 +245,10 @@ final class NewtonKernel {
             }
             iterations++;
             double alpha = stepLimit(d, it);
-            Iterate trial = null;
             double fTrial = Double.POSITIVE_INFINITY;
             int ls = 0;
             for (; ls < 40; ls++) {
-                trial = step(it, d, alpha);
+                step(it, d, alpha, trial);
                 // the first trial usually passes and gets its Jacobian with the residual; shorter
                 // trials get the residual only, and the accepted one its Jacobian afterwards
                 fTrial = evaluate(trial, rTrial, ls == 0 ? jacTrial : null);
@@ -323,21 +324,25 @@ final class NewtonKernel {
         return big > opt.maxPotentialStep() ? opt.maxPotentialStep() / big : 1.0;
     }
 
-    private Iterate step(Iterate it, double[] d, double alpha) {
-        Iterate t = it.copy();
+    /** Writes it + alpha d into t (same active phases). */
+    private void step(Iterate it, double[] d, double alpha, Iterate t) {
         for (int j = 0; j < m; j++) {
-            t.lambda[j] += alpha * d[j];
+            t.lambda[j] = it.lambda[j] + alpha * d[j];
         }
-        t.lnGas += alpha * d[m];
+        t.lnGas = it.lnGas + alpha * d[m];
         for (int q = 0; q < t.u.length; q++) {
-            t.u[q] += alpha * d[m + 1 + q];
+            t.u[q] = it.u[q] + alpha * d[m + 1 + q];
         }
-        return t;
     }
 
+    /** Makes the accepted trial the iterate; the iterate's former arrays become the trial's buffers. */
     private static void copyInto(Iterate from, Iterate to) {
+        double[] l = to.lambda;
         to.lambda = from.lambda;
-        to.lnGas = from.lnGas;
+        from.lambda = l;
+        double[] u = to.u;
         to.u = from.u;
+        from.u = u;
+        to.lnGas = from.lnGas;
     }
 }
