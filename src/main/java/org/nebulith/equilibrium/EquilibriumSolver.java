@@ -118,7 +118,12 @@ public final class EquilibriumSolver {
 
     /**
      * Solves from a warm start; falls back to a cold start if the warm start fails or its result
-     * fails the checks (a warm start can land in a wrong assemblage near a phase boundary).
+     * fails the checks (a warm start can land in a wrong assemblage near a phase boundary). A start
+     * of the same composition (a sequence, the next radius) tries the active-set method, then the
+     * continuation from the start's state, then the interior-point path; a start from another
+     * composition (a survey draw from its star's nominal state) tries a short active-set search
+     * ({@link PhaseSelection#forOtherComposition}), then the interior-point path, then the
+     * continuation in composition.
      *
      * @param problem the state
      * @param start   a start from earlier results of the same system (may be null)
