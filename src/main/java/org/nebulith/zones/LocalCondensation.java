@@ -133,7 +133,7 @@ public final class LocalCondensation {
     /**
      * Interpolates between the cached radii on either side, or extrapolates from the two nearest on
      * one side, corrected by the same interpolation's error on the reference states where they are
-     * at the same radii ({@link WarmStart#corrected}: a tenth fewer Newton steps on survey draws);
+     * at the same radii ({@link WarmStart#corrected}: about 6 % fewer Newton steps on survey draws);
      * the second radius is carried from the first along the reference ({@link #carried}); falls back
      * to the nearest state (own or reference); null (cold start) if none.
      */
