@@ -209,7 +209,8 @@ final class NewtonKernel {
      * the Newton system of an assemblage without a solution (a pure phase beside a solution whose
      * end-members combine to its formula, or an element left without a carrier) creeps with steps
      * of 1e-5 and would spend the whole iteration limit, with a dozen line-search trials each, before
-     * the phase selection could swap or drop a phase.
+     * the phase selection could swap or drop a phase. A stall whose residuals are at the rounding
+     * level ({@link #stalledAtRounding}) counts as converged, as when the line search fails there.
      */
     static final int STALL_ITERATIONS = 4;
     /** Step fraction below which a Newton step counts towards a stall. */
@@ -267,7 +268,8 @@ final class NewtonKernel {
             stalled = alpha < STALL_STEP && fTrial > STALL_DECREASE * f ? stalled + 1 : 0;
             if (stalled >= STALL_ITERATIONS) {
                 copyInto(trial, it);
-                return false;
+                // a creep at the rounding level within the conservation limit is convergence
+                return converged(rTrial, n) || stalledAtRounding();
             }
             copyInto(trial, it);
             if (vanishing(it) >= 0) {
