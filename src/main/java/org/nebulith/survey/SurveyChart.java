@@ -12,10 +12,13 @@ import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
-import org.knowm.xchart.XYChart;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunInputs;
-import org.nebulith.report.chart.ChartFormat;
+import org.nebulith.composition.AbundancePresets;
+import org.nebulith.planet.MolarRatios;
+import org.nebulith.planet.ReferenceBodies;
+import org.nebulith.report.chart.Drawing;
+import org.nebulith.report.chart.SvgWriter;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.chart.SurveyScatter;
@@ -64,12 +67,22 @@ final class SurveyChart {
         if (stars.isEmpty()) {
             return null;
         }
-        XYChart chart = new SurveyScatter(stars, planets, List.of()).chart(ChartSize.COLUMN_TALL);
+        Drawing chart = new SurveyScatter(stars, planets, references()).chart(ChartSize.COLUMN_TALL);
         byte[] png = ChartRenderer.png(chart);
         AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"), out -> ChartRenderer.vector(chart, ChartFormat.SVG, out),
-                true, inputs);
+        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"),
+                out -> out.write(SvgWriter.write(chart).getBytes(StandardCharsets.UTF_8)), true, inputs);
+        AtomicOutput.writeFile(folder.resolve(BASE + ".pdf"), out -> ChartRenderer.pdf(chart, out), true, inputs);
         return png;
+    }
+
+    /** @return the Sun (photosphere, Asplund et al. 2009) and bulk Earth (McDonough 2003) */
+    static List<SurveyScatter.Point> references() {
+        Map<String, Double> sun = MolarRatios.of(AbundancePresets.preset(AbundancePresets.PHOTOSPHERE_ASPLUND2009)
+                .abundances());
+        Map<String, Double> earth = MolarRatios.of(ReferenceBodies.get("bulk-earth").elements());
+        return List.of(SurveyScatter.Point.of("Sun", sun.get("Fe_Si_molar"), sun.get("Mg_Si_molar")),
+                SurveyScatter.Point.of("Earth", earth.get("Fe_Si_molar"), earth.get("Mg_Si_molar")));
     }
 
     private static void flush(String star, Map<String, double[]> zones, List<SurveyScatter.Point> stars,

@@ -8,6 +8,8 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.EnumMap;
 import java.util.Map;
@@ -23,9 +25,17 @@ import javax.imageio.metadata.IIOMetadata;
 import javax.imageio.metadata.IIOMetadataNode;
 import javax.imageio.stream.ImageOutputStream;
 
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.font.PDType0Font;
 import org.knowm.xchart.VectorGraphicsEncoder;
 import org.knowm.xchart.internal.chartpart.Chart;
 import org.nebulith.report.RunFolder;
+
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawer;
 
 /**
  * Renders a chart to PNG (at {@link ChartStyle#PNG_DPI}, with the resolution recorded in the
@@ -49,6 +59,88 @@ public final class ChartRenderer {
      * @param files    the written files by format (paths in the run folder's working copy)
      */
     public record Rendered(String baseName, byte[] png, Map<ChartFormat, Path> files) {
+    }
+
+    /**
+     * Writes {@code baseName.png/.svg/.pdf} (those requested) into a run folder: PNG at
+     * {@link ChartStyle#PNG_DPI}, SVG with live text ({@link SvgWriter}), PDF with the chart font
+     * embedded (subset) and text kept as text.
+     *
+     * @param drawing  the chart
+     * @param run      the open run folder
+     * @param baseName file name without extension (e.g. {@code condensation-curves})
+     * @param formats  formats to write; PNG is always rendered (the report embeds it)
+     * @return what was written
+     */
+    public static Rendered write(final Drawing drawing, final RunFolder run, final String baseName,
+                                 final Set<ChartFormat> formats) {
+        byte[] png = png(drawing);
+        Map<ChartFormat, Path> files = new EnumMap<>(ChartFormat.class);
+        for (ChartFormat format : formats) {
+            String name = baseName + "." + format.extension();
+            Path path = switch (format) {
+                case PNG -> run.write(name, out -> out.write(png));
+                case SVG -> run.write(name, out -> out.write(SvgWriter.write(drawing).getBytes(StandardCharsets.UTF_8)));
+                case PDF -> run.write(name, out -> pdf(drawing, out));
+            };
+            files.put(format, path);
+        }
+        return new Rendered(baseName, png, files);
+    }
+
+    /**
+     * @param drawing the chart
+     * @return PNG bytes at {@link ChartStyle#PNG_DPI}
+     */
+    public static byte[] png(final Drawing drawing) {
+        double scale = ChartStyle.PNG_DPI / POINTS_PER_INCH;
+        int width = (int) Math.round(drawing.widthPt() * scale);
+        int height = (int) Math.round(drawing.heightPt() * scale);
+        BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
+        try {
+            g.setColor(Color.WHITE);
+            g.fillRect(0, 0, width, height);
+            g.scale(scale, scale);
+            Java2dPainter.paint(drawing, g);
+        } finally {
+            g.dispose();
+        }
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            encodePng(image, bytes);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return bytes.toByteArray();
+    }
+
+    /**
+     * One-page PDF of the chart's size, text as text in the embedded (subset) chart font.
+     *
+     * @param drawing the chart
+     * @param out     destination
+     * @throws IOException on failure
+     */
+    public static void pdf(final Drawing drawing, final OutputStream out) throws IOException {
+        try (PDDocument doc = new PDDocument()) {
+            float w = (float) drawing.widthPt();
+            float h = (float) drawing.heightPt();
+            PDPage page = new PDPage(new PDRectangle(w, h));
+            doc.addPage(page);
+            PdfBoxGraphics2D g = new PdfBoxGraphics2D(doc, w, h);
+            PdfBoxGraphics2DFontTextDrawer text = new PdfBoxGraphics2DFontTextDrawer();
+            try (InputStream font = Fonts.open()) {
+                text.registerFont(Fonts.at(1).getFontName(), PDType0Font.load(doc, font, true));
+            }
+            g.setFontTextDrawer(text);
+            Java2dPainter.paint(drawing, g);
+            g.dispose();
+            try (PDPageContentStream content = new PDPageContentStream(doc, page)) {
+                content.drawForm(g.getXFormObject());
+            }
+            doc.save(out);
+        }
     }
 
     /**
@@ -127,6 +219,10 @@ public final class ChartRenderer {
         } finally {
             g.dispose();
         }
+        encodePng(image, out);
+    }
+
+    private static void encodePng(final BufferedImage image, final OutputStream out) throws IOException {
         ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
         try (ImageOutputStream stream = ImageIO.createImageOutputStream(out)) {
             ImageWriteParam param = writer.getDefaultWriteParam();

@@ -1,14 +1,8 @@
 package org.nebulith.report.chart;
 
-import java.util.Locale;
-
-import org.knowm.xchart.XYChart;
-import org.nebulith.format.Decimal;
-
 /**
- * A temperature axis that decreases to the right, as condensation diagrams are read (a gas cools
- * from left to right). XChart 4.0.3 has no reversed axis, so the series are plotted against
- * {@code -T} and the tick labels show {@code T}.
+ * A temperature axis decreasing to the right, as condensation diagrams are read (a gas cools from
+ * left to right), its ends rounded out to 100 K.
  */
 final class TemperatureAxis {
 
@@ -19,40 +13,26 @@ final class TemperatureAxis {
     }
 
     /**
-     * @param temperatureK temperatures [K]
-     * @return the plotted x values, {@code -T}
-     */
-    static double[] plotted(final double[] temperatureK) {
-        double[] x = new double[temperatureK.length];
-        for (int i = 0; i < x.length; i++) {
-            x[i] = -temperatureK[i];
-        }
-        return x;
-    }
-
-    /**
-     * Relabels the ticks of a chart plotted against {@code -T}.
-     *
-     * @param chart        the chart
      * @param temperatureK the plotted temperatures [K]
+     * @return the axis
      */
-    static void relabel(final XYChart chart, final double[] temperatureK) {
+    static Axis of(final double[] temperatureK) {
         double min = Double.POSITIVE_INFINITY;
         double max = Double.NEGATIVE_INFINITY;
         for (double t : temperatureK) {
             min = Math.min(min, t);
             max = Math.max(max, t);
         }
-        // round limits make XChart put its ticks on round temperatures
-        chart.getStyler().setXAxisMin(-Math.ceil(max / 100) * 100).setXAxisMax(-Math.floor(min / 100) * 100);
-        chart.getStyler().setXAxisTickMarkSpacingHint(44);
-        NiceTicks.force(chart, -max, -min);
-        chart.setCustomXAxisTickLabelsFormatter(x -> label(-x));
+        double lo = Math.floor(min / 100) * 100;
+        double hi = Math.ceil(max / 100) * 100;
+        if (hi <= lo) {
+            hi = lo + 100;
+        }
+        return Axis.linear(lo, hi, TITLE).reversed().ticks(7);
     }
 
-    private static String label(final double t) {
-        double rounded = Math.rint(t * 1000) / 1000;
-        return rounded == Math.rint(rounded) ? String.format(Locale.ROOT, "%.0f", rounded)
-                : Decimal.format(rounded);
+    /** @param temperatureK temperatures @return the same values (the axis itself is reversed) */
+    static double[] values(final double[] temperatureK) {
+        return temperatureK.clone();
     }
 }

@@ -1,87 +1,169 @@
 package org.nebulith.report.planet;
 
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
+import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.planet.LocalSolids;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.planet.ZonePlanet;
+import org.nebulith.report.PhaseLabels;
 import org.nebulith.report.chart.BodyComparison;
 import org.nebulith.report.chart.RadialProfile;
+import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
 
 /** The chart data of a planet run: the radial map and the planet comparison. */
 public final class PlanetCharts {
-    private static final List<String> SHOWN = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar", "Al_Si_molar");
+    /** Ratio keys shown in the comparison, in panel order. */
+    static final List<String> SHOWN = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar", "Al_Si_molar");
+    /** Panel titles of the comparison. */
+    static final List<String> TITLES = List.of("Mg/Si [mol/mol]", "Fe/Si [mol/mol]", "Ca/Si [mol/mol]",
+            "Al/Si [mol/mol]", "Core mass fraction");
+    /** Phases whose fronts the radial map labels (display names). */
+    static final Set<String> FRONT_PHASES = Set.of("metal", "olivine", "orthopyroxene", "troilite", "water ice",
+            "plagioclase", "spinel-hercynite", "melilite", "diopside");
+
+    /** Where the reference values of the comparison come from, for the caption. */
+    public static final String REFERENCE_SOURCES = "Sun: photosphere of Asplund et al. (2009, ARA&A 47, 481, Table 1); "
+            + "bulk Earth and its core mass fraction 0.325: McDonough (2003, Treatise on Geochemistry vol. 2); "
+            + "bulk silicate Earth: McDonough & Sun (1995, Chem. Geol. 120, 223); CI chondrites: Palme & O'Neill "
+            + "(2014, Treatise on Geochemistry 2nd ed. vol. 3); Mars core mass fraction 0.217: Wanke & Dreibus "
+            + "(1988, Phil. Trans. R. Soc. A 325, 545), a value recalled, not checked against the paper";
 
     private PlanetCharts() {
     }
 
     /**
      * @param scan    local states, inner first
-     * @param planets the zone planets (shaded)
+     * @param planets the zone planets
+     * @param host    the host star's composition (its Mg/Si and Fe/Si are drawn as lines)
      * @return the radial map
      */
-    public static RadialProfile radialMap(List<LocalCondensation.Local> scan, List<ZonePlanet> planets) {
+    public static RadialProfile radialMap(List<LocalCondensation.Local> scan, List<ZonePlanet> planets,
+                                          ElementAbundances host) {
         int n = scan.size();
         double[] r = new double[n];
+        double[] t = new double[n];
+        double[] p = new double[n];
         double[] f = new double[n];
         double[] mg = new double[n];
         double[] fe = new double[n];
         for (int i = 0; i < n; i++) {
             LocalSolids s = LocalSolids.of(scan.get(i));
             r[i] = scan.get(i).state().rAU();
-            f[i] = s.heavyElementCondensedFraction();
+            t[i] = scan.get(i).state().temperatureK();
+            p[i] = scan.get(i).state().pressureBar();
+            f[i] = Math.min(1, Math.max(0, s.heavyElementCondensedFraction()));
             mg[i] = s.mgSi();
             fe[i] = s.feSi();
         }
         List<RadialProfile.Zone> zones = new ArrayList<>();
         for (ZonePlanet zp : planets) {
-            zones.add(new RadialProfile.Zone(zp.zoneName(), zp.inventory().zone().rInnerAU(),
-                    zp.inventory().zone().rOuterAU()));
+            FeedingZone z = zp.inventory().zone();
+            double[] w = new double[n];
+            for (int i = 0; i < n; i++) {
+                w[i] = z.weight(r[i]);
+            }
+            zones.add(new RadialProfile.Zone(zp.zoneName(), z.rInnerAU(), z.rOuterAU(), w));
         }
-        List<RadialProfile.Front> fronts = new ArrayList<>();
-        for (Map.Entry<String, Double> e : PlanetTables.fronts(scan).entrySet()) {
-            fronts.add(new RadialProfile.Front(e.getKey(), e.getValue()));
+        Map<String, Double> ratios = MolarRatios.of(host);
+        return new RadialProfile(r, t, p, f, mg, fe, orNaN(ratios.get("Mg_Si_molar")), orNaN(ratios.get("Fe_Si_molar")),
+                zones, fronts(scan));
+    }
+
+    /**
+     * Fronts between neighbouring scan radii where a tracked phase appears or disappears (at the
+     * geometric mean of the two radii); a phase already present at the first radius has no front there.
+     *
+     * @param scan local states, inner first
+     * @return the fronts, inner first
+     */
+    static List<RadialProfile.Front> fronts(List<LocalCondensation.Local> scan) {
+        List<RadialProfile.Front> out = new ArrayList<>();
+        Set<String> before = null;
+        for (int i = 0; i < scan.size(); i++) {
+            Set<String> now = tracked(scan.get(i));
+            if (before != null) {
+                double at = Math.sqrt(scan.get(i - 1).state().rAU() * scan.get(i).state().rAU());
+                for (String ph : now) {
+                    if (!before.contains(ph)) {
+                        out.add(new RadialProfile.Front(ph, at, true));
+                    }
+                }
+                for (String ph : before) {
+                    if (!now.contains(ph)) {
+                        out.add(new RadialProfile.Front(ph, at, false));
+                    }
+                }
+            }
+            before = now;
         }
-        return new RadialProfile(r, f, mg, fe, zones, fronts);
+        return out;
+    }
+
+    private static Set<String> tracked(LocalCondensation.Local l) {
+        Set<String> out = new LinkedHashSet<>();
+        for (String n : PlanetTables.phases(l).split(";")) {
+            String name = n.equals("water ice") ? n : PhaseLabels.display(n);
+            if (FRONT_PHASES.contains(name)) {
+                out.add(name);
+            }
+        }
+        return out;
     }
 
     /**
      * @param planets the zone planets
      * @param host    the host star's composition
-     * @return planets beside the host, bulk Earth and CI for the key ratios and the core mass fraction
+     * @param errors  per-zone 16th and 84th percentiles from the Monte Carlo over the host's errors, or null
+     * @return one row per planet, then the host star and the reference bodies, one panel per quantity
      */
-    public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host) {
-        List<String> q = new ArrayList<>(SHOWN);
-        q.add("core_mass_fraction");
+    public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host,
+                                            Map<String, double[][]> errors) {
         List<BodyComparison.Body> bodies = new ArrayList<>();
         for (ZonePlanet zp : planets) {
-            if (zp.planet().hasSolids() && zp.planet().require().hasRock()) {
+            if (zp.planet().hasSolids()) {
                 PlanetComposition c = zp.planet().require();
-                bodies.add(BodyComparison.Body.of(zp.zoneName() + " (predicted)", values(c.molarRatios(), c.coreMassFraction())));
+                double[] v = values(c.molarRatios(), c.hasRock() ? c.coreMassFraction() : Double.NaN);
+                double[][] e = errors == null ? null : errors.get(zp.zoneName());
+                bodies.add(new BodyComparison.Body(zp.zoneName(), BodyComparison.Kind.PLANET, v,
+                        e == null ? null : e[0], e == null ? null : e[1]));
+            } else {
+                bodies.add(BodyComparison.Body.of(zp.zoneName() + " (no solids)", BodyComparison.Kind.PLANET,
+                        values(Map.of(), Double.NaN)));
             }
         }
-        bodies.add(BodyComparison.Body.of("host star", values(MolarRatios.of(host), Double.NaN)));
-        for (String name : List.of("bulk-earth", "ci-chondrite")) {
-            ReferenceBodies.Body b = ReferenceBodies.get(name);
+        bodies.add(BodyComparison.Body.of("host star", BodyComparison.Kind.HOST, values(MolarRatios.of(host), Double.NaN)));
+        ElementAbundances sun = AbundancePresets.preset(AbundancePresets.PHOTOSPHERE_ASPLUND2009).abundances();
+        bodies.add(BodyComparison.Body.of("Sun (photosphere)", BodyComparison.Kind.REFERENCE,
+                values(MolarRatios.of(sun), Double.NaN)));
+        for (String[] ref : new String[][] {{"bulk-earth", "bulk Earth"}, {"bulk-silicate-earth", "bulk silicate Earth"},
+                {"ci-chondrite", "CI chondrites"}, {"mars", "Mars"}}) {
+            ReferenceBodies.Body b = ReferenceBodies.get(ref[0]);
             double cmf = b.coreMassFraction().isPresent() ? b.coreMassFraction().getAsDouble() : Double.NaN;
-            bodies.add(BodyComparison.Body.of(name.replace('-', ' '), values(MolarRatios.of(b.elements()), cmf)));
+            Map<String, Double> ratios = b.elements().isEmpty() ? Map.of() : MolarRatios.of(b.elements());
+            bodies.add(BodyComparison.Body.of(ref[1], BodyComparison.Kind.REFERENCE, values(ratios, cmf)));
         }
-        return new BodyComparison(q, bodies);
+        return new BodyComparison(TITLES, bodies);
     }
 
     private static double[] values(Map<String, Double> ratios, double cmf) {
         double[] v = new double[SHOWN.size() + 1];
         for (int i = 0; i < SHOWN.size(); i++) {
-            Double x = ratios.get(SHOWN.get(i));
-            v[i] = x == null || !(x > 0) ? Double.NaN : x;
+            v[i] = orNaN(ratios.get(SHOWN.get(i)));
         }
-        v[SHOWN.size()] = cmf > 0 ? cmf : Double.NaN;
+        v[SHOWN.size()] = cmf;
         return v;
+    }
+
+    private static double orNaN(Double x) {
+        return x == null || !Double.isFinite(x) ? Double.NaN : x;
     }
 }

@@ -80,10 +80,10 @@ public final class PlanetReportWriter {
         run.writeCsv("zone-phases.csv", phases);
         run.writeCsv("radial-profile.csv", profile);
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
-        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets())
-                .chart(ChartSize.PAGE), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host())
-                .chart(ChartSize.PAGE), run, "planet-comparison", formats);
+        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
+                data.host()).chart(ChartSize.PAGE.widthPt(), 330), run, "radial-map", formats);
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(), null)
+                .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
                 .paragraph("Composition: " + data.composition() + ".")
@@ -95,12 +95,17 @@ public final class PlanetReportWriter {
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
-                .chart(compare, "Molar ratios and core mass fraction of the predicted planets beside the host star, "
-                        + "bulk Earth and CI chondrites (log scale).")
+                .chart(compare, "Molar ratios and core mass fraction of the predicted planets (circles) beside the "
+                        + "host star (star marker and dotted line) and reference bodies, one linear panel per quantity; "
+                        + "n/a: the body has no such value. References: " + PlanetCharts.REFERENCE_SOURCES + ".")
                 .table(comparison, "comparison.csv");
         report.section("Radial structure of the disk")
-                .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
-                        + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
+                .chart(radial, "Top: midplane temperature (left axis) and pressure (right axis, log) of the disk. "
+                        + "Middle: molar Mg/Si and Fe/Si of the local equilibrium solids, host-star ratios dotted, "
+                        + "and the condensed share of the mass of all elements heavier than He (right axis). "
+                        + "Bottom: weight of each feeding zone, normalised to its peak. Dashed verticals: "
+                        + "condensation fronts, '+' where a phase appears and '\u2212' where it disappears "
+                        + "going outwards. Distance on a log scale, limited to the zones plus 30%.")
                 .table(phases, "zone-phases.csv: what each zone collected");
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         CAUTIONS.forEach(report::caution);

@@ -54,9 +54,11 @@ public final class SequenceReport {
         report.section("Condensation temperatures")
                 .keyTable(tables.condensationTemperatures(), SequenceTables.TEMPERATURES
                         + ": 50% condensation temperature, host phase at T50 and onset of each element")
-                .chart(charts.curves(), "Fraction of each element condensed against temperature (cooling to the right).");
+                .chart(charts.curves(), "Fraction of each element condensed (in solids, withdrawn or reacting) against "
+                        + "temperature, cooling to the right; rings mark the 50% condensation temperatures (T50), "
+                        + "markers and line patterns tell the elements apart without colour.");
         report.section("Phases")
-                .chart(charts.assemblage(), "Amount of the most abundant condensed phases against temperature (log scale).")
+                .chart(charts.assemblage(), charts.assemblageCaption())
                 .table(tables.phaseAppearance(), SequenceTables.APPEARANCE + ": appearance and disappearance on cooling");
         meta.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         meta.cautions().forEach(report::caution);

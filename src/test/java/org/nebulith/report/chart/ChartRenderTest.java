@@ -23,16 +23,22 @@ import javax.xml.parsers.DocumentBuilderFactory;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.knowm.xchart.XYChart;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
 import org.w3c.dom.Document;
 
-/** Every chart kind renders headless to valid, non-empty PNG, SVG and PDF files. */
+/**
+ * Every chart kind renders headless to valid PNG, SVG and PDF files: live text in the SVG
+ * ({@code <text>} elements) and the PDF (the chart font embedded, text shown with text operators),
+ * each vector file under {@value #SIZE_LIMIT} bytes.
+ */
 class ChartRenderTest {
 
     private static final byte[] PNG_MAGIC = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
+
+    /** Largest accepted vector file [bytes]. */
+    static final int SIZE_LIMIT = 500_000;
 
     @TempDir
     Path dir;
@@ -41,7 +47,7 @@ class ChartRenderTest {
     void everyChartRendersToValidFilesInEveryFormat() throws Exception {
         Path target = dir.resolve("charts");
         try (RunFolder run = AtomicOutput.openRunFolder(target, false, new RunInputs())) {
-            for (Map.Entry<String, XYChart> e : ChartSamples.all().entrySet()) {
+            for (Map.Entry<String, Drawing> e : ChartSamples.all().entrySet()) {
                 ChartRenderer.write(e.getValue(), run, e.getKey(), EnumSet.allOf(ChartFormat.class));
             }
             run.commit();
@@ -61,9 +67,9 @@ class ChartRenderTest {
         assertArrayEquals(PNG_MAGIC, Arrays.copyOf(bytes, 8), file + " PNG signature");
         BufferedImage image = ImageIO.read(file.toFile());
         assertNotNull(image, file + " decodable");
-        // 3.5 in wide at 300 dpi, from the 252 pt layout width
-        assertEquals(1050, image.getWidth(), file.toString());
-        assertTrue(image.getHeight() > 700, file.toString());
+        // 3.5 in (252 pt) or 7.1 in (511 pt) wide at 300 dpi
+        assertTrue(image.getWidth() == 1050 || image.getWidth() == 2129, file + " width " + image.getWidth());
+        assertTrue(image.getHeight() > 250, file.toString());
     }
 
     private static void checkSvg(final Path file) throws Exception {
@@ -73,6 +79,8 @@ class ChartRenderTest {
         Document svg = factory.newDocumentBuilder().parse(file.toFile());
         assertEquals("svg", svg.getDocumentElement().getLocalName(), file.toString());
         assertTrue(svg.getDocumentElement().getElementsByTagName("*").getLength() > 10, file + " has content");
+        assertTrue(svg.getElementsByTagName("text").getLength() >= 10, file + " keeps its labels as <text>");
+        assertTrue(Files.size(file) < SIZE_LIMIT, file + " under the size limit: " + Files.size(file));
     }
 
     private static void checkPdf(final Path file) throws IOException {
@@ -83,6 +91,22 @@ class ChartRenderTest {
         assertEquals("%PDF-", head, file.toString());
         assertTrue(tail.endsWith("%%EOF"), file + " ends with %%EOF: " + tail);
         assertTrue(bytes.length > 5000, file + " not trivially small");
+        assertTrue(bytes.length < SIZE_LIMIT, file + " under the size limit: " + bytes.length);
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(bytes)) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+            assertTrue(text.strip().length() > 20, file + " has extractable text: " + text);
+            boolean embedded = false;
+            org.apache.pdfbox.pdmodel.PDResources res = doc.getPage(0).getResources();
+            for (org.apache.pdfbox.cos.COSName x : res.getXObjectNames()) {
+                org.apache.pdfbox.pdmodel.graphics.PDXObject o = res.getXObject(x);
+                if (o instanceof org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject form) {
+                    for (org.apache.pdfbox.cos.COSName f : form.getResources().getFontNames()) {
+                        embedded |= form.getResources().getFont(f).isEmbedded();
+                    }
+                }
+            }
+            assertTrue(embedded, file + " embeds its font");
+        }
     }
 
     @Test
@@ -104,20 +128,29 @@ class ChartRenderTest {
     void dataHoldersRefuseBadData() {
         double[] t = {2000, 1500};
         assertThrows(IllegalArgumentException.class,
-                () -> new CondensationCurves(t, List.of(new Curve("Al", new double[] {0.2, 1.5})), ""));
+                () -> new CondensationCurves(t, List.of(new Curve("Al", new double[] {0.2, 1.5})),
+                        new double[] {Double.NaN}, List.of()));
         assertThrows(IllegalArgumentException.class,
-                () -> new CondensationCurves(t, List.of(new Curve("Al", new double[] {0.2, Double.NaN})), ""));
+                () -> new CondensationCurves(t, List.of(new Curve("Al", new double[] {0.2, Double.NaN})),
+                        new double[] {Double.NaN}, List.of()));
         assertThrows(IllegalArgumentException.class,
-                () -> new PhaseAssemblage(t, List.of(new Curve("metal", new double[] {1})), "mol"));
-        assertThrows(IllegalArgumentException.class, () -> new RadialProfile.Zone("b", 1.2, 0.8));
+                () -> new PhaseAssemblage(t, List.of(new Curve("metal", new double[] {1})), "wt%", List.of()));
+        assertThrows(IllegalArgumentException.class, () -> new RadialProfile.Zone("b", 1.2, 0.8, new double[2]));
         assertThrows(IllegalArgumentException.class, () -> SurveyScatter.Point.of("x", Double.NaN, 1));
     }
 
     @Test
+    void eachSeriesIsOnePath() {
+        // 14 invented elements: 14 curve paths, whatever the number of grid points
+        String svg = SvgWriter.write(ChartSamples.condensation().chart(ChartSize.COLUMN_TALL));
+        long strokeWidth1 = svg.lines().filter(l -> l.startsWith("<path") && l.contains("stroke-width=\"1\"")).count();
+        assertEquals(14 + 14, strokeWidth1, "one path per curve and one legend sample per curve");
+    }
+
+    @Test
     void temperatureAxisDecreasesToTheRight() {
-        XYChart chart = ChartSamples.condensation().chart(ChartSize.COLUMN);
-        double[] x = chart.getSeries("Al").getXData();
-        assertEquals(-2000.0, x[0]); // plotted against -T, so the hottest point is leftmost
-        assertTrue(x[1] > x[0]);
+        Axis t = TemperatureAxis.of(ChartSamples.temperatures());
+        assertTrue(t.fraction(2000) < t.fraction(300), "hot at the left");
+        assertEquals(0.0, t.fraction(2000), 1e-12);
     }
 }

@@ -16,7 +16,7 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.knowm.xchart.XYChart;
+import org.nebulith.report.chart.Drawing;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
@@ -59,7 +59,7 @@ class HtmlReportChromiumTest {
                 Instant.parse("2026-01-01T00:00:00Z"));
         try (RunFolder run = AtomicOutput.openRunFolder(target, false, inputs)) {
             Report.Section charts = report.section("Charts");
-            for (Map.Entry<String, XYChart> e : ChartFixtures.all().entrySet()) {
+            for (Map.Entry<String, Drawing> e : ChartFixtures.all().entrySet()) {
                 ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(),
                         EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
                 charts.chart(r, e.getKey().replace('-', ' ') + " (invented demo data)");
