@@ -130,6 +130,16 @@ public final class ChemistryOptions {
         }
     }
 
+    /**
+     * @param context the run
+     * @return the composition's reference for a report: its name and the provenance of its file
+     */
+    public String citeComposition(RunContext context) {
+        AbundanceSet set = baseComposition(context);
+        String text = String.join(" ", set.provenance()).strip();
+        return set.name() + (text.isEmpty() ? "" : ": " + text);
+    }
+
     /** @return a one-line description of the composition options, for reports */
     public String describeComposition() {
         StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : compositionArg());

@@ -26,7 +26,9 @@ import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
 import org.nebulith.report.RunFolder;
+import org.nebulith.report.SourceList;
 import org.nebulith.report.html.Report;
+import org.nebulith.report.planet.PlanetCharts;
 import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.zones.FeedingZone;
@@ -128,10 +130,13 @@ public final class PlanetCommand extends RunCommand {
         try (RunFolder run = context.openRunFolder(runName)) {
             List<Report.Setting> settings = new ArrayList<>();
             context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-            List<Report.Citation> sources = new ArrayList<>();
-            for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
-                sources.add(new Report.Citation(e.getKey(), e.getValue()));
-            }
+            List<Report.Citation> extra = new ArrayList<>();
+            extra.add(new Report.Citation("disk", diskModel.description()));
+            extra.add(new Report.Citation("reference bodies", PlanetCharts.REFERENCE_SOURCES));
+            extra.add(new Report.Citation("Zeng2016", "Zeng L., Sasselov D.D. & Jacobsen S.B. (2016) ApJ 819, 127: "
+                    + "mass-radius relation of rocky planets (radius_Rearth_Zeng2016 in bulk-composition.csv)"));
+            List<Report.Citation> sources = SourceList.of(chemistry.citeComposition(context), spec.species(),
+                    ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
             PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
                     gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);

@@ -121,7 +121,7 @@ public final class SequenceCommand extends RunCommand {
                     compositionLines(context), spec.describe(), describe(path), context.inputs(), cautions, chartsNote)));
             SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
                     context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
-                    reportSettings(context), cautions, sources(), context.inputs()));
+                    reportSettings(context), cautions, sources(context, spec, elements), context.inputs()));
             folder = run.commit();
         }
         printCautions(context, cautions);
@@ -136,11 +136,10 @@ public final class SequenceCommand extends RunCommand {
         return out;
     }
 
-    private static List<org.nebulith.report.html.Report.Citation> sources() {
-        List<org.nebulith.report.html.Report.Citation> out = new java.util.ArrayList<>();
-        org.nebulith.thermo.SpeciesDatabase.bundled().sources().forEach((k, v) ->
-                out.add(new org.nebulith.report.html.Report.Citation(k, v)));
-        return out;
+    private List<org.nebulith.report.html.Report.Citation> sources(RunContext context, SystemSpec spec,
+                                                                   Set<Element> elements) {
+        return org.nebulith.report.SourceList.of(chemistry.citeComposition(context), spec.species(), elements,
+                org.nebulith.thermo.SpeciesDatabase.bundled().sources(), List.of());
     }
 
     private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {

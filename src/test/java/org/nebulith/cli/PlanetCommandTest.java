@@ -80,6 +80,7 @@ class PlanetCommandTest {
             assertEquals(0, page.bad(), "images not decoded");
             assertEquals(0, page.errors(), "errors in the page");
             assertEquals(List.of(), page.console(), "console messages");
+            assertTrue(page.overflow() <= 0, "no horizontal overflow: " + page.overflow() + " px");
         }
         List<CSVRecord> profile = read(outDir.resolve("radial-profile.csv"));
         assertEquals(12, profile.size());

@@ -148,7 +148,7 @@ public final class Axis {
         if (log && (min < 1e-3 || max > 1e5)) {
             return superscriptPower(v);
         }
-        return plain(v, log ? v : linearStep());
+        return plain(v, log ? v / 10 : linearStep());
     }
 
     private List<Double> linearTicks() {

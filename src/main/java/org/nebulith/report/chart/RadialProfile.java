@@ -98,9 +98,11 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
      */
     public Drawing chart(final double widthPt, final double heightPt) {
         Drawing d = new Drawing(widthPt, heightPt);
-        Axis x = Axis.log(range()[0], range()[1], "Distance from the star r [AU]");
-        Axis t = Axis.linear(0, Math.ceil(max(temperatureK) * 1.05 / 100) * 100, "T [K]").ticks(3);
-        Axis p = Axis.log(decadeBelow(min(pressureBar)), decadeAbove(max(pressureBar)), "P [bar]");
+        double[] r = range();
+        Axis x = Axis.log(r[0], r[1], "Distance from the star r [AU]");
+        Axis t = Axis.linear(0, Math.ceil(max(visible(temperatureK, r)) * 1.05 / 100) * 100, "T [K]").ticks(4);
+        Axis p = Axis.log(decadeBelow(min(visible(pressureBar, r))), decadeAbove(max(visible(pressureBar, r))),
+                "P [bar]");
         Axis ratio = Axis.linear(0, ratioTop(), "Molar ratio in solids").ticks(4);
         Axis cond = Axis.linear(0, 1, "Heavy elements condensed").ticks(4);
         Axis weight = Axis.linear(0, 1.5, "Zone weight").ticks(2).labels(v -> v == 0 ? "0" : v == 1 ? "1" : "");
@@ -260,8 +262,21 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         return new double[] {Math.max(first, lo / 1.3), Math.min(last, hi * 1.3)};
     }
 
+    /** @return the values at radii within [r0, r1], NaN elsewhere */
+    private double[] visible(final double[] values, final double[] r) {
+        double[] out = values.clone();
+        for (int i = 0; i < out.length; i++) {
+            if (radiusAU[i] < r[0] || radiusAU[i] > r[1]) {
+                out[i] = Double.NaN;
+            }
+        }
+        return out;
+    }
+
     private double ratioTop() {
-        double top = Math.max(Math.max(max(mgSi), max(feSi)), Math.max(finite(hostMgSi), finite(hostFeSi)));
+        double[] r = range();
+        double top = Math.max(Math.max(max(visible(mgSi, r)), max(visible(feSi, r))),
+                Math.max(finite(hostMgSi), finite(hostFeSi)));
         top = top <= 0 ? 1.0 : top * 1.15;
         return Math.ceil(top * 4) / 4;
     }

@@ -11,6 +11,7 @@ import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
+import org.nebulith.format.Decimal;
 import org.nebulith.report.Table;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
@@ -128,19 +129,24 @@ public final class PlanetReportWriter {
             return zp.zoneName() + ": " + zp.planet().notice() + ".";
         }
         PlanetComposition c = zp.planet().require();
-        StringBuilder sb = new StringBuilder(zp.zoneName()).append(String.format(java.util.Locale.ROOT,
-                ": Mg/Si %.3f, Fe/Si %.3f (molar)", c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar")));
+        StringBuilder sb = new StringBuilder(zp.zoneName()).append(": Mg/Si ")
+                .append(people(c.molarRatios().get("Mg_Si_molar"))).append(", Fe/Si ")
+                .append(people(c.molarRatios().get("Fe_Si_molar"))).append(" (molar)");
         if (c.hasRock()) {
-            sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
+            sb.append(", core mass fraction ").append(Decimal.forPeople(c.coreMassFraction()));
         }
         if (c.oxides() != null && c.oxides().hasMgNumber()) {
-            sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
+            sb.append(", mantle Mg# ").append(Decimal.forPeople(c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
-            sb.append(String.format(java.util.Locale.ROOT, ", ice %.1f wt%%", 100 * c.iceMassFraction()));
+            sb.append(", ice ").append(Decimal.forPeople(100 * c.iceMassFraction())).append(" wt%");
         }
         sb.append('.');
         return sb.toString();
+    }
+
+    private static String people(Double v) {
+        return v == null || !Double.isFinite(v) ? "n/a" : Decimal.forPeople(v);
     }
 
     private static Table keyRows(List<ZonePlanet> planets) {

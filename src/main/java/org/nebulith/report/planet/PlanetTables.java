@@ -14,6 +14,7 @@ import org.nebulith.planet.Quantity;
 import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
+import org.nebulith.report.FormulaText;
 import org.nebulith.report.Table;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;
@@ -111,7 +112,7 @@ public final class PlanetTables {
             for (var p : org.nebulith.planet.PlanetFormation.condensedPhases(inv)) {
                 String[] parts = p.name().split(":", 2);
                 double mass = p.massGrams();
-                t.row(inv.zone().name(), parts[0], parts.length > 1 ? parts[1] : parts[0], p.formula().notation(),
+                t.row(inv.zone().name(), parts[0], parts.length > 1 ? parts[1] : parts[0], FormulaText.conventional(p.formula()),
                         p.moles(), mass, total > 0 ? 100 * mass / total : null, p.kind().name().toLowerCase(java.util.Locale.ROOT));
             }
         }

@@ -4,6 +4,7 @@ import java.time.Instant;
 import java.util.List;
 
 import org.nebulith.condensation.CondensationSequence;
+import org.nebulith.format.Decimal;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
 import org.nebulith.report.html.HtmlReportWriter;
@@ -44,13 +45,14 @@ public final class SequenceReport {
                              SequenceCharts.Charts charts, Meta meta) {
         Report report = new Report("Nebulith condensation sequence", "nebulith sequence", meta.version(), meta.started());
         String mode = seq.settings().isFractional()
-                ? "isolation fraction " + seq.settings().isolation() + " (newly condensed solids removed at each step)"
+                ? "removal fraction " + Decimal.format(seq.settings().isolation()) + " (newly condensed solids removed at each step)"
                 : "equilibrium condensation (all condensates keep reacting)";
         report.section("Scenario")
                 .paragraph("Composition: " + meta.composition() + ".")
                 .paragraph("Chemistry: " + meta.chemistry() + ".")
                 .paragraph("Pressure: " + meta.pressure() + "; " + mode + "; " + seq.steps().size()
-                        + " temperatures from " + seq.settings().tMaxK() + " to " + seq.settings().tMinK() + " K.");
+                        + " temperatures from " + Decimal.format(seq.settings().tMaxK()) + " to "
+                        + Decimal.format(seq.settings().tMinK()) + " K.");
         report.section("Condensation temperatures")
                 .keyTable(tables.condensationTemperatures(), SequenceTables.TEMPERATURES
                         + ": 50% condensation temperature, host phase at T50 and onset of each element")

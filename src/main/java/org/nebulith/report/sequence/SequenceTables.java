@@ -160,11 +160,20 @@ public final class SequenceTables {
                 "condensed_fraction_at_T_min");
         SequenceStep last = seq.steps().get(seq.steps().size() - 1);
         for (ElementCondensation ec : seq.condensationTemperatures()) {
-            t.row(ec.element().symbol(), ec.t50K().isPresent() ? ec.t50K().getAsDouble() : null,
+            t.row(ec.element().symbol(), ec.t50K().isPresent() ? bracket(ec.t50K().getAsDouble()) : null,
                     ec.hostPhase().isEmpty() ? null : ec.hostPhase(),
-                    ec.onsetK().isPresent() ? ec.onsetK().getAsDouble() : null, last.condensedFraction(ec.element()));
+                    ec.onsetK().isPresent() ? bracket(ec.onsetK().getAsDouble()) : null,
+                    last.condensedFraction(ec.element()));
         }
         return t;
+    }
+
+    /**
+     * @param kelvin a temperature found by bisection
+     * @return it rounded to the decimals of the bisection bracket (its resolution)
+     */
+    private double bracket(double kelvin) {
+        return Double.parseDouble(org.nebulith.format.Decimal.toResolution(kelvin, seq.settings().refineK()));
     }
 
     /** @return {@code phase-appearance.csv}, in order of appearance; a phase that returns has two rows */
@@ -172,8 +181,8 @@ public final class SequenceTables {
         Table t = Table.withColumns(APPEARANCE, "phase", "kind", "T_appear_K", "T_disappear_K", "present_at_T_max");
         for (PhaseEvent ev : seq.phaseEvents()) {
             int p = sys.phaseIndex(ev.phase());
-            t.row(ev.phase(), sys.phaseKind(p).name().toLowerCase(java.util.Locale.ROOT), ev.appearK(),
-                    ev.disappearK().isPresent() ? ev.disappearK().getAsDouble() : null, ev.presentAtStart());
+            t.row(ev.phase(), sys.phaseKind(p).name().toLowerCase(java.util.Locale.ROOT), bracket(ev.appearK()),
+                    ev.disappearK().isPresent() ? bracket(ev.disappearK().getAsDouble()) : null, ev.presentAtStart());
         }
         return t;
     }

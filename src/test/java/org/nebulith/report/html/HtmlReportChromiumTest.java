@@ -44,11 +44,13 @@ class HtmlReportChromiumTest {
         writeReport(target, new RunInputs().add(input, "preset"));
 
         String html = Files.readString(target.resolve("report.html"));
-        assertFalse(html.contains("<script"), "the report itself has no script");
+        assertEquals(1, html.split("<script", -1).length - 1, "the report's only script is the table sort");
+        assertTrue(html.contains("script-src 'sha256-"), "the script is allowed by its hash only");
         assertFalse(Pattern.compile("src=\"(?!data:)").matcher(html).find(), "every image is embedded");
         assertTrue(html.contains(RunInputs.sha256(input)), "input checksum listed");
         ChromiumProbe.Result result = ChromiumProbe.open(target.resolve("report.html"), dir);
-        assertEquals(6, result.images(), "images in the page");
+        assertEquals(5, result.images(), "images in the page");
+        assertTrue(result.overflow() <= 0, "no horizontal overflow: " + result.overflow() + " px");
         assertEquals(0, result.bad(), "images not decoded");
         assertEquals(0, result.errors(), "errors raised in the page");
         assertEquals(List.of(), result.console(), "console messages");
