@@ -229,7 +229,7 @@ public final class RunContext {
         }
         if (value instanceof Double || value instanceof Float) {
             double v = ((Number) value).doubleValue();
-            return Double.isFinite(v) ? org.nebulith.format.Decimal.format(v) : String.valueOf(v);
+            return Double.isFinite(v) ? org.nebulith.format.Decimal.shortest(v) : String.valueOf(v);
         }
         return String.valueOf(value);
     }

@@ -195,7 +195,7 @@ public final class SequenceCommand extends RunCommand {
 
     private String describe(final PressurePath path) {
         if (pathFile == null) {
-            return "constant " + Decimal.format(path.pressureBar(tMaxK)) + " bar";
+            return "constant " + Decimal.shortest(path.pressureBar(tMaxK)) + " bar";
         }
         return "P-T path " + pathFile + " (" + path.points() + " points, " + Decimal.format(path.tableMinK()) + " to "
                 + Decimal.format(path.tableMaxK()) + " K; log-linear in P between points, held constant beyond)";

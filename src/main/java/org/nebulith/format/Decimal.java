@@ -133,4 +133,27 @@ public final class Decimal {
         int decimals = Math.max(0, (int) Math.ceil(-Math.log10(resolution) - 1e-9));
         return format(new BigDecimal(value).setScale(decimals, RoundingMode.HALF_EVEN).doubleValue());
     }
+
+    /**
+     * The shortest text of a setting: the round-trip digits of {@link #format}, in plain notation from
+     * 0.001 to below a million, otherwise in whichever of plain or exponent notation is shorter
+     * ({@code 1e-4}, {@code 2000}, {@code 0.05}, {@code 1.5e6}).
+     *
+     * @param value a finite double
+     * @return its shortest text
+     */
+    public static String shortest(final double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("not a finite number: " + value);
+        }
+        if (value == 0.0) {
+            return "0";
+        }
+        BigDecimal digits = shortestDigits(value);
+        int exponent = digits.precision() - digits.scale() - 1;
+        String plain = digits.toPlainString();
+        String sci = scientific(digits, exponent);
+        boolean everyday = exponent >= -3 && exponent < 6;
+        return !everyday && sci.length() < plain.length() ? sci : plain;
+    }
 }
