@@ -89,6 +89,7 @@ public final class LocalSurvey {
      */
     public static Result run(Request request, EstimatorCache estimators, RunInputs inputs, LongFunction<Progress> progress,
                              Log log) throws IOException {
+        java.time.Instant started = java.time.Instant.now();
         CatalogueCheck check = CatalogueCheck.run(request.catalogue(), request.settings(), estimators);
         reportProblems(request, check, log);
         Path folder = request.folder();
@@ -148,7 +149,8 @@ public final class LocalSurvey {
         Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         byte[] png = SurveyChart.write(partial, folder, inputs);
         String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed);
-        SurveyReport.write(folder, notes, png, folder.resolve(StarsTable.FILE), inputs);
+        SurveyReport.write(new SurveyReport.Run(folder, request, started, notes, png, folder.resolve(StarsTable.FILE),
+                partial, inputs));
         Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, survey);
     }

@@ -8,9 +8,9 @@ import java.util.Objects;
 
 /**
  * Survey: molar Mg/Si against Fe/Si for host stars and their predicted planets, with their ranges
- * (16th to 84th percentile) as thin crosses; planets drawn first and translucent, the stars on top
- * as open markers so that both stay visible; labelled reference bodies (the Sun, bulk Earth) as
- * large distinct markers; the legend outside the plot, on the right.
+ * (16th to 84th percentile) as thin crosses; host stars as open rings and planets as smaller dots
+ * drawn over them, so that a planet at its star's position shows as a dot inside a ring; labelled
+ * reference bodies (the Sun, bulk Earth) as large distinct markers; the legend outside the plot.
  *
  * @param stars      the host stars
  * @param planets    the predicted planets
@@ -78,8 +78,8 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
         legend.add(new Legend.Entry("16th-84th pct.", LineStyle.solid(Palette.REFERENCE, 0.5), null, Palette.REFERENCE));
         double[] xr = range(true);
         double[] yr = range(false);
-        Axis x = Axis.linear(xr[0], xr[1], "Fe/Si [mol/mol]").ticks(5);
-        Axis y = Axis.linear(yr[0], yr[1], "Mg/Si [mol/mol]").ticks(5);
+        Axis x = Axis.linear(xr[0], xr[1], "Fe/Si [mol/mol]").ticks(7);
+        Axis y = Axis.linear(yr[0], yr[1], "Mg/Si [mol/mol]").ticks(7);
         double left = ChartStyle.PAD + Panel.yAxisWidth(y);
         double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
         Rectangle2D box = new Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
@@ -88,17 +88,18 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
         Color planetFill = new Color(planetColour.getRed(), planetColour.getGreen(), planetColour.getBlue(), 150);
         Color planetBar = new Color(planetColour.getRed(), planetColour.getGreen(), planetColour.getBlue(), 80);
         Color starBar = new Color(starColour.getRed(), starColour.getGreen(), starColour.getBlue(), 110);
-        for (Point pt : planets) {
-            cross(p, pt, planetBar);
-        }
-        for (Point pt : planets) {
-            p.markerAt(Marker.CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), planetFill, ChartStyle.MARKER_PT - 0.6);
-        }
         for (Point pt : stars) {
             cross(p, pt, starBar);
         }
+        for (Point pt : planets) {
+            cross(p, pt, planetBar);
+        }
         for (Point pt : stars) {
-            p.markerAt(Marker.OPEN_CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), starColour, ChartStyle.MARKER_PT);
+            p.markerAt(Marker.OPEN_CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), starColour, ChartStyle.MARKER_PT + 1.6);
+        }
+        // planets on top, smaller than the star rings: a planet that sits on its star shows as a dot in a ring
+        for (Point pt : planets) {
+            p.markerAt(Marker.CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), planetFill, ChartStyle.MARKER_PT - 1.2);
         }
         for (int i = 0; i < references.size(); i++) {
             Point r = references.get(i);
