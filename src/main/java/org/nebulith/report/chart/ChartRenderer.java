@@ -14,6 +14,7 @@ import java.nio.file.Path;
 import java.util.EnumMap;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
 
 import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
@@ -74,18 +75,39 @@ public final class ChartRenderer {
      */
     public static Rendered write(final Drawing drawing, final RunFolder run, final String baseName,
                                  final Set<ChartFormat> formats) {
-        byte[] png = png(drawing);
+        // the three encodings are independent: computed in parallel, then written one after the other
+        CompletableFuture<byte[]> png = CompletableFuture.supplyAsync(() -> png(drawing));
+        CompletableFuture<byte[]> svg = formats.contains(ChartFormat.SVG)
+                ? CompletableFuture.supplyAsync(() -> SvgWriter.write(drawing).getBytes(StandardCharsets.UTF_8)) : null;
+        CompletableFuture<byte[]> pdf = formats.contains(ChartFormat.PDF)
+                ? CompletableFuture.supplyAsync(() -> pdfBytes(drawing)) : null;
         Map<ChartFormat, Path> files = new EnumMap<>(ChartFormat.class);
         for (ChartFormat format : formats) {
-            String name = baseName + "." + format.extension();
-            Path path = switch (format) {
-                case PNG -> run.write(name, out -> out.write(png));
-                case SVG -> run.write(name, out -> out.write(SvgWriter.write(drawing).getBytes(StandardCharsets.UTF_8)));
-                case PDF -> run.write(name, out -> pdf(drawing, out));
-            };
-            files.put(format, path);
+            byte[] bytes = join(format == ChartFormat.PNG ? png : format == ChartFormat.SVG ? svg : pdf);
+            files.put(format, run.write(baseName + "." + format.extension(), out -> out.write(bytes)));
         }
-        return new Rendered(baseName, png, files);
+        return new Rendered(baseName, join(png), files);
+    }
+
+    private static byte[] join(final CompletableFuture<byte[]> f) {
+        try {
+            return f.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw e;
+        }
+    }
+
+    private static byte[] pdfBytes(final Drawing drawing) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            pdf(drawing, out);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toByteArray();
     }
 
     /**
