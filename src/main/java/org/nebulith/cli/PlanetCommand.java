@@ -13,6 +13,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
+import org.nebulith.condensation.CondensationSequence;
+import org.nebulith.condensation.ElementCondensation;
+import org.nebulith.condensation.PressurePath;
+import org.nebulith.condensation.SequenceRunner;
+import org.nebulith.condensation.SequenceSettings;
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.ConvergenceException;
+import org.nebulith.errors.Messages;
+import org.nebulith.errors.NumericalException;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
@@ -27,6 +36,8 @@ import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.SourceList;
+import org.nebulith.thermo.Element;
+import org.nebulith.survey.HostMonteCarlo;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.planet.PlanetCharts;
 import org.nebulith.report.planet.PlanetReportWriter;
@@ -76,6 +87,19 @@ public final class PlanetCommand extends RunCommand {
                     + "Default: the demo system " + DEMO_ZONES + ".")
     private Path zones;
 
+    @Option(names = "--abundance-errors", paramLabel = "X=dex,...",
+            description = "1-sigma errors of the host star's [X/H] [dex], e.g. Fe=0.05,Mg=0.04,Si=0.04: the "
+                    + "comparison chart then shows 16th-84th percentile bars from a seeded Monte Carlo over them.")
+    private String abundanceErrors;
+
+    @Option(names = "--error-draws", paramLabel = "N", defaultValue = "40",
+            description = "Monte Carlo draws for --abundance-errors. Default: ${DEFAULT-VALUE}.")
+    private int errorDraws;
+
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
+            description = "Seed of the --abundance-errors Monte Carlo. Default: ${DEFAULT-VALUE}.")
+    private long seed;
+
     @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
     private boolean sulfideInMantle;
 
@@ -103,6 +127,7 @@ public final class PlanetCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
+        Map<Element, Double> errors = errors();
         if (profilePoints < 2) {
             throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
         }
@@ -119,12 +144,19 @@ public final class PlanetCommand extends RunCommand {
             List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
                     scanMax(diskModel, zoneList), profilePoints);
             progress.step();
-            return writeOutputs(context, gas, diskModel, spec, planets, scan);
+            Map<String, double[][]> bands = errors == null ? null : HostMonteCarlo.offsets(gas, errors, diskModel,
+                    zoneList, PlanetCharts.quantityNames(), errorDraws, seed);
+            Map<Element, Double> t50 = hostT50(spec, gas);
+            return writeOutputs(context, gas, diskModel, spec, planets, scan, bands, t50, errors == null ? null
+                    : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
+                    + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "
+                    + "estimate on this disk and these zones and centred on the values shown");
         }
     }
 
     private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
-                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
+                             Map<String, double[][]> bands, Map<Element, Double> t50, String errorNote) {
         String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
                 .format(context.started());
         try (RunFolder run = context.openRunFolder(runName)) {
@@ -139,7 +171,7 @@ public final class PlanetCommand extends RunCommand {
                     ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
             PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources);
+                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote, t50);
             PlanetReportWriter.write(run, data);
             Path done = run.commit();
             for (ZonePlanet zp : planets) {
@@ -149,6 +181,59 @@ public final class PlanetCommand extends RunCommand {
             PlanetReportWriter.CAUTIONS.forEach(context::warn);
         }
         return ExitCodes.OK;
+    }
+
+    /**
+     * 50% condensation temperatures of the gas at 1e-4 bar (the usual reference pressure), equilibrium
+     * condensation on a 5 K grid bisected to 0.5 K, for the devolatilisation pattern.
+     */
+    private static Map<Element, Double> hostT50(SystemSpec spec, ElementAbundances gas) {
+        ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(gas));
+        double[] totals = new double[system.elementCount()];
+        for (int j = 0; j < totals.length; j++) {
+            totals[j] = gas.moles(system.elements().get(j));
+        }
+        SequenceSettings s = new SequenceSettings(PressurePath.constant(1e-4), 2000, 250, 5, 0, 0.5);
+        CondensationSequence seq;
+        try {
+            seq = new SequenceRunner(new EquilibriumSolver()).run(system, totals, s);
+        } catch (ConvergenceException e) {
+            throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
+        }
+        Map<Element, Double> out = new java.util.EnumMap<>(Element.class);
+        for (ElementCondensation ec : seq.condensationTemperatures()) {
+            if (ec.t50K().isPresent()) {
+                out.put(ec.element(), ec.t50K().getAsDouble());
+            }
+        }
+        return out;
+    }
+
+    /** @return the --abundance-errors by element, or null when not given */
+    private Map<Element, Double> errors() {
+        if (abundanceErrors == null) {
+            return null;
+        }
+        if (errorDraws < 2) {
+            throw InputException.atOption("--error-draws", errorDraws, "too few draws", "an integer >= 2");
+        }
+        Map<Element, Double> out = new java.util.EnumMap<>(Element.class);
+        for (String part : abundanceErrors.split(",")) {
+            String[] kv = part.split("=", 2);
+            Element e = kv.length == 2 ? Element.fromSymbol(kv[0].strip()) : null;
+            double v;
+            try {
+                v = kv.length == 2 ? Double.parseDouble(kv[1].strip()) : Double.NaN;
+            } catch (NumberFormatException x) {
+                v = Double.NaN;
+            }
+            if (e == null || !(v >= 0) || !Double.isFinite(v) || e == Element.H) {
+                throw InputException.atOption("--abundance-errors", part, "not an element and a 1-sigma error",
+                        "X=dex pairs separated by commas, X an element other than H, dex >= 0 (e.g. Fe=0.05,Mg=0.04)");
+            }
+            out.put(e, v);
+        }
+        return out;
     }
 
     private DiskModel readDisk(RunContext context) throws IOException {

@@ -16,6 +16,7 @@ import java.util.NavigableMap;
 import java.util.concurrent.atomic.AtomicLong;
 
 import org.nebulith.composition.ElementAbundances;
+import org.nebulith.composition.SolarReference;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
@@ -88,6 +89,19 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
                 new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
+                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+    }
+
+    /**
+     * @param disk  the disk, already read
+     * @param zones the feeding zones, already read
+     * @param solar the solar reference (warm-start composition)
+     * @return an estimator for exactly this disk and these zones
+     */
+    public static PlanetSurveyEstimator of(DiskModel disk, List<FeedingZone> zones, SolarReference solar) {
+        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+                new EquilibriumSolver());
+        return new PlanetSurveyEstimator(f, disk, List.copyOf(zones), solar.abundances(),
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
     }
 

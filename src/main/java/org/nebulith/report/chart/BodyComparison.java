@@ -115,7 +115,7 @@ public record BodyComparison(List<String> quantities, List<Body> bodies) {
 
     private void panel(final Drawing d, final Rectangle2D box, final int q) {
         double[] range = range(q);
-        Axis x = Axis.linear(range[0], range[1], quantities.get(q)).ticks(4);
+        Axis x = Axis.linear(range[0], range[1], quantities.get(q)).ticks(5);
         Axis y = Axis.linear(0, bodies.size(), "");
         Panel p = new Panel(d, box, x, y);
         for (int i = 0; i < bodies.size(); i++) {

@@ -15,6 +15,8 @@ import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.PhaseLabels;
 import org.nebulith.report.chart.BodyComparison;
+import org.nebulith.report.chart.DevolatilisationPattern;
+import org.nebulith.thermo.Element;
 import org.nebulith.report.chart.RadialProfile;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
@@ -152,6 +154,94 @@ public final class PlanetCharts {
             bodies.add(BodyComparison.Body.of(ref[1], BodyComparison.Kind.REFERENCE, values(ratios, cmf)));
         }
         return new BodyComparison(TITLES, bodies);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param offsets per zone, percentile offsets from the nominal (see {@code HostMonteCarlo}), or null
+     * @return per zone, the absolute 16th and 84th percentile ends of the error bars, or null
+     */
+    public static Map<String, double[][]> bars(List<ZonePlanet> planets, Map<String, double[][]> offsets) {
+        if (offsets == null) {
+            return null;
+        }
+        Map<String, double[][]> out = new java.util.LinkedHashMap<>();
+        for (ZonePlanet zp : planets) {
+            double[][] off = offsets.get(zp.zoneName());
+            if (off == null || !zp.planet().hasSolids()) {
+                continue;
+            }
+            PlanetComposition c = zp.planet().require();
+            double[] v = values(c.molarRatios(), c.hasRock() ? c.coreMassFraction() : Double.NaN);
+            double[][] b = new double[2][v.length];
+            for (int q = 0; q < v.length; q++) {
+                b[0][q] = v[q] + Math.min(0, off[0][q]);
+                b[1][q] = v[q] + Math.max(0, off[1][q]);
+            }
+            out.put(zp.zoneName(), b);
+        }
+        return out;
+    }
+
+    /** Normalising element of the devolatilisation pattern (refractory, condenses early, no volatile host). */
+    public static final Element NORMALISING = Element.Al;
+
+    /**
+     * The devolatilisation pattern: (X/Al) of each planet over (X/Al) of the host star, and of bulk Earth
+     * (McDonough 2003) over the solar photosphere (Asplund et al. 2009), against T50.
+     *
+     * @param planets the zone planets
+     * @param host    the host star's composition
+     * @param t50K    50% condensation temperature per element [K] (the host composition at 1e-4 bar)
+     * @return the chart data
+     */
+    public static DevolatilisationPattern devolatilisation(List<ZonePlanet> planets, ElementAbundances host,
+                                                           Map<Element, Double> t50K) {
+        List<Element> shown = new ArrayList<>();
+        for (Element e : Element.values()) {
+            if (e != Element.H && e != Element.He && e != NORMALISING && t50K.containsKey(e)
+                    && Double.isFinite(t50K.get(e)) && host.moles(e) > 0) {
+                shown.add(e);
+            }
+        }
+        List<String> labels = new ArrayList<>();
+        double[] t = new double[shown.size()];
+        for (int i = 0; i < t.length; i++) {
+            labels.add(shown.get(i).symbol());
+            t[i] = t50K.get(shown.get(i));
+        }
+        List<DevolatilisationPattern.Body> bodies = new ArrayList<>();
+        for (ZonePlanet zp : planets) {
+            if (zp.planet().hasSolids()) {
+                bodies.add(new DevolatilisationPattern.Body(zp.zoneName() + " / host",
+                        ratios(zp.planet().require().bulk(), host, shown)));
+            }
+        }
+        ElementAbundances sun = AbundancePresets.preset(AbundancePresets.PHOTOSPHERE_ASPLUND2009).abundances();
+        bodies.add(new DevolatilisationPattern.Body("bulk Earth / Sun",
+                ratios(ReferenceBodies.get("bulk-earth").elements(), sun, shown)));
+        return new DevolatilisationPattern(labels, t, bodies, "(X/" + NORMALISING.symbol() + ") body / (X/"
+                + NORMALISING.symbol() + ") star", List.of("T50: host composition, 1e-4 bar"));
+    }
+
+    private static double[] ratios(ElementAbundances body, ElementAbundances star, List<Element> shown) {
+        double[] r = new double[shown.size()];
+        double bodyRef = body.moles(NORMALISING);
+        double starRef = star.moles(NORMALISING);
+        for (int i = 0; i < r.length; i++) {
+            Element e = shown.get(i);
+            double v = bodyRef > 0 && starRef > 0 && star.moles(e) > 0
+                    ? (body.moles(e) / bodyRef) / (star.moles(e) / starRef) : Double.NaN;
+            r[i] = v > 0 ? v : Double.NaN;
+        }
+        return r;
+    }
+
+    /** @return the comparison's quantity names as in survey.csv, in panel order */
+    public static List<String> quantityNames() {
+        List<String> q = new ArrayList<>(SHOWN);
+        q.add("core_mass_fraction");
+        return q;
     }
 
     private static double[] values(Map<String, Double> ratios, double cmf) {

@@ -3,6 +3,7 @@ package org.nebulith.report.planet;
 import java.time.Instant;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 import org.nebulith.composition.ElementAbundances;
@@ -56,11 +57,17 @@ public final class PlanetReportWriter {
      * @param settings     effective settings (key, value, origin)
      * @param inputs       the run's input files
      * @param sources      data sources (key, citation)
+     * @param errorBands   per zone, the 16th and 84th percentile offsets of the comparison's quantities from a
+     *                     Monte Carlo over the host's [X/H] errors ({@link PlanetCharts#SHOWN} then the core
+     *                     mass fraction), or null when no errors were given
+     * @param errorNote    how the bands were computed (draws, seed, errors), or null
+     * @param t50K         50% condensation temperatures of the host composition at 1e-4 bar [K], by element
      */
     public record RunData(String title, String command, String version, Instant started, String composition,
                           ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                           List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
-                          List<Report.Citation> sources) {
+                          List<Report.Citation> sources, Map<String, double[][]> errorBands, String errorNote,
+                          Map<org.nebulith.thermo.Element, Double> t50K) {
     }
 
     private PlanetReportWriter() {
@@ -83,8 +90,11 @@ public final class PlanetReportWriter {
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
         ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
                 data.host()).chart(ChartSize.PAGE.widthPt(), 330), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(), null)
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
+                PlanetCharts.bars(data.planets(), data.errorBands()))
                 .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
+        ChartRenderer.Rendered pattern = ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(),
+                data.t50K()).chart(ChartSize.PAGE), run, "devolatilisation", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
                 .paragraph("Composition: " + data.composition() + ".")
@@ -98,8 +108,19 @@ public final class PlanetReportWriter {
         report.section("Comparison with the host star and reference bodies")
                 .chart(compare, "Molar ratios and core mass fraction of the predicted planets (circles) beside the "
                         + "host star (star marker and dotted line) and reference bodies, one linear panel per quantity; "
-                        + "n/a: the body has no such value. References: " + PlanetCharts.REFERENCE_SOURCES + ".")
+                        + "n/a: the body has no such value. " + (data.errorNote() == null
+                        ? "No [X/H] errors were given, so the planets have no error bars. "
+                        : "Error bars: " + data.errorNote() + ". ")
+                        + "References: " + PlanetCharts.REFERENCE_SOURCES + ".")
                 .table(comparison, "comparison.csv");
+        report.section("Devolatilisation pattern")
+                .chart(pattern, "Abundance of each element in the planets relative to the host star, both normalised "
+                        + "to " + PlanetCharts.NORMALISING.symbol() + " (a refractory element), against the element's "
+                        + "50% condensation temperature T50 computed by Nebulith for the host composition at 1e-4 bar "
+                        + "(equilibrium, 5 K grid bisected to 0.5 K); bulk Earth (McDonough 2003) over the solar "
+                        + "photosphere (Asplund et al. 2009) for comparison, plotted at the same T50. Values below "
+                        + "the axis are drawn at its bottom. The figure follows the form of Wang, Lineweaver & "
+                        + "Ireland (2019, Icarus 328, 287).");
         report.section("Radial structure of the disk")
                 .chart(radial, "Top: midplane temperature (left axis) and pressure (right axis, log) of the disk. "
                         + "Middle: molar Mg/Si and Fe/Si of the local equilibrium solids, host-star ratios dotted, "
@@ -113,7 +134,8 @@ public final class PlanetReportWriter {
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
-                "radial-map.png", "radial-map.svg", "radial-map.pdf", "planet-comparison.png", "planet-comparison.svg",
+                "radial-map.png", "radial-map.svg", "radial-map.pdf", "devolatilisation.png", "devolatilisation.svg",
+                "devolatilisation.pdf", "planet-comparison.png", "planet-comparison.svg",
                 "planet-comparison.pdf", "summary.md")) {
             report.outputFile(f);
         }
