@@ -76,7 +76,7 @@ class PlanetCommandTest {
         }
         if (ChromiumProbe.chromium().isPresent()) {
             ChromiumProbe.Result page = ChromiumProbe.open(outDir.resolve("report.html"), dir);
-            assertEquals(2, page.images(), "radial map and comparison chart");
+            assertEquals(3, page.images(), "comparison, devolatilisation pattern and radial map");
             assertEquals(0, page.bad(), "images not decoded");
             assertEquals(0, page.errors(), "errors in the page");
             assertEquals(List.of(), page.console(), "console messages");

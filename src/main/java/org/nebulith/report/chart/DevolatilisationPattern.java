@@ -9,8 +9,8 @@ import java.util.Objects;
  * The devolatilisation pattern: each element's abundance in a body relative to its star, normalised
  * to a refractory element, against the element's 50 % condensation temperature (the figure of,
  * e.g., Wang, Lineweaver and Ireland 2019, Icarus 328, 287, drawn our way): logarithmic ratio axis,
- * T50 increasing to the right, one marker series per body, element symbols beside the first body's
- * points, a dotted line at 1 (no depletion).
+ * T50 increasing to the right, one marker series per body, the element symbols in a row along the top
+ * above their T50, a dotted line at 1 (no depletion).
  *
  * @param elements  element symbols
  * @param t50K      their 50 % condensation temperatures [K] (NaN = not shown)
@@ -79,7 +79,8 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
                 }
             }
         }
-        labels(d, p, free, yr);
+        labels(d, p);
+        free.take(new Rectangle2D.Double(box.getMinX(), box.getMinY(), box.getWidth(), ChartStyle.NOTE_PT + 8));
         if (!notes.isEmpty()) {
             p.cornerNote(notes, free);
         }
@@ -87,29 +88,35 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
         return d;
     }
 
-    private void labels(final Drawing d, final Panel p, final Placement free, final double[] yr) {
-        if (bodies.isEmpty()) {
+    /** Element symbols in a row along the top of the plot, above their T50, spread so that none overlaps. */
+    private void labels(final Drawing d, final Panel p) {
+        java.util.List<Integer> order = new java.util.ArrayList<>();
+        for (int k = 0; k < t50K.length; k++) {
+            if (Double.isFinite(t50K[k])) {
+                order.add(k);
+            }
+        }
+        order.sort(java.util.Comparator.comparingDouble(k -> t50K[k]));
+        int n = order.size();
+        if (n == 0) {
             return;
         }
-        double[] r = bodies.get(0).ratios();
-        double h = Fonts.capHeight(ChartStyle.NOTE_PT) + 1;
-        for (int k = 0; k < r.length; k++) {
-            if (!(Double.isFinite(r[k]) && r[k] > 0 && Double.isFinite(t50K[k]))) {
-                continue;
+        double[] wanted = new double[n];
+        double[] gaps = new double[Math.max(0, n - 1)];
+        for (int i = 0; i < n; i++) {
+            wanted[i] = p.px(t50K[order.get(i)]);
+            if (i > 0) {
+                gaps[i - 1] = (Fonts.width(elements.get(order.get(i - 1)), ChartStyle.NOTE_PT)
+                        + Fonts.width(elements.get(order.get(i)), ChartStyle.NOTE_PT)) / 2 + 2;
             }
-            String text = elements.get(k);
-            double w = Fonts.width(text, ChartStyle.NOTE_PT) + 1;
-            double xd = p.px(t50K[k]);
-            double yd = p.py(clamp(r[k], yr));
-            for (double[] off : new double[][] {{3, -h / 2}, {-3 - w, -h / 2}, {-w / 2, -3 - h}, {-w / 2, 3}}) {
-                Rectangle2D box = new Rectangle2D.Double(xd + off[0], yd + off[1], w, h);
-                if (free.free(box, -1)) {
-                    free.take(box);
-                    d.text(text, box.getMinX() + 0.5, box.getMaxY() - 0.8, ChartStyle.NOTE_PT, Drawing.Align.LEFT,
-                            Palette.AXIS);
-                    break;
-                }
-            }
+        }
+        Rectangle2D a = p.area();
+        double[] at = Spread.apart(wanted, gaps, a.getMinX() + 4, a.getMaxX() - 4);
+        double baseline = a.getMinY() + ChartStyle.NOTE_PT + 2;
+        for (int i = 0; i < n; i++) {
+            d.text(elements.get(order.get(i)), at[i], baseline, ChartStyle.NOTE_PT, Drawing.Align.CENTRE, Palette.AXIS);
+            d.stroke(new java.awt.geom.Line2D.Double(at[i], baseline + 1.5, wanted[i], baseline + 5),
+                    LineStyle.solid(Palette.REFERENCE, 0.3));
         }
     }
 
@@ -136,8 +143,9 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
                 }
             }
         }
+        // one decade of headroom above for the element symbols
         return new double[] {Math.max(1e-4, Math.pow(10, Math.floor(Math.log10(lo)))),
-                Math.pow(10, Math.ceil(Math.log10(hi * 1.01)))};
+                Math.pow(10, Math.ceil(Math.log10(hi * 1.01)) + 1)};
     }
 
     private double[] tRange() {

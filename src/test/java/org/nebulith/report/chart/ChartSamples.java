@@ -93,6 +93,14 @@ final class ChartSamples {
                         Double.NaN)));
     }
 
+    static DevolatilisationPattern devolatilisation() {
+        List<String> el = List.of("Ti", "Ca", "Mg", "Si", "Fe", "Na", "K", "S");
+        double[] t50 = {1580, 1510, 1340, 1320, 1335, 990, 950, 630};
+        double[] keroa = {1.0, 1.0, 0.95, 0.9, 0.92, 0.3, 0.25, 0.02};
+        return new DevolatilisationPattern(el, t50, List.of(new DevolatilisationPattern.Body("Keroa b (invented)", keroa)),
+                "(X/Al) body / (X/Al) star", List.of("invented"));
+    }
+
     static SurveyScatter survey() {
         java.util.SplittableRandom random = new java.util.SplittableRandom(11);
         List<SurveyScatter.Point> stars = new ArrayList<>();
@@ -116,6 +124,7 @@ final class ChartSamples {
         charts.put("radial-profile", radial().chart(ChartSize.PAGE.widthPt(), 330));
         charts.put("planet-comparison", comparison().chart(ChartSize.PAGE.widthPt()));
         charts.put("survey", survey().chart(ChartSize.COLUMN_TALL));
+        charts.put("devolatilisation", devolatilisation().chart(ChartSize.PAGE));
         return charts;
     }
 }

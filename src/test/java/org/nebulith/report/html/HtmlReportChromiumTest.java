@@ -49,7 +49,7 @@ class HtmlReportChromiumTest {
         assertFalse(Pattern.compile("src=\"(?!data:)").matcher(html).find(), "every image is embedded");
         assertTrue(html.contains(RunInputs.sha256(input)), "input checksum listed");
         ChromiumProbe.Result result = ChromiumProbe.open(target.resolve("report.html"), dir);
-        assertEquals(5, result.images(), "images in the page");
+        assertEquals(ChartFixtures.all().size(), result.images(), "images in the page");
         assertTrue(result.overflow() <= 0, "no horizontal overflow: " + result.overflow() + " px");
         assertEquals(0, result.bad(), "images not decoded");
         assertEquals(0, result.errors(), "errors raised in the page");
