@@ -68,7 +68,9 @@ public final class ChemistryOptions {
     private String dataSet;
 
     @Option(names = "--variant", paramLabel = "TAG",
-            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) for a sensitivity run; repeatable.")
+            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) or a documented "
+                    + "alternative (troilite-ds62: ds62 troilite instead of the NASA FeS entries; AlOH-JANAF: AlOH "
+                    + "gas at the JANAF-quoted -180 kJ/mol, from memory) for a sensitivity run; repeatable.")
     private List<String> variants = new ArrayList<>();
 
     @Option(names = "--species-file", paramLabel = "FILE",
@@ -82,9 +84,17 @@ public final class ChemistryOptions {
             description = "Use only the condensed ids listed in FILE, one per line.")
     private Path condensedList;
 
+    @Option(names = "--ci-reference", paramLabel = "NAME",
+            description = "CI-chondrite composition of the dust (--dust-enrichment) and of the comparisons: "
+                    + "lodders-palme-gail2009 (Lodders, Palme & Gail 2009; the only CI table here with C, N, O, Cl) "
+                    + "or palme-oneill2014 (Palme & O'Neill 2014; no C, N, Cl). Default: ${DEFAULT-VALUE}.")
+    private String ciReference = org.nebulith.composition.CiReference.DEFAULT.optionName();
+
     @Option(names = "--solutions", paramLabel = "LIST",
-            description = "Ideal solutions: 'all', 'none' (pure phases) or a comma list of metal, olivine, "
-                    + "orthopyroxene, melilite, plagioclase, spinel-hercynite. Default: all for the default "
+            description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
+                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg "
+                    + "(without tephroite), orthopyroxene-mn (with Mn2Si2O6), plagioclase (anorthite-albite, "
+                    + "sanidine pure), spinel-hercynite (without chromite). Default: all for the default "
                     + "data set, none otherwise.")
     private String solutions;
 
@@ -99,8 +109,7 @@ public final class ChemistryOptions {
                     "enrichment below 1 would remove dust", "a factor >= 1");
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances(),
-                    dustEnrichment);
+            base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
@@ -144,7 +153,8 @@ public final class ChemistryOptions {
     public String describeComposition() {
         StringBuilder sb = new StringBuilder(elements != null ? "inline " + elements : compositionArg());
         if (dustEnrichment != 1) {
-            sb.append("; dust enrichment ").append(dustEnrichment);
+            sb.append("; dust enrichment ").append(dustEnrichment).append(" (CI chondrite of ")
+                    .append(ciReference().citation()).append(')');
         }
         if (carbonToOxygen != null) {
             sb.append("; C/O set to ").append(carbonToOxygen);
@@ -192,15 +202,39 @@ public final class ChemistryOptions {
             return List.of();
         }
         List<SolutionModel> out = new ArrayList<>();
+        Set<String> members = new java.util.HashSet<>();
         for (String name : s.split(",")) {
+            SolutionModel m;
             try {
-                out.add(SolutionModels.byName(name.trim()));
+                m = SolutionModels.byName(name.trim());
             } catch (IllegalArgumentException e) {
                 throw InputException.atOption("--solutions", s, "unknown solution '" + name.trim() + "'",
-                        "all, none, or a comma list of metal, olivine, orthopyroxene, melilite, plagioclase, spinel-hercynite");
+                        "all, none, or a comma list of " + SolutionModels.offeredNames());
             }
+            for (SolutionModel.EndMember em : m.endMembers()) {
+                for (String id : em.speciesIds()) {
+                    if (!members.add(id)) {
+                        throw InputException.atOption("--solutions", s, "species '" + id + "' would be in two solutions",
+                                "at most one of the forms of each solution (e.g. olivine or olivine-fe-mg)");
+                    }
+                }
+            }
+            out.add(m);
         }
         return out;
+    }
+
+    /**
+     * @return the CI-chondrite reference of the run (dust and comparisons)
+     * @throws InputException for an unknown name
+     */
+    public org.nebulith.composition.CiReference ciReference() {
+        try {
+            return org.nebulith.composition.CiReference.fromOptionName(ciReference);
+        } catch (IllegalArgumentException e) {
+            throw InputException.atOption("--ci-reference", ciReference, "unknown CI reference",
+                    org.nebulith.composition.CiReference.accepted());
+        }
     }
 
     /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */

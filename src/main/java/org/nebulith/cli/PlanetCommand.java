@@ -171,7 +171,8 @@ public final class PlanetCommand extends RunCommand {
                     ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
             PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                     "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote, t50);
+                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote, t50,
+                    chemistry.ciReference());
             PlanetReportWriter.write(run, data);
             Path done = run.commit();
             for (ZonePlanet zp : planets) {

@@ -145,12 +145,7 @@ public class SurveyCommand extends RunCommand {
     }
 
     private SolarReference solar() {
-        switch (solarReference.toLowerCase(Locale.ROOT)) {
-            case "asplund2009": return SolarReference.ASPLUND2009;
-            case "lodders2003": return SolarReference.LODDERS2003;
-            default: throw InputException.atOption("--solar-reference", solarReference, "unknown solar reference",
-                    "asplund2009, lodders2003");
-        }
+        return SolarReferences.parse(solarReference);
     }
 
     private static void registerIfFile(final RunContext context, final String value, final String role) {

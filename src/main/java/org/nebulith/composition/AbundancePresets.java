@@ -23,12 +23,14 @@ public final class AbundancePresets {
     public static final String PHOTOSPHERE_ASPLUND2009 = "photosphere-asplund2009";
     /** CI chondrite (Lodders, Palme &amp; Gail 2009 via Asplund et al. 2009 Table 1), for dust. */
     public static final String CI_CHONDRITE = "ci-chondrite";
+    /** CI chondrite (Palme &amp; O'Neill 2014, wt%), the alternative CI reference ({@link CiReference}). */
+    public static final String CI_CHONDRITE_PALME_ONEILL2014 = "ci-chondrite-palme-oneill2014";
     /** All abundance presets. */
     /** The invented host star of the demo scenario (not a real star). */
     public static final String DEMO_STAR = "star-tessaly";
     /** The preset names. */
     public static final List<String> NAMES = List.of(PROTOSOLAR_LODDERS2003, PHOTOSPHERE_ASPLUND2009, CI_CHONDRITE,
-            DEMO_STAR);
+            CI_CHONDRITE_PALME_ONEILL2014, DEMO_STAR);
 
     private AbundancePresets() {
     }

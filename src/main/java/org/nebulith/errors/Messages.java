@@ -40,6 +40,8 @@ public enum Messages {
     NON_FINITE_OUTPUT(4, "{0}: column \"{1}\", row {2}: value {3} is not a finite number; nothing was written"),
     /** A condensation sequence stopped on a state without a checked equilibrium: the solver's message (names T, P, composition). */
     SEQUENCE_STOPPED(1, "condensation sequence stopped: {0}"),
+    /** The interior-structure equations could not be solved: what failed, naming the planet model. */
+    STRUCTURE_FAILURE(1, "interior structure not solved: {0}"),
     /** A sub-command that the build does not provide yet: command name. */
     NOT_YET_AVAILABLE(1, "the \"{0}\" command is not yet available in this build"),
     /** A branch that should be impossible: description. */

@@ -12,14 +12,17 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.OptionalDouble;
 
+import org.nebulith.composition.CiReference;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.thermo.Element;
 
 /**
  * Known bodies to compare planets with, read from the bundled {@code reference-bodies.csv}
  * (provenance in its header): bulk Earth (McDonough 2003), bulk silicate Earth (McDonough &amp; Sun
- * 1995), CI chondrite (Palme &amp; O'Neill 2014), and the core mass fractions of Earth and of Mars
- * (Mars values from memory, flagged). Element wt% are converted to moles with IUPAC weights.
+ * 1995), CI chondrite (Palme &amp; O'Neill 2014, {@code ci-chondrite-palme-oneill2014}), and the core mass
+ * fractions of Earth and of Mars (Mars values from memory, flagged). Element wt% are converted to moles
+ * with IUPAC weights. {@code ci-chondrite} is the default CI reference ({@link CiReference#DEFAULT},
+ * Lodders, Palme &amp; Gail 2009), the same composition the dust enrichment adds; {@link #ci} gives either.
  */
 public final class ReferenceBodies {
     /**
@@ -41,6 +44,18 @@ public final class ReferenceBodies {
     /** @return all bodies by name, in file order */
     public static Map<String, Body> all() {
         return BODIES;
+    }
+
+    /** Name of the CI body of the default reference. */
+    public static final String CI = "ci-chondrite";
+
+    /**
+     * @param ref a CI reference
+     * @return its body (named {@value #CI} with the reference's citation)
+     */
+    public static Body ci(CiReference ref) {
+        return new Body(CI + " (" + ref.citation() + ")", ref.abundances(), OptionalDouble.empty(), OptionalDouble.empty(),
+                false);
     }
 
     /** @return the named body @throws IllegalArgumentException if unknown */
@@ -77,7 +92,12 @@ public final class ReferenceBodies {
             throw new UncheckedIOException("cannot read reference-bodies.csv", e);
         }
         Map<String, Body> out = new LinkedHashMap<>();
+        el.put(CI, new EnumMap<>(Element.class));
         for (String name : el.keySet()) {
+            if (name.equals(CI)) {
+                out.put(CI, ci(CiReference.DEFAULT));
+                continue;
+            }
             out.put(name, new Body(name, ElementAbundances.of(el.get(name)),
                     cmf.containsKey(name) ? OptionalDouble.of(cmf.get(name)) : OptionalDouble.empty(),
                     mg.containsKey(name) ? OptionalDouble.of(mg.get(name)) : OptionalDouble.empty(), memory.get(name)));

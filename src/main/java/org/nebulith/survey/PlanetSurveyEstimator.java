@@ -105,6 +105,19 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
                 java.util.Collections.emptyNavigableMap(), new AtomicLong());
     }
 
+    /**
+     * @param settings the survey settings (disk, null for the default; solar reference; its zones are not read)
+     * @param zones    the zones to estimate
+     * @return the estimator
+     */
+    public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
+        DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
+        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+                new EquilibriumSolver());
+        return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
+                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+    }
+
     private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {
         if (file != null) {
             try (Reader r = Files.newBufferedReader(Path.of(file), StandardCharsets.UTF_8)) {

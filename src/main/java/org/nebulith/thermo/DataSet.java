@@ -22,7 +22,8 @@ import java.util.function.Predicate;
  * <li>{@value #REFERENCE_PURE}: the 47 condensed species of the pure-phase reference sequence
  *     (resource {@code reference-pure.txt}) plus every gas.</li>
  * </ul>
- * {@link #withVariant(String)} swaps rows for the alternative rows of one source family.
+ * {@link #withVariant(String)} swaps rows for the alternative rows of one source family, or applies one of
+ * the {@link SensitivityVariants}.
  * Instances are immutable.
  */
 public final class DataSet {
@@ -35,7 +36,7 @@ public final class DataSet {
     /** The selection names. */
     public static final List<String> NAMES = List.of(NASA, DEFAULT, REFERENCE_PURE);
 
-    private static final String MINERAL_TABLE = "minerals.csv:";
+    private static final List<String> MINERAL_TABLES = List.of("minerals.csv:", "minerals-added.csv:");
     private static final Set<String> DEFAULT_POLYMORPHS = Set.of("protoenstatite", "clinoenstatite", "pseudowollastonite");
     private static final Set<String> NOT_IN_DEFAULT = Set.of("troilite", "high albite");
 
@@ -107,7 +108,7 @@ public final class DataSet {
 
     /** @return true for rows taken from the mineral table (including its NASA-coefficient metal rows) */
     public static boolean isMineralRow(Species s) {
-        return s.sourceRow().startsWith(MINERAL_TABLE) || s.sourceRow().contains(" via " + MINERAL_TABLE);
+        return MINERAL_TABLES.stream().anyMatch(t -> s.sourceRow().startsWith(t) || s.sourceRow().contains(" via " + t));
     }
 
     /** @return true for NASA Glenn entries under their NASA names */
@@ -152,6 +153,9 @@ public final class DataSet {
      * @throws IllegalArgumentException for an unknown tag
      */
     public DataSet withVariant(String variant) {
+        if (SensitivityVariants.NAMES.contains(variant)) {
+            return new DataSet(name + "+" + variant, database, SensitivityVariants.apply(species, database, variant));
+        }
         List<Species> alts = filter(database.species(), s -> s.variant().equals(variant) && !variant.isEmpty());
         if (alts.isEmpty()) {
             throw new IllegalArgumentException("no variant '" + variant + "'; known: " + variants());
@@ -230,9 +234,9 @@ public final class DataSet {
         return new DataSet(name + "+" + user.name(), merged, sel);
     }
 
-    /** @return the variant tags available in the database */
+    /** @return the variant tags available in the database, and the {@link SensitivityVariants} */
     public Set<String> variants() {
-        Set<String> v = new TreeSet<>();
+        Set<String> v = new TreeSet<>(SensitivityVariants.NAMES);
         database.species().forEach(s -> {
             if (!s.variant().isEmpty()) {
                 v.add(s.variant());

@@ -81,8 +81,7 @@ final class SequenceRuns {
     /** The sulfide window, 760 to 600 K, at pBar, default data or with ds62 troilite instead of the NASA FeS entries. */
     static CondensationSequence sulfide(double pBar, boolean troilite) {
         return CACHE.computeIfAbsent("S" + pBar + troilite, k -> run(troilite
-                ? DataSet.named(DataSet.DEFAULT).withoutSpecies("FeS(a)", "FeS(b)", "FeS(c)", "FeS(L)")
-                        .withSpecies("troilite").species()
+                ? DataSet.named(DataSet.DEFAULT).withVariant(org.nebulith.thermo.SensitivityVariants.TROILITE_DS62).species()
                 : defaultData(), protosolar(), pBar, 760, 600, 0));
     }
 

@@ -25,13 +25,30 @@ class ReferenceComparisonTest {
         assertTrue(ReferenceBodies.get("mars").fromMemory());
     }
 
-    /** molar_ratio_CI_PalmeONeill2014 (derived from Palme & O'Neill 2014 CI wt%). */
+    /** molar_ratio_CI_PalmeONeill2014 (derived from Palme & O'Neill 2014 CI wt%), the alternative CI. */
     @Test
     void ciRatios() {
-        Map<String, Double> r = MolarRatios.of(ReferenceBodies.get("ci-chondrite").elements());
+        Map<String, Double> r = MolarRatios.of(ReferenceBodies.get("ci-chondrite-palme-oneill2014").elements());
         assertEquals(1.03, r.get("Mg_Si_molar"), 0.005);
         assertEquals(0.877, r.get("Fe_Si_molar"), 0.002);
         assertEquals(0.0817, r.get("Al_Si_molar"), 0.0005);
+        Map<String, Double> p = MolarRatios.of(ReferenceBodies.ci(org.nebulith.composition.CiReference.PALME_ONEILL_2014)
+                .elements());
+        assertEquals(r.get("Mg_Si_molar"), p.get("Mg_Si_molar"), 1e-12, "preset and reference body are one table");
+    }
+
+    /**
+     * molar_ratio_CI_LPG2009 (Lodders, Palme & Gail 2009 via Asplund et al. 2009 Table 1): Mg/Si 1.047,
+     * Fe/Si 0.871. The default CI body is the composition the dust enrichment adds.
+     */
+    @Test
+    void defaultCiIsTheDustComposition() {
+        Map<String, Double> r = MolarRatios.of(ReferenceBodies.get(ReferenceBodies.CI).elements());
+        assertEquals(1.047, r.get("Mg_Si_molar"), 0.002);
+        assertEquals(0.871, r.get("Fe_Si_molar"), 0.002);
+        assertEquals(MolarRatios.of(AbundancePresets.preset(AbundancePresets.CI_CHONDRITE).abundances()), r);
+        assertEquals(org.nebulith.composition.CiReference.LODDERS_PALME_GAIL_2009,
+                org.nebulith.composition.CiReference.DEFAULT);
     }
 
     /**

@@ -27,8 +27,7 @@ class SpeciesFileTest {
     @Test
     void regeneratingFromTheSourcesGivesTheCommittedFile() throws IOException {
         Path dir = Path.of("src", "data", "thermo-sources");
-        String regenerated = DatabaseConverter.convert(Files.readAllBytes(dir.resolve("nasa_glenn_thermo.inp")),
-                "nasa_glenn_thermo.inp", Files.readAllBytes(dir.resolve("minerals.csv")), "minerals.csv");
+        String regenerated = DatabaseConverter.convert(dir);
         byte[] committed = getClass().getResourceAsStream("species.csv").readAllBytes();
         assertEquals(new String(committed, StandardCharsets.UTF_8), regenerated);
     }

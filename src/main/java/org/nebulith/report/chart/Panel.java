@@ -292,6 +292,44 @@ public final class Panel {
     }
 
     /**
+     * A vertical error bar with end caps.
+     *
+     * @param xv     x value
+     * @param low    lower end
+     * @param high   upper end
+     * @param colour colour
+     */
+    public void yErrorBar(final double xv, final double low, final double high, final Color colour) {
+        if (!(Double.isFinite(low) && Double.isFinite(high))) {
+            return;
+        }
+        double xx = px(xv);
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(xx, py(low));
+        p.lineTo(xx, py(high));
+        p.moveTo(xx - 1.8, py(low));
+        p.lineTo(xx + 1.8, py(low));
+        p.moveTo(xx - 1.8, py(high));
+        p.lineTo(xx + 1.8, py(high));
+        d.clip(area).stroke(p, LineStyle.solid(colour, 0.7)).endClip();
+    }
+
+    /**
+     * A label in data coordinates.
+     *
+     * @param text  the text
+     * @param xv    x value of the anchor
+     * @param yv    y value of the baseline
+     * @param dx    shift right [pt]
+     * @param dy    shift down [pt]
+     * @param align alignment
+     */
+    public void label(final String text, final double xv, final double yv, final double dx, final double dy,
+                      final Drawing.Align align) {
+        d.text(text, px(xv) + dx, py(yv) + dy, ChartStyle.NOTE_PT, align, Palette.AXIS);
+    }
+
+    /**
      * @param v     x value of a vertical reference line
      * @param style line style
      */

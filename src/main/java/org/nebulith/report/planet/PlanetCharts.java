@@ -127,8 +127,30 @@ public final class PlanetCharts {
      * @param errors  per-zone 16th and 84th percentiles from the Monte Carlo over the host's errors, or null
      * @return one row per planet, then the host star and the reference bodies, one panel per quantity
      */
+    public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host) {
+        return comparison(planets, host, null, org.nebulith.composition.CiReference.DEFAULT);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's composition
+     * @param ci      the run's CI reference
+     * @return the comparison chart data, the CI row labelled with its publication
+     */
     public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host,
-                                            Map<String, double[][]> errors) {
+                                            org.nebulith.composition.CiReference ci) {
+        return comparison(planets, host, null, ci);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's composition
+     * @param errors  per-zone 16th and 84th percentile ends of the error bars, or null
+     * @param ci      the run's CI reference
+     * @return one row per planet, then the host star and the reference bodies, one panel per quantity
+     */
+    public static BodyComparison comparison(List<ZonePlanet> planets, ElementAbundances host,
+                                            Map<String, double[][]> errors, org.nebulith.composition.CiReference ci) {
         List<BodyComparison.Body> bodies = new ArrayList<>();
         for (ZonePlanet zp : planets) {
             if (zp.planet().hasSolids()) {
@@ -147,11 +169,12 @@ public final class PlanetCharts {
         bodies.add(BodyComparison.Body.of("Sun (photosphere)", BodyComparison.Kind.REFERENCE,
                 values(MolarRatios.of(sun), Double.NaN)));
         for (String[] ref : new String[][] {{"bulk-earth", "bulk Earth"}, {"bulk-silicate-earth", "bulk silicate Earth"},
-                {"ci-chondrite", "CI chondrites"}, {"mars", "Mars"}}) {
-            ReferenceBodies.Body b = ReferenceBodies.get(ref[0]);
+                {ReferenceBodies.CI, "CI chondrites"}, {"mars", "Mars"}}) {
+            ReferenceBodies.Body b = ref[0].equals(ReferenceBodies.CI) ? ReferenceBodies.ci(ci) : ReferenceBodies.get(ref[0]);
             double cmf = b.coreMassFraction().isPresent() ? b.coreMassFraction().getAsDouble() : Double.NaN;
             Map<String, Double> ratios = b.elements().isEmpty() ? Map.of() : MolarRatios.of(b.elements());
-            bodies.add(BodyComparison.Body.of(ref[1], BodyComparison.Kind.REFERENCE, values(ratios, cmf)));
+            String label = ref[0].equals(ReferenceBodies.CI) ? "CI chondrites (" + ci.citation() + ")" : ref[1];
+            bodies.add(BodyComparison.Body.of(label, BodyComparison.Kind.REFERENCE, values(ratios, cmf)));
         }
         return new BodyComparison(TITLES, bodies);
     }

@@ -62,12 +62,21 @@ public final class PlanetReportWriter {
      *                     mass fraction), or null when no errors were given
      * @param errorNote    how the bands were computed (draws, seed, errors), or null
      * @param t50K         50% condensation temperatures of the host composition at 1e-4 bar [K], by element
+     * @param ci           the CI-chondrite reference of the run (dust and comparisons)
      */
     public record RunData(String title, String command, String version, Instant started, String composition,
                           ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                           List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
                           List<Report.Citation> sources, Map<String, double[][]> errorBands, String errorNote,
-                          Map<org.nebulith.thermo.Element, Double> t50K) {
+                          Map<org.nebulith.thermo.Element, Double> t50K, org.nebulith.composition.CiReference ci) {
+        /** Run data with the default CI reference, no error bars and no devolatilisation pattern. */
+        public RunData(String title, String command, String version, Instant started, String composition,
+                       ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
+                       List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
+                       List<Report.Citation> sources) {
+            this(title, command, version, started, composition, host, disk, chemistry, planets, scan, settings, inputs,
+                    sources, null, null, null, org.nebulith.composition.CiReference.DEFAULT);
+        }
     }
 
     private PlanetReportWriter() {
@@ -80,7 +89,7 @@ public final class PlanetReportWriter {
      */
     public static Report write(RunFolder run, RunData data) {
         Table bulk = PlanetTables.bulkComposition(data.planets());
-        Table comparison = PlanetTables.comparison(data.planets(), data.host());
+        Table comparison = PlanetTables.comparison(data.planets(), data.host(), data.ci());
         Table phases = PlanetTables.zonePhases(data.planets());
         Table profile = PlanetTables.radialProfile(data.scan());
         run.writeCsv("bulk-composition.csv", bulk);
@@ -91,10 +100,11 @@ public final class PlanetReportWriter {
         ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
                 data.host()).chart(ChartSize.PAGE.widthPt(), 330), run, "radial-map", formats);
         ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
-                PlanetCharts.bars(data.planets(), data.errorBands()))
+                PlanetCharts.bars(data.planets(), data.errorBands()), data.ci())
                 .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
-        ChartRenderer.Rendered pattern = ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(),
-                data.t50K()).chart(ChartSize.PAGE), run, "devolatilisation", formats);
+        ChartRenderer.Rendered pattern = data.t50K() == null || data.t50K().isEmpty() ? null
+                : ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(), data.t50K())
+                        .chart(ChartSize.PAGE), run, "devolatilisation", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
                 .paragraph("Composition: " + data.composition() + ".")
@@ -113,7 +123,8 @@ public final class PlanetReportWriter {
                         : "Error bars: " + data.errorNote() + ". ")
                         + "References: " + PlanetCharts.REFERENCE_SOURCES + ".")
                 .table(comparison, "comparison.csv");
-        report.section("Devolatilisation pattern")
+        if (pattern != null) {
+            report.section("Devolatilisation pattern")
                 .chart(pattern, "Abundance of each element in the planets relative to the host star, both normalised "
                         + "to " + PlanetCharts.NORMALISING.symbol() + " (a refractory element), against the element's "
                         + "50% condensation temperature T50 computed by Nebulith for the host composition at 1e-4 bar "
@@ -121,6 +132,7 @@ public final class PlanetReportWriter {
                         + "photosphere (Asplund et al. 2009) for comparison, plotted at the same T50. Values below "
                         + "the axis are drawn at its bottom. The figure follows the form of Wang, Lineweaver & "
                         + "Ireland (2019, Icarus 328, 287).");
+        }
         report.section("Radial structure of the disk")
                 .chart(radial, "Top: midplane temperature (left axis) and pressure (right axis, log) of the disk. "
                         + "Middle: molar Mg/Si and Fe/Si of the local equilibrium solids, host-star ratios dotted, "
@@ -134,10 +146,12 @@ public final class PlanetReportWriter {
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
-                "radial-map.png", "radial-map.svg", "radial-map.pdf", "devolatilisation.png", "devolatilisation.svg",
-                "devolatilisation.pdf", "planet-comparison.png", "planet-comparison.svg",
+                "radial-map.png", "radial-map.svg", "radial-map.pdf", "planet-comparison.png", "planet-comparison.svg",
                 "planet-comparison.pdf", "summary.md")) {
             report.outputFile(f);
+        }
+        if (pattern != null) {
+            List.of("devolatilisation.png", "devolatilisation.svg", "devolatilisation.pdf").forEach(report::outputFile);
         }
         report.finish(Instant.now());
         run.writeText("report.html", HtmlReportWriter.write(report));

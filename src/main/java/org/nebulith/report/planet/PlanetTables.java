@@ -52,6 +52,8 @@ public final class PlanetTables {
                 if (c.hasRock()) {
                     t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
                             "R_earth (for " + m + " M_earth)");
+                    t.row(zp.zoneName(), "radius_Rearth_structure", StructureRadius.of(c, m),
+                            "R_earth (for " + m + " M_earth)");
                 }
             });
         }
@@ -64,12 +66,23 @@ public final class PlanetTables {
      * @return {@code comparison.csv}: zone,quantity,planet,host_star,bulk_earth,bulk_silicate_earth,ci_chondrite,unit
      */
     public static Table comparison(List<ZonePlanet> planets, ElementAbundances host) {
+        return comparison(planets, host, org.nebulith.composition.CiReference.DEFAULT);
+    }
+
+    /**
+     * @param planets the zone planets
+     * @param host    the host star's (gas) composition
+     * @param ci      the CI reference of the run (the {@code ci_chondrite} column)
+     * @return {@code comparison.csv} as {@link #comparison(List, ElementAbundances)}
+     */
+    public static Table comparison(List<ZonePlanet> planets, ElementAbundances host,
+                                   org.nebulith.composition.CiReference ci) {
         Table t = Table.withColumns("comparison.csv", "zone", "quantity", "planet", "host_star", "bulk_earth",
                 "bulk_silicate_earth", "ci_chondrite", "unit");
         Map<String, Double> hostRatios = MolarRatios.of(host);
         List<Map<String, Double>> refs = new ArrayList<>();
         for (String b : BODIES) {
-            ElementAbundances e = ReferenceBodies.get(b).elements();
+            ElementAbundances e = body(b, ci).elements();
             refs.add(e.isEmpty() ? Map.of() : MolarRatios.of(e));
         }
         for (ZonePlanet zp : planets) {
@@ -90,13 +103,17 @@ public final class PlanetTables {
             cmf.add(c.hasRock() ? c.coreMassFraction() : null);
             cmf.add(null);
             for (String b : BODIES) {
-                ReferenceBodies.Body body = ReferenceBodies.get(b);
+                ReferenceBodies.Body body = body(b, ci);
                 cmf.add(body.coreMassFraction().isPresent() ? body.coreMassFraction().getAsDouble() : null);
             }
             cmf.add("mass fraction of rock");
             t.row(cmf);
         }
         return t;
+    }
+
+    private static ReferenceBodies.Body body(String name, org.nebulith.composition.CiReference ci) {
+        return name.equals(ReferenceBodies.CI) ? ReferenceBodies.ci(ci) : ReferenceBodies.get(name);
     }
 
     /**

@@ -18,41 +18,50 @@ import org.nebulith.thermo.DataFormatException;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.Nasa9Model;
+import org.nebulith.thermo.ThermoModel;
 import org.nebulith.thermo.source.MineralTableReader.MineralRow;
 
 /**
- * Regenerates the bundled species file ({@code species.csv}) from the NASA Glenn file and the
- * mineral table kept in {@code src/data/thermo-sources}. The output is a pure function of the input
- * bytes, so the committed resource can be audited by running
- * <pre>java org.nebulith.thermo.source.DatabaseConverter nasa_glenn_thermo.inp minerals.csv species.csv</pre>
+ * Regenerates the bundled species file ({@code species.csv}) from the source folder
+ * {@code src/data/thermo-sources}. The output is a pure function of the input bytes, so the committed
+ * resource can be audited by running
+ * <pre>java org.nebulith.thermo.source.DatabaseConverter src/data/thermo-sources species.csv</pre>
  * and comparing. Selection: every neutral NASA gas and every NASA condensed entry made only of the
- * {@link Element}s Nebulith tracks, then every row of the mineral table.
+ * {@link Element}s Nebulith tracks, then every row of the mineral table and of the table of published
+ * rows added by this project. The corrections table is applied on the way ({@link Corrections}); the
+ * source files themselves stay as published.
  */
 public final class DatabaseConverter {
+    /** The NASA Glenn file in the source folder. */
+    public static final String NASA_FILE = "nasa_glenn_thermo.inp";
+    /** The mineral table copied unchanged from the shared thermodynamic sources. */
+    public static final String MINERAL_FILE = "minerals.csv";
+    /** Published rows added by this project, same columns as the mineral table. */
+    public static final String ADDED_MINERAL_FILE = "minerals-added.csv";
+
+    private static final String CORRECTED = " corrected by " + Corrections.FILE + ":";
+
     private DatabaseConverter() {
     }
 
     /**
-     * @param args NASA file, mineral table, output species file
+     * @param args source folder, output species file
      * @throws IOException on read or write failure
      */
     public static void main(String[] args) throws IOException {
-        if (args.length != 3) {
-            System.err.println("usage: DatabaseConverter <nasa_glenn_thermo.inp> <minerals.csv> <species.csv>");
+        if (args.length != 2) {
+            System.err.println("usage: DatabaseConverter <source folder> <species.csv>");
             System.exit(2);
         }
-        Path nasa = Path.of(args[0]);
-        Path minerals = Path.of(args[1]);
-        Path out = Path.of(args[2]);
-        if (Files.exists(out) && (Files.isSameFile(out, nasa) || Files.isSameFile(out, minerals))) {
-            System.err.println(out + ": refusing to overwrite an input file");
+        Path dir = Path.of(args[0]);
+        Path out = Path.of(args[1]).toAbsolutePath();
+        if (Files.isSameFile(out.getParent(), dir)) {
+            System.err.println(out + ": refusing to write into the source folder");
             System.exit(2);
         }
         try {
-            String csv = convert(Files.readAllBytes(nasa), nasa.getFileName().toString(),
-                    Files.readAllBytes(minerals), minerals.getFileName().toString());
-            Path dir = out.toAbsolutePath().getParent();
-            Path tmp = Files.createTempFile(dir, "species", ".tmp");
+            String csv = convert(dir);
+            Path tmp = Files.createTempFile(out.getParent(), "species", ".tmp");
             Files.writeString(tmp, csv, StandardCharsets.UTF_8);
             Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (DataFormatException ex) {
@@ -65,25 +74,40 @@ public final class DatabaseConverter {
     }
 
     /**
-     * @param nasaBytes     the NASA Glenn file
-     * @param nasaName      its file name
-     * @param mineralBytes  the mineral table
-     * @param mineralName   its file name
+     * @param dir the source folder holding {@value #NASA_FILE}, {@value #MINERAL_FILE},
+     *            {@value #ADDED_MINERAL_FILE} and {@value Corrections#FILE}
      * @return the species file text
      * @throws IOException on read failure
+     * @throws DataFormatException naming file, line and field of anything not understood
      */
-    public static String convert(byte[] nasaBytes, String nasaName, byte[] mineralBytes, String mineralName)
-            throws IOException {
+    public static String convert(Path dir) throws IOException {
+        byte[] nasa = Files.readAllBytes(dir.resolve(NASA_FILE));
+        byte[] minerals = Files.readAllBytes(dir.resolve(MINERAL_FILE));
+        byte[] added = Files.readAllBytes(dir.resolve(ADDED_MINERAL_FILE));
+        byte[] corr = Files.readAllBytes(dir.resolve(Corrections.FILE));
+        Corrections corrections = Corrections.read(new StringReader(utf8(corr)), Corrections.FILE);
+        List<MineralRow> rows = new ArrayList<>(MineralTableReader.read(new StringReader(utf8(minerals)), MINERAL_FILE));
+        rows.addAll(MineralTableReader.read(new StringReader(utf8(added)), ADDED_MINERAL_FILE));
+        List<String[]> inputs = List.of(new String[] {NASA_FILE, sha256(nasa)},
+                new String[] {MINERAL_FILE, sha256(minerals)}, new String[] {ADDED_MINERAL_FILE, sha256(added)},
+                new String[] {Corrections.FILE, sha256(corr)});
+        return convert(nasa, rows, inputs, corrections);
+    }
+
+    private static String utf8(byte[] b) {
+        return new String(b, StandardCharsets.UTF_8);
+    }
+
+    private static String convert(byte[] nasaBytes, List<MineralRow> minerals, List<String[]> inputs,
+                                  Corrections corrections) throws IOException {
         List<NasaGlennReader.Entry> nasa;
         try {
-            nasa = NasaGlennReader.read(new StringReader(new String(nasaBytes, StandardCharsets.US_ASCII)), nasaName);
+            nasa = NasaGlennReader.read(new StringReader(new String(nasaBytes, StandardCharsets.US_ASCII)), NASA_FILE);
         } catch (IllegalArgumentException ex) {
-            throw new DataFormatException(nasaName, 0, "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
+            throw new DataFormatException(NASA_FILE, 0, "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
         }
-        List<MineralRow> minerals = MineralTableReader.read(
-                new StringReader(new String(mineralBytes, StandardCharsets.UTF_8)), mineralName);
         SpeciesFileWriter w = new SpeciesFileWriter();
-        w.header(sha256(nasaBytes), nasaName, sha256(mineralBytes), mineralName);
+        w.header(inputs, corrections);
         List<NasaGlennReader.Entry> gases = new ArrayList<>();
         List<NasaGlennReader.Entry> condensed = new ArrayList<>();
         for (NasaGlennReader.Entry e : nasa) {
@@ -97,17 +121,18 @@ public final class DatabaseConverter {
             byName.put(e.name(), e);
         }
         for (NasaGlennReader.Entry e : gases) {
-            writeNasa(w, e, e.name(), "gas", "primary", "", nasaName, null);
+            writeNasa(w, e, e.name(), "gas", "primary", "", null, corrections);
         }
         for (NasaGlennReader.Entry e : condensed) {
-            writeNasa(w, e, e.name(), isLiquid(e) ? "liquid" : "solid", "primary", "", nasaName, null);
+            writeNasa(w, e, e.name(), isLiquid(e) ? "liquid" : "solid", "primary", "", null, corrections);
         }
         for (MineralRow m : minerals) {
             if (m.form().equals("nasa9")) {
-                writeNasaComposite(w, m, byName, nasaName, mineralName);
+                writeNasaComposite(w, m, byName, corrections);
             } else {
-                w.row(m.id(), "solid", m.formula().notation(), m.sourceKey(), mineralName + ":" + m.line(), m.role(),
-                        m.variant(), m.form(), m.tMin(), m.tMax(), m.params());
+                String note = corrections.enthalpyOfFormation(m.id()).map(c -> CORRECTED + c.line()).orElse("");
+                w.row(m.id(), "solid", m.formula().notation(), m.sourceKey(), m.file() + ":" + m.line() + note,
+                        m.role(), m.variant(), m.form(), m.tMin(), m.tMax(), correctedParams(m, corrections));
             }
         }
         return w.text();
@@ -134,31 +159,67 @@ public final class DatabaseConverter {
         return e.name().endsWith("(L)") || e.comment().startsWith("Liquid");
     }
 
+    /**
+     * @param e           a NASA entry as published
+     * @param corrections the corrections table
+     * @return the intervals with the enthalpy of formation corrected (b1 of every interval shifted by the
+     *         change / R), or the published intervals
+     */
+    static List<Nasa9Model.Interval> correctedIntervals(NasaGlennReader.Entry e, Corrections corrections) {
+        Corrections.Correction c = corrections.enthalpyOfFormation(e.name()).orElse(null);
+        if (c == null) {
+            return e.intervals();
+        }
+        Corrections.checkApplies(c, e.hf298(), Corrections.FILE);
+        List<Nasa9Model.Interval> ivs = new ArrayList<>();
+        for (Nasa9Model.Interval iv : e.intervals()) {
+            double[] k = iv.coefficients().clone();
+            k[7] += c.shift() / ThermoModel.R;
+            ivs.add(new Nasa9Model.Interval(iv.tLowK(), iv.tHighK(), k));
+        }
+        return ivs;
+    }
+
+    private static String correctedParams(MineralRow m, Corrections corrections) {
+        Corrections.Correction c = corrections.enthalpyOfFormation(m.id()).orElse(null);
+        if (c == null) {
+            return m.params();
+        }
+        String key = "H_f_298=";
+        int at = m.params().indexOf(key) + key.length();
+        int end = m.params().indexOf(';', at);
+        Corrections.checkApplies(c, Double.parseDouble(m.params().substring(at, end)), Corrections.FILE);
+        return m.params().substring(0, at) + c.correctedValue() + m.params().substring(end);
+    }
+
     private static void writeNasa(SpeciesFileWriter w, NasaGlennReader.Entry e, String id, String state, String role,
-                                  String variant, String nasaName, String via) {
+                                  String variant, String via, Corrections corrections) {
         Formula f = formula(e);
-        for (int i = 0; i < e.intervals().size(); i++) {
-            Nasa9Model.Interval iv = e.intervals().get(i);
+        List<Nasa9Model.Interval> ivs = correctedIntervals(e, corrections);
+        String note = corrections.enthalpyOfFormation(e.name()).map(c -> CORRECTED + c.line()).orElse("");
+        for (int i = 0; i < ivs.size(); i++) {
+            Nasa9Model.Interval iv = ivs.get(i);
             StringBuilder p = new StringBuilder();
             for (double c : iv.coefficients()) {
                 p.append(p.length() == 0 ? "" : " ").append(c);
             }
-            String row = nasaName + ":" + e.intervalLines().get(i) + (via == null ? "" : " " + e.name() + " via " + via);
+            String row = NASA_FILE + ":" + e.intervalLines().get(i) + (via == null ? "" : " " + e.name() + " via " + via)
+                    + note;
             w.row(id, state, f.notation(), "NASA-Glenn-2002", row, role, variant, "nasa9",
                     Double.toString(iv.tLowK()), Double.toString(iv.tHighK()), p.toString());
         }
     }
 
     private static void writeNasaComposite(SpeciesFileWriter w, MineralRow m, Map<String, NasaGlennReader.Entry> byName,
-                                           String nasaName, String mineralName) {
+                                           Corrections corrections) {
         for (String n : m.nasaEntries()) {
             NasaGlennReader.Entry e = byName.get(n);
             if (e == null || !e.condensed() || !m.formula().equals(formula(e))) {
-                throw new DataFormatException(mineralName, m.line(), "source_table_or_file", "NASA species '" + n
+                throw new DataFormatException(m.file(), m.line(), "source_table_or_file", "NASA species '" + n
                         + "' is missing or has another composition", "names of NASA condensed entries of formula "
                         + m.formula().notation());
             }
-            writeNasa(w, e, m.id(), "solid", m.role(), m.variant(), nasaName, mineralName + ":" + m.line());
+            writeNasa(w, e, m.id(), "solid", m.role(), m.variant(), m.file() + ":" + m.line(), corrections);
         }
     }
 

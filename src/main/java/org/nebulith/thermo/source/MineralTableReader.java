@@ -86,9 +86,11 @@ final class MineralTableReader {
      * @param tMax        T_max_K text (may be empty)
      * @param params      params text (mineral forms)
      * @param nasaEntries NASA entry names making up a {@code nasa9} row
+     * @param file        the table's file name
      */
     record MineralRow(String id, String baseName, String variant, String role, Formula formula, String sourceKey,
-                      long line, String form, String tMin, String tMax, String params, List<String> nasaEntries) {
+                      long line, String form, String tMin, String tMax, String params, List<String> nasaEntries,
+                      String file) {
     }
 
     private MineralTableReader() {
@@ -181,11 +183,11 @@ final class MineralTableReader {
                         "'(species A, B, ...)'");
             }
             List<String> names = List.of(m.group(1).split(",\\s*"));
-            return new MineralRow(id, base, variant, role, formula, src[1], line(r), "nasa9", "", "", "", names);
+            return new MineralRow(id, base, variant, role, formula, src[1], line(r), "nasa9", "", "", "", names, file);
         }
         MineralForm form = form(cpForm, r, file);
         return new MineralRow(id, base, variant, role, formula, src[1], line(r), form.code(),
-                r.get("T_min_K").trim(), r.get("T_max_K").trim(), params(r, file, form), List.of());
+                r.get("T_min_K").trim(), r.get("T_max_K").trim(), params(r, file, form), List.of(), file);
     }
 
     private static MineralForm form(String cpForm, CSVRecord r, String file) {
