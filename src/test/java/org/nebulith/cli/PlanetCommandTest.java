@@ -107,4 +107,14 @@ class PlanetCommandTest {
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("half_width_AU"), err.toString(StandardCharsets.UTF_8));
         assertFalse(Files.exists(dir.resolve("run")));
     }
+
+    @Test
+    void badAbundanceErrorsAreBadInputBeforeAnyComputing() throws Exception {
+        Path outDir = dir.resolve("err-run");
+        assertEquals(2, run("planet", "--abundance-errors", "Fe=0.05,Xx=0.1", "--out", outDir.toString()));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("--abundance-errors") && e.contains("Xx=0.1"), e);
+        assertEquals(1, e.strip().lines().count(), e);
+        assertFalse(Files.exists(outDir));
+    }
 }
