@@ -128,7 +128,7 @@ public final class Axis {
         }
         for (int e = (int) Math.floor(Math.log10(min)); e <= Math.ceil(Math.log10(max)); e++) {
             for (int m = 2; m <= 9; m++) {
-                double v = m * Math.pow(10, e);
+                double v = Double.parseDouble(m + "e" + e);
                 if (contains(v)) {
                     out.add(v);
                 }
@@ -155,7 +155,7 @@ public final class Axis {
         double step = linearStep();
         List<Double> out = new ArrayList<>();
         for (double k = Math.ceil(min / step - 1e-9); k * step <= max + 1e-9 * step; k++) {
-            out.add(k * step);
+            out.add(k * step + 0.0); // + 0.0 turns -0.0 into 0.0
         }
         return out;
     }
@@ -180,7 +180,7 @@ public final class Axis {
                 ? new double[] {1, 2, 5} : new double[] {1};
         for (int e = (int) Math.floor(Math.log10(min)); e <= Math.ceil(Math.log10(max)); e++) {
             for (double m : mantissas) {
-                double v = m * Math.pow(10, e);
+                double v = Double.parseDouble(m + "e" + e); // exact decimal, not 3 * 0.1
                 if (contains(v)) {
                     out.add(v);
                 }
