@@ -178,6 +178,9 @@ public final class PlanetCommand extends RunCommand {
             for (ZonePlanet zp : planets) {
                 context.out().println(PlanetReportWriter.summary(zp));
             }
+            for (ZonePlanet zp : planets) {
+                org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
+            }
             context.out().println("report: " + done.resolve("report.html"));
             PlanetReportWriter.CAUTIONS.forEach(context::warn);
         }

@@ -69,8 +69,16 @@ public class SurveyCommand extends RunCommand {
             description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
     private String solarReference;
 
-    @Option(names = "--skip-bad", description = "Skip bad catalogue rows and failing stars (listed) instead of stopping.")
+    @Option(names = "--skip-bad", description = "Skip bad catalogue rows (listed in survey-stars.csv) instead of stopping.")
     private boolean skipBad;
+
+    @Option(names = "--max-failed-fraction", paramLabel = "F", defaultValue = "0.01",
+            description = "Stop (exit 3, resumable) once failed draws exceed this fraction of the run's draws"
+                    + " (default: ${DEFAULT-VALUE}); failed draws are listed in failures.csv.")
+    private double maxFailedFraction;
+
+    @Option(names = "--strict", description = "Stop (exit 3, resumable) at the first failed draw or star.")
+    private boolean strict;
 
     @Option(names = "--resume", description = "Continue an earlier or interrupted run in the output folder.")
     private boolean resume;
@@ -113,6 +121,10 @@ public class SurveyCommand extends RunCommand {
         if (workers < 1) {
             throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
         }
+        if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
+            throw InputException.atOption("--max-failed-fraction", maxFailedFraction, "must be a fraction",
+                    "a number from 0 to 1");
+        }
         context.input(catalogue, "catalogue");
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
@@ -120,7 +132,7 @@ public class SurveyCommand extends RunCommand {
         String base = catalogue.getFileName().toString().replaceFirst("\\.csv$", "");
         Path folder = context.outputFolder("survey-" + (base.matches("[A-Za-z0-9._-]+") ? base : "catalogue"));
         LocalSurvey.Request request = new LocalSurvey.Request(catalogue, catalogue.toString(), folder, settings, workers,
-                skipBad, resume, context.force());
+                skipBad, resume, context.force(), maxFailedFraction, strict);
         NebulithCommand root = (NebulithCommand) spec.root().userObject();
         LocalSurvey.Log log = new LocalSurvey.Log() {
             @Override
@@ -140,7 +152,9 @@ public class SurveyCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "survey: %d stars (%d taken over with --resume), %d skipped, %d failed;"
                 + " %d draws in %.1f s on %d threads", r.stars(), r.resumed(), r.skipped(), r.failed(), r.draws(),
                 seconds, workers));
-        context.info("wrote " + r.survey() + " with survey-stars.csv, survey-notes.txt and survey-chart.png/.svg");
+        context.info("wrote " + r.survey() + " with failures.csv, survey-stars.csv, survey-notes.txt and"
+                + " survey-chart.png/.svg");
+        context.out().println(r.failureLine());
         return ExitCodes.OK;
     }
 

@@ -5,7 +5,10 @@ import java.util.Arrays;
 /**
  * Monotone piecewise-cubic Hermite interpolation (Fritsch &amp; Carlson 1980, SIAM J. Numer. Anal.
  * 17, 238): between two nodes the interpolant stays within their values, so it never overshoots
- * the data; it reproduces a straight line exactly. Nodes x must increase strictly.
+ * the data; it reproduces a straight line exactly. Nodes x must increase strictly. At a node, and
+ * everywhere on a flat segment (two neighbouring nodes of equal value), it returns the node's value
+ * exactly: a table held at one temperature gives that temperature bit for bit, not a value one
+ * rounding error above or below it (which matters where thermodynamic data change piece there).
  */
 public final class MonotoneCubic {
     private final double[] x;
@@ -65,16 +68,35 @@ public final class MonotoneCubic {
      * @return the interpolated value
      */
     public double value(double xq) {
-        int i = Arrays.binarySearch(x, xq);
-        if (i >= 0) {
-            return y[i];
+        int node = exactNode(xq);
+        if (node >= 0) {
+            return y[node];
         }
-        int k = Math.max(0, Math.min(x.length - 2, -i - 2));
+        int k = segment(xq);
         double h = x[k + 1] - x[k];
         double t = (xq - x[k]) / h;
         double t2 = t * t;
         double t3 = t2 * t;
         return (2 * t3 - 3 * t2 + 1) * y[k] + (t3 - 2 * t2 + t) * h * m[k]
                 + (-2 * t3 + 3 * t2) * y[k + 1] + (t3 - t2) * h * m[k + 1];
+    }
+
+    /**
+     * @param xq a point within [x_0, x_last]
+     * @return the index of a node whose value the interpolant takes exactly at xq (xq is that node,
+     *         or lies on a flat segment starting there), or -1
+     */
+    public int exactNode(double xq) {
+        int i = Arrays.binarySearch(x, xq);
+        if (i >= 0) {
+            return i;
+        }
+        int k = segment(xq);
+        return y[k] == y[k + 1] ? k : -1;
+    }
+
+    private int segment(double xq) {
+        int i = Arrays.binarySearch(x, xq);
+        return Math.max(0, Math.min(x.length - 2, i >= 0 ? i : -i - 2));
     }
 }

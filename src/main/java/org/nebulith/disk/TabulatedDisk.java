@@ -13,6 +13,9 @@ public final class TabulatedDisk implements DiskModel {
     private final MonotoneCubic logP;
     private final MonotoneCubic logSigma;
     private final String description;
+    private final double[] tK;
+    private final double[] pBar;
+    private final double[] sigma;
 
     /**
      * @param rAU         strictly increasing radii [AU], &gt; 0 (at least 2)
@@ -33,6 +36,9 @@ public final class TabulatedDisk implements DiskModel {
         this.rMin = rAU[0];
         this.rMax = rAU[n - 1];
         this.description = description;
+        this.tK = tK.clone();
+        this.pBar = pBar.clone();
+        this.sigma = sigmaGcm2.clone();
     }
 
     private static double[] logs(double[] v, String name) {
@@ -50,7 +56,13 @@ public final class TabulatedDisk implements DiskModel {
     public DiskState stateAt(double rAU) {
         checkRange(rAU);
         double lr = Math.log(rAU);
-        return new DiskState(rAU, Math.exp(logT.value(lr)), Math.exp(logP.value(lr)), Math.exp(logSigma.value(lr)));
+        return new DiskState(rAU, interpolate(logT, tK, lr), interpolate(logP, pBar, lr),
+                interpolate(logSigma, sigma, lr));
+    }
+
+    private static double interpolate(MonotoneCubic logs, double[] rows, double lr) {
+        int node = logs.exactNode(lr);
+        return node >= 0 ? rows[node] : Math.exp(logs.value(lr));
     }
 
     @Override

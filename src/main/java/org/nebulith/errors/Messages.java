@@ -36,6 +36,13 @@ public enum Messages {
             + " (residual {4})"),
     /** A numerical result is unusable: what, T [K], P [bar], composition. */
     NUMERICAL_FAILURE(4, "{0} at T = {1} K, P = {2} bar, composition {3}"),
+    /** A numerical failure inside a feeding zone: zone, r [AU], T [K], P [bar], what failed. */
+    ZONE_STATE_FAILURE(5, "zone \"{0}\", r = {1} AU, T = {2} K, P = {3} bar: {4}"),
+    /** A survey's failed draws exceed its limit: failed draws, draws of the run, the limit (fraction). */
+    TOO_MANY_FAILED_DRAWS(3, "{0} of {1} draws failed, more than --max-failed-fraction {2} of all draws of the run;"
+            + " the failures are listed in .failures.csv.partial"),
+    /** A strict survey stopped at its first failure: the failure (star, stage, zone, state, reason). */
+    STRICT_FAILURE(1, "--strict: stopped at the first failed estimate: {0}"),
     /** A non-finite number reached an output table: table, column, row (1-based, header excluded), value. */
     NON_FINITE_OUTPUT(4, "{0}: column \"{1}\", row {2}: value {3} is not a finite number; nothing was written"),
     /** A condensation sequence stopped on a state without a checked equilibrium: the solver's message (names T, P, composition). */

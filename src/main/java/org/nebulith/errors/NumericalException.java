@@ -46,4 +46,21 @@ public final class NumericalException extends NebulithException {
                                              final String composition) {
         return new NumericalException(Messages.NUMERICAL_FAILURE, null, what, tK, pBar, composition);
     }
+
+    /**
+     * A numerical failure at one radius of a feeding zone (an equilibrium that does not converge,
+     * an integral that cannot be resolved).
+     *
+     * @param zone  the zone's name
+     * @param rAU   the radius [AU]
+     * @param tK    the disk's temperature there [K]
+     * @param pBar  the disk's pressure there [bar]
+     * @param what  what failed
+     * @param cause the underlying failure, or null
+     * @return the exception
+     */
+    public static NumericalException inZone(final String zone, final double rAU, final double tK, final double pBar,
+                                            final String what, final Throwable cause) {
+        return new NumericalException(Messages.ZONE_STATE_FAILURE, cause, zone, rAU, tK, pBar, what);
+    }
 }

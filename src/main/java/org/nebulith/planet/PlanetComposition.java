@@ -54,6 +54,33 @@ public record PlanetComposition(ElementAbundances bulk, ElementAbundances core, 
         return waterMassG / bulk.massGrams();
     }
 
+    /**
+     * @return whether the mantle Mg# means anything: the mantle holds Mg and Fe as a major part
+     *         (MgO + FeO at least {@value #MG_NUMBER_MIN_WT_PCT} wt% of its oxides; our threshold). A
+     *         mantle of Ca-Al oxides with a trace of Mg would otherwise get "Mg# 100".
+     */
+    public boolean hasMgNumber() {
+        if (oxides == null || !oxides.hasMgNumber()) {
+            return false;
+        }
+        double mgFe = oxides.oxideWtPct().getOrDefault("MgO", 0.0) + oxides.oxideWtPct().getOrDefault("FeO", 0.0);
+        return mgFe >= MG_NUMBER_MIN_WT_PCT;
+    }
+
+    /** Smallest MgO + FeO [wt% of the mantle oxides] for which a mantle Mg# is reported. */
+    public static final double MG_NUMBER_MIN_WT_PCT = 1.0;
+
+    /**
+     * @return mass fraction of the solids (ices included) that the refractory oxides CaO, Al2O3 and
+     *         TiO2 would make of the solids' Ca, Al and Ti
+     */
+    public double refractoryOxideFraction() {
+        double m = bulk.moles(Element.Ca) * (Element.Ca.atomicWeight() + Element.O.atomicWeight())
+                + bulk.moles(Element.Al) * (Element.Al.atomicWeight() + 1.5 * Element.O.atomicWeight())
+                + bulk.moles(Element.Ti) * (Element.Ti.atomicWeight() + 2 * Element.O.atomicWeight());
+        return m / bulk.massGrams();
+    }
+
     /** @return bulk molar ratios ({@link MolarRatios}) */
     public Map<String, Double> molarRatios() {
         return MolarRatios.of(bulk);
@@ -69,7 +96,7 @@ public record PlanetComposition(ElementAbundances bulk, ElementAbundances core, 
         if (hasRock()) {
             q.add(new Quantity("core_mass_fraction", coreMassFraction(), "mass fraction of rock"));
         }
-        if (oxides != null && oxides.hasMgNumber()) {
+        if (hasMgNumber()) {
             q.add(new Quantity("mantle_Mg_number", oxides.mgNumber(), "100 Mg/(Mg+Fe) molar"));
         }
         q.add(new Quantity("ice_mass_fraction", iceMassFraction(), "mass fraction of solids"));

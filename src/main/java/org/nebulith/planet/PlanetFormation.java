@@ -12,6 +12,8 @@ import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
+import org.nebulith.thermo.PieceJumps;
+import org.nebulith.thermo.Species;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;
@@ -26,6 +28,7 @@ public final class PlanetFormation {
     private final FormationSettings settings;
     private final EquilibriumSolver solver;
     private final ConcurrentHashMap<Set<Element>, ChemicalSystem> systems = new ConcurrentHashMap<>();
+    private final ConcurrentHashMap<ChemicalSystem, Double> continuity = new ConcurrentHashMap<>();
 
     /**
      * @param settings the settings
@@ -63,8 +66,26 @@ public final class PlanetFormation {
      * @return the zone's planet
      */
     public ZonePlanet zonePlanet(FeedingZone zone, DiskModel disk, LocalCondensation local) {
-        ZoneInventory inv = settings.integration().integrate(zone, disk, local);
+        ZoneInventory inv = settings.integration().integrate(zone, disk, local, continuity(local.system()));
         return new ZonePlanet(inv, PlanetModel.build(condensedPhases(inv), settings.core()));
+    }
+
+    /**
+     * @param sys a system built here
+     * @return the largest jump of G/RT between the NASA-9 pieces of its species at or above the floor
+     *         temperature (no equilibrium is computed below it; {@link PieceJumps})
+     */
+    public double continuity(ChemicalSystem sys) {
+        return continuity.computeIfAbsent(sys, s -> {
+            Set<Element> els = EnumSet.copyOf(s.elements());
+            List<Species> mine = new ArrayList<>();
+            for (Species sp : settings.system().species()) {
+                if (sp.formula().madeOnlyOf(els)) {
+                    mine.add(sp);
+                }
+            }
+            return PieceJumps.largest(mine, settings.floorK());
+        });
     }
 
     /**

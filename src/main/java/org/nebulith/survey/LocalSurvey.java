@@ -16,6 +16,7 @@ import java.util.function.LongFunction;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
+import org.nebulith.errors.NumericalException;
 import org.nebulith.progress.Progress;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunInputs;
@@ -28,9 +29,14 @@ import org.nebulith.report.RunInputs;
  * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into the hidden {@code .survey.csv.partial}
  *     (flushed after every star) and renamed at the end; an interrupted or failed run leaves the
  *     partial file for {@code --resume} and nothing under the final name;</li>
+ * <li>{@code failures.csv} ({@link SurveyFailures}): every failed estimate, streamed the same way
+ *     into {@code .failures.csv.partial} (a star's failures before its rows) and renamed at the end;</li>
  * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
  *     cautions) and {@code survey-chart.png/.svg} ({@link SurveyChart}), written at the end.</li>
  * </ul>
+ * A failed draw does not stop the run; the run stops (a {@link NumericalException}, exit 3, the
+ * partial files kept for {@code --resume}) when the failed draws exceed the request's fraction of
+ * the run's draws, or at the first failure when it is strict.
  * The files do not depend on the thread count.
  */
 public final class LocalSurvey {
@@ -38,6 +44,10 @@ public final class LocalSurvey {
     static final String PARTIAL = ".survey.csv.partial";
     static final String NEXT = ".survey.csv.next";
     static final String NOTES = "survey-notes.txt";
+    static final String FAILURES_PARTIAL = ".failures.csv.partial";
+    static final String FAILURES_NEXT = ".failures.csv.next";
+    /** Default of {@code --max-failed-fraction}. */
+    public static final double DEFAULT_MAX_FAILED_FRACTION = 0.01;
     private static final int SHOWN_PROBLEMS = 100;
 
     /**
@@ -46,12 +56,26 @@ public final class LocalSurvey {
      * @param folder    the output folder
      * @param settings  the run settings
      * @param threads   worker threads
-     * @param skipBad   skip bad rows and failing stars (listed) instead of stopping
+     * @param skipBad   skip bad catalogue rows (listed) instead of stopping
      * @param resume    continue an earlier run in the folder
      * @param force     replace an earlier run in the folder
+     * @param maxFailedFraction stop once the failed draws exceed this fraction of the run's draws, in [0, 1]
+     * @param strict    stop at the first failed estimate
      */
     public record Request(Path catalogue, String shownName, Path folder, SurveySettings settings, int threads,
-                          boolean skipBad, boolean resume, boolean force) {
+                          boolean skipBad, boolean resume, boolean force, double maxFailedFraction, boolean strict) {
+        public Request {
+            if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
+                throw new IllegalArgumentException("max failed fraction must be in [0, 1], got " + maxFailedFraction);
+            }
+        }
+
+        /** A request with the default failure policy ({@value #DEFAULT_MAX_FAILED_FRACTION}, not strict). */
+        public Request(Path catalogue, String shownName, Path folder, SurveySettings settings, int threads,
+                       boolean skipBad, boolean resume, boolean force) {
+            this(catalogue, shownName, folder, settings, threads, skipBad, resume, force, DEFAULT_MAX_FAILED_FRACTION,
+                    false);
+        }
     }
 
     /** Where messages go. */
@@ -67,11 +91,18 @@ public final class LocalSurvey {
      * @param stars    stars in survey.csv
      * @param resumed  of which taken over from an earlier run
      * @param skipped  bad catalogue rows skipped
-     * @param failed   stars whose estimate failed (skipped)
+     * @param failed   stars whose nominal estimate failed
      * @param draws    draws computed in this run
+     * @param failedDraws draws that failed, in the whole survey (resumed stars included)
+     * @param runDraws    draws of the whole survey (stars x draws)
      * @param survey   the survey table
      */
-    public record Result(long stars, long resumed, long skipped, long failed, long draws, Path survey) {
+    public record Result(long stars, long resumed, long skipped, long failed, long draws, long failedDraws,
+                         long runDraws, Path survey) {
+        /** @return the closing line: "k of N draws failed (failures.csv)" */
+        public String failureLine() {
+            return failedDraws + " of " + runDraws + " draws failed (" + SurveyFailures.FILE + ")";
+        }
     }
 
     private LocalSurvey() {
@@ -105,28 +136,36 @@ public final class LocalSurvey {
         check.problems().forEach(p -> reasons.putIfAbsent(p.line(), p.text(request.shownName())));
         Path starsPartial = folder.resolve("." + StarsTable.FILE + ".partial");
         Path writing = source == null ? partial : folder.resolve(NEXT);
+        Path failuresPartial = folder.resolve(FAILURES_PARTIAL);
+        Path failuresWriting = source == null ? failuresPartial : folder.resolve(FAILURES_NEXT);
         Counter counter = new Counter();
+        counter.runDraws = check.goodRows() * request.settings().draws();
         boolean finished = false;
         try (Progress bar = progress.apply(check.goodRows() * request.settings().draws());
              CatalogueReader reader = CatalogueReader.open(request.catalogue());
              BufferedWriter starsOut = Files.newBufferedWriter(starsPartial, StandardCharsets.UTF_8)) {
             StarsTable stars = new StarsTable(starsOut, check.bad(), reasons, request.settings().solar());
             Iterator<StarRow> rows = goodRows(reader, check.bad());
-            OutputSink sink = new OutputSink(Files.newBufferedWriter(writing, StandardCharsets.UTF_8), stars, counter, log);
+            OutputSink sink = new OutputSink(Files.newBufferedWriter(writing, StandardCharsets.UTF_8),
+                    Files.newBufferedWriter(failuresWriting, StandardCharsets.UTF_8), stars, counter, request);
             try {
                 sink.header();
                 if (source != null) {
-                    try (ExistingSurvey existing = ExistingSurvey.open(source)) {
-                        counter.resumed = SurveyResume.copyDone(existing, rows, request.settings(), estimators,
-                                request.skipBad(), bar, sink);
+                    Path oldFailures = source.equals(partial) ? failuresPartial : folder.resolve(SurveyFailures.FILE);
+                    try (ExistingSurvey existing = ExistingSurvey.open(source);
+                         ExistingFailures old = ExistingFailures.open(oldFailures)) {
+                        counter.resumed = SurveyResume.copyDone(existing, old, rows, request.settings(), estimators,
+                                bar, sink);
                     }
                     sink.close();
                     Files.move(writing, partial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+                    Files.move(failuresWriting, failuresPartial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
                     sink = new OutputSink(Files.newBufferedWriter(partial, StandardCharsets.UTF_8,
-                            StandardOpenOption.APPEND), stars, counter, log);
+                            StandardOpenOption.APPEND), Files.newBufferedWriter(failuresPartial, StandardCharsets.UTF_8,
+                            StandardOpenOption.APPEND), stars, counter, request);
                 }
                 SurveyRunner.Summary s = SurveyRunner.run(rows, request.settings(), estimators, request.threads(),
-                        request.skipBad(), bar, sink);
+                        bar, sink);
                 counter.draws = s.draws();
             } finally {
                 sink.close();
@@ -137,22 +176,25 @@ public final class LocalSurvey {
             if (!finished) {
                 Files.deleteIfExists(starsPartial);
                 Files.deleteIfExists(folder.resolve(NEXT));
+                Files.deleteIfExists(folder.resolve(FAILURES_NEXT));
                 if (Files.exists(partial)) {
-                    log.warn("the survey stopped; the stars done so far are kept in " + partial
-                            + "; run again with --resume to continue");
+                    log.warn("the survey stopped; the stars done so far are kept in " + partial + " (failures in "
+                            + failuresPartial.getFileName() + "); run again with --resume to continue");
                 }
             }
         }
         long skipped = check.bad().size();
-        AtomicOutput.writeText(folder.resolve(NOTES), SurveyNotes.text(request, counter.stars, skipped, counter.failed),
-                true, inputs);
+        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed, counter.failedDraws,
+                counter.runDraws);
+        AtomicOutput.writeText(folder.resolve(NOTES), notes, true, inputs);
         Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         byte[] png = SurveyChart.write(partial, folder, inputs);
-        String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed);
         SurveyReport.write(new SurveyReport.Run(folder, request, started, notes, png, folder.resolve(StarsTable.FILE),
                 partial, inputs));
+        Files.move(failuresPartial, folder.resolve(SurveyFailures.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
         Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, survey);
+        return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, counter.failedDraws,
+                counter.runDraws, survey);
     }
 
     private static void reportProblems(Request request, CatalogueCheck check, Log log) {
@@ -181,7 +223,8 @@ public final class LocalSurvey {
     }
 
     private static void checkOutputs(Request request, RunInputs inputs, Path partial, Path survey) {
-        for (String name : List.of(SurveyCsv.FILE, StarsTable.FILE, NOTES, PARTIAL, NEXT)) {
+        for (String name : List.of(SurveyCsv.FILE, StarsTable.FILE, NOTES, PARTIAL, NEXT, SurveyFailures.FILE,
+                FAILURES_PARTIAL, FAILURES_NEXT)) {
             inputs.checkNotInput(request.folder().resolve(name));
         }
         if (request.resume() || request.force()) {
@@ -236,47 +279,69 @@ public final class LocalSurvey {
         long resumed;
         long failed;
         long draws;
+        long failedDraws;
+        long runDraws;
     }
 
-    /** Writes each star's block (flushed, so an interruption keeps whole stars) and its notes row. */
+    /**
+     * Writes each star's failures, then its block (both flushed, so an interruption keeps whole stars),
+     * and its stars-table row; stops the run when the failure policy says so.
+     */
     private static final class OutputSink implements SurveyRunner.Sink {
         private final BufferedWriter out;
+        private final BufferedWriter failures;
         private final StarsTable stars;
         private final Counter counter;
-        private final Log log;
+        private final Request request;
         private boolean closed;
 
-        OutputSink(BufferedWriter out, StarsTable stars, Counter counter, Log log) {
+        OutputSink(BufferedWriter out, BufferedWriter failures, StarsTable stars, Counter counter, Request request) {
             this.out = out;
+            this.failures = failures;
             this.stars = stars;
             this.counter = counter;
-            this.log = log;
+            this.request = request;
         }
 
         void header() throws IOException {
             out.write(SurveyCsv.HEADER);
             out.flush();
+            failures.write(SurveyFailures.HEADER);
+            failures.flush();
         }
 
         @Override
-        public void completed(StarRow row, List<SurveyRow> rows, String block) throws IOException {
-            out.write(block);
+        public void completed(SurveyRunner.StarOutput star) throws IOException {
+            failures.write(star.failures());
+            failures.flush();
+            out.write(star.block());
             out.flush();
-            stars.computed(row);
-            counter.stars++;
-        }
-
-        @Override
-        public void failed(StarRow row, StarJobException failure) throws IOException {
-            log.warn("--skip-bad: skipping " + failure.getMessage());
-            stars.failed(row, failure);
-            counter.failed++;
+            int draws = request.settings().draws();
+            if (star.starFailure() == null) {
+                stars.computed(star.row(), star.failedDraws(), draws);
+                counter.stars++;
+            } else {
+                stars.failed(star.row(), star.starFailure());
+                counter.failed++;
+            }
+            counter.failedDraws += star.failedDraws();
+            if (request.strict() && !star.failures().isEmpty()) {
+                throw new NumericalException(Messages.STRICT_FAILURE, null, SurveyFailures.describeFirst(star.failures()));
+            }
+            if (counter.failedDraws > request.maxFailedFraction() * counter.runDraws) {
+                throw new NumericalException(Messages.TOO_MANY_FAILED_DRAWS, null, counter.failedDraws,
+                        counter.runDraws, request.maxFailedFraction());
+            }
         }
 
         void close() throws IOException {
             if (!closed) {
                 closed = true;
-                out.close();
+                try {
+                    out.close();
+                } finally {
+                    failures.close();
+                }
             }
         }
     }

@@ -12,8 +12,11 @@ import org.nebulith.planet.Quantity;
  * <p>Contract for implementations: the same composition gives the same result (bit for bit), on
  * any thread; every composition of one star gives the same zones and quantities (names, units,
  * order), so that draws can be compared quantity by quantity (a quantity that does not apply, such
- * as an ice fraction in a hot zone, is reported as 0, not left out); the zone name {@code host} is
- * reserved for the star's own ratios. Failures (non-convergence) are thrown, naming the state.
+ * as a core mass fraction without rock, is marked {@link Quantity#notApplicable}, not left out and
+ * not 0); the zone name {@code host} is reserved for the star's own ratios. Failures
+ * (non-convergence) are thrown, naming the state
+ * ({@link org.nebulith.errors.NumericalException#inZone} names the zone, radius, T and P); the
+ * survey records them and goes on.
  */
 public interface PlanetEstimator {
 

@@ -42,7 +42,12 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     public static final String DEFAULT_DISK = DiskPresets.STEADY_VISCOUS_DEFAULT;
     /** Default zone file of surveys (classpath copy of the top-level folder). */
     public static final String DEFAULT_ZONES = "feeding-zones/survey-default.csv";
-    /** Quantities reported per zone, in this order (0 where one does not apply). */
+    /**
+     * Quantities reported per zone, in this order; one that does not apply (no solids, no rock for a
+     * core mass fraction, no Si for a ratio to Si, no Mg and Fe in the mantle for Mg#, no mantle for
+     * its oxides) is marked {@link Quantity#notApplicable}, never 0. An oxide absent from a mantle
+     * that exists is a true 0.
+     */
     public static final List<String> QUANTITIES = List.of("Mg_Si_molar", "Fe_Si_molar", "Ca_Si_molar",
             "Al_Si_molar", "Ti_Si_molar", "Ni_Fe_molar", "S_Si_molar", "O_Si_molar", "core_mass_fraction",
             "mantle_Mg_number", "ice_mass_fraction", "mantle_SiO2_wt_pct", "mantle_MgO_wt_pct", "mantle_FeO_wt_pct",
@@ -144,19 +149,27 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         return out;
     }
 
-    /** @param zp a zone planet @return the fixed list of quantities (0 where one does not apply) */
+    /** @param zp a zone planet @return the fixed list of quantities (marked where one does not apply) */
     static List<Quantity> quantities(ZonePlanet zp) {
         Map<String, Quantity> have = new LinkedHashMap<>();
+        boolean mantle = false;
         if (zp.planet().hasSolids()) {
             PlanetComposition c = zp.planet().require();
             for (Quantity q : c.quantities()) {
                 have.put(q.name(), q);
+                mantle |= q.name().startsWith("mantle_") && q.name().endsWith("_wt_pct");
             }
         }
         List<Quantity> out = new ArrayList<>();
         for (String name : QUANTITIES) {
             Quantity q = have.get(name);
-            out.add(q != null ? q : new Quantity(name, 0.0, unitOf(name)));
+            if (q != null) {
+                out.add(q);
+            } else if (mantle && name.startsWith("mantle_") && name.endsWith("_wt_pct")) {
+                out.add(new Quantity(name, 0.0, unitOf(name)));
+            } else {
+                out.add(Quantity.notApplicable(name, unitOf(name)));
+            }
         }
         return out;
     }

@@ -10,6 +10,7 @@ import java.util.Set;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.composition.SolarReference;
 import org.nebulith.composition.StellarAbundances;
+import org.nebulith.format.Decimal;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.Quantity;
 import org.nebulith.thermo.Element;
@@ -26,7 +27,9 @@ import org.nebulith.thermo.Element;
  * row's error correlation (0: independent errors). Each draw is still exactly Normal; the pairing
  * makes the medians converge much faster (the Normal is symmetric). Elements the star lacks follow
  * the drawn [Fe/H] ({@link StellarAbundances}, common practice). Every draw runs the estimator;
- * each quantity is summarised by its median and 16th/84th percentiles ({@link Percentiles}).
+ * each quantity is summarised by its median and 16th/84th percentiles ({@link Percentiles}) over
+ * the draws that converged and to which it applies. A draw whose estimate throws is recorded
+ * ({@link DrawFailure}) and left out; its random stream is its own, so the other draws are unchanged.
  * All N draws are random (the nominal estimate is reported beside them, not mixed in), so a star
  * with zero errors gives median = p16 = p84 = nominal exactly.
  *
@@ -59,20 +62,51 @@ public final class StarJob {
     /**
      * @param row       the star
      * @param settings  the run settings (draws, seed, solar reference are used here)
-     * @param estimator the planet estimate for {@code settings.forStar(row)}
-     * @return the star's rows: host ratios, then every zone's quantities
-     * @throws StarJobException if an estimate fails or its layout changes between draws
+     * @param general   the planet estimate for {@code settings.forStar(row)}
+     * @return the star's rows: host ratios, then every zone's quantities (draws that failed left out)
+     * @throws StarJobException if the nominal estimate fails, or if an estimate's layout changes between draws
      */
     public static List<SurveyRow> run(StarRow row, SurveySettings settings, PlanetEstimator general) {
+        StarResult r = survey(row, settings, general);
+        if (r.failed()) {
+            DrawFailure f = r.nominalFailure().get();
+            throw new StarJobException(row.star(), row.line(), StarJobException.NOMINAL,
+                    new IllegalStateException(describe(f)));
+        }
+        return r.rows();
+    }
+
+    /**
+     * The fail-soft survey of one star: a draw whose estimate throws is recorded and left out of the
+     * percentiles; a failing nominal estimate fails the star (no rows, one failure).
+     *
+     * @param row       the star
+     * @param settings  the run settings (draws, seed, solar reference are used here)
+     * @param general   the planet estimate for {@code settings.forStar(row)}
+     * @return the star's rows and failures
+     * @throws StarJobException if an estimate's layout changes between draws or uses the reserved zone
+     *                          name (a defect of the estimator, not a numerical failure)
+     */
+    public static StarResult survey(StarRow row, SurveySettings settings, PlanetEstimator general) {
         ElementAbundances solar = SOLAR.get(settings.solar());
         Map<Element, Double> nominalDex = new EnumMap<>(Element.class);
         row.abundances().forEach((el, m) -> nominalDex.put(el, m.dex()));
         List<Key> keys = new ArrayList<>();
         ElementAbundances nominalGas = compose(solar, nominalDex);
-        PlanetEstimator estimator = near(row, general, nominalGas);
-        double[] nominal = evaluate(row, StarJobException.NOMINAL, nominalGas, estimator, keys);
         int n = settings.draws();
+        PlanetEstimator estimator;
+        double[] nominal;
+        try {
+            estimator = general.near(nominalGas);
+            nominal = evaluate(row, StarJobException.NOMINAL, nominalGas, estimator, keys);
+        } catch (StarJobException e) {
+            throw e;
+        } catch (RuntimeException e) {
+            return new StarResult(List.of(), List.of(DrawFailure.of(row.star(), StarJobException.NOMINAL, e)), n);
+        }
         double[][] values = new double[nominal.length][n];
+        boolean[] converged = new boolean[n];
+        List<DrawFailure> failures = new ArrayList<>();
         double rho = row.errorCorrelation();
         double common = Math.sqrt(rho);
         double own = Math.sqrt(1.0 - rho);
@@ -86,18 +120,60 @@ public final class StarJob {
                 Measurement m = e.getValue();
                 dex.put(e.getKey(), m.dex() + m.error() * (common * z0 + own * z));
             }
-            double[] v = evaluate(row, d, compose(solar, dex), estimator, keys);
+            double[] v;
+            try {
+                v = evaluate(row, d, compose(solar, dex), estimator, keys);
+            } catch (StarJobException e) {
+                throw e;
+            } catch (RuntimeException e) {
+                failures.add(DrawFailure.of(row.star(), d, e));
+                continue;
+            }
+            converged[d] = true;
             for (int k = 0; k < v.length; k++) {
                 values[k][d] = v[k];
             }
         }
         List<SurveyRow> rows = new ArrayList<>(keys.size());
         for (int k = 0; k < keys.size(); k++) {
-            double[] s = Percentiles.summary(values[k]);
-            Key key = keys.get(k);
-            rows.add(new SurveyRow(row.star(), key.zone(), key.name(), s[0], s[1], s[2], key.unit(), nominal[k], n));
+            rows.add(summarise(row.star(), keys.get(k), values[k], converged, nominal[k], n));
         }
-        return rows;
+        return new StarResult(rows, failures, n);
+    }
+
+    /** Percentiles of the converged draws to which the quantity applies (NaN marks "does not apply"). */
+    private static SurveyRow summarise(String star, Key key, double[] values, boolean[] converged, double nominal,
+                                       int n) {
+        double[] behind = new double[values.length];
+        int count = 0;
+        int notApplicable = 0;
+        for (int d = 0; d < values.length; d++) {
+            if (!converged[d]) {
+                continue;
+            }
+            if (Double.isNaN(values[d])) {
+                notApplicable++;
+            } else {
+                behind[count++] = values[d];
+            }
+        }
+        double[] s = count == 0 ? new double[] {Double.NaN, Double.NaN, Double.NaN}
+                : Percentiles.summary(java.util.Arrays.copyOf(behind, count));
+        return new SurveyRow(star, key.zone(), key.name(), s[0], s[1], s[2], key.unit(), nominal, n, count,
+                notApplicable);
+    }
+
+    /** @return a failure as one line: stage, zone, state and reason */
+    static String describe(DrawFailure f) {
+        StringBuilder b = new StringBuilder(f.stage().equals(DrawFailure.NOMINAL) ? "nominal estimate" : "draw " + f.draw());
+        if (!f.zone().isEmpty()) {
+            b.append(", zone '").append(f.zone()).append('\'');
+        }
+        if (!Double.isNaN(f.tK())) {
+            b.append(", T = ").append(Decimal.format(f.tK())).append(" K, P = ").append(Decimal.format(f.pBar()))
+                    .append(" bar");
+        }
+        return b.append(": ").append(f.reason()).toString();
     }
 
     /**
@@ -116,23 +192,11 @@ public final class StarJob {
         return StellarAbundances.apply(solar, dex).abundances();
     }
 
-    private static PlanetEstimator near(StarRow row, PlanetEstimator general, ElementAbundances nominal) {
-        try {
-            return general.near(nominal);
-        } catch (RuntimeException e) {
-            throw new StarJobException(row.star(), row.line(), StarJobException.NOMINAL, e);
-        }
-    }
-
     /** Runs one estimate; fills keys on the first call and checks them on later ones. */
     private static double[] evaluate(StarRow row, int draw, ElementAbundances gas, PlanetEstimator estimator,
                                      List<Key> keys) {
         LinkedHashMap<String, List<Quantity>> zones;
-        try {
-            zones = estimator.estimate(gas);
-        } catch (RuntimeException e) {
-            throw new StarJobException(row.star(), row.line(), draw, e);
-        }
+        zones = estimator.estimate(gas);
         List<Key> seen = new ArrayList<>();
         List<Double> values = new ArrayList<>();
         for (Element[] r : HOST_RATIOS) {
@@ -146,7 +210,7 @@ public final class StarJob {
             }
             for (Quantity q : zone.getValue()) {
                 seen.add(new Key(zone.getKey(), q.name(), q.unit()));
-                values.add(q.value());
+                values.add(q.applies() ? q.value() : Double.NaN);
             }
         }
         if (keys.isEmpty()) {

@@ -13,9 +13,10 @@ import org.nebulith.thermo.Element;
 
 /**
  * The per-star notes, {@code survey-stars.csv}, streamed in catalogue order: for every catalogue
- * row its status ({@code computed}, {@code skipped} for a bad row, {@code failed} for a star whose
- * estimate failed under {@code --skip-bad}), the elements measured, the elements that followed
- * [Fe/H] because the star lacks them, and the reason for a skip.
+ * row its status ({@code computed}, {@code skipped} for a bad row under {@code --skip-bad},
+ * {@code failed} for a star whose nominal estimate failed), the elements measured, the elements that
+ * followed [Fe/H] because the star lacks them, and the reason: why a row was skipped or a star
+ * failed, or how many of a computed star's draws failed (listed in {@code failures.csv}).
  */
 final class StarsTable {
 
@@ -38,16 +39,17 @@ final class StarsTable {
         out.write(HEADER);
     }
 
-    void computed(StarRow row) throws IOException {
+    void computed(StarRow row, long failedDraws, int draws) throws IOException {
         skippedBefore(row.line());
         line(row.star(), row.line(), "computed", elements(row.abundances().keySet()),
-                elements(StarJob.followedFeH(row, solar)), "");
+                elements(StarJob.followedFeH(row, solar)),
+                failedDraws == 0 ? "" : failedDraws + " of " + draws + " draws failed (" + SurveyFailures.FILE + ")");
     }
 
-    void failed(StarRow row, StarJobException e) throws IOException {
+    void failed(StarRow row, String reason) throws IOException {
         skippedBefore(row.line());
         line(row.star(), row.line(), "failed", elements(row.abundances().keySet()),
-                elements(StarJob.followedFeH(row, solar)), e.getMessage());
+                elements(StarJob.followedFeH(row, solar)), reason);
     }
 
     /** Writes the bad rows after the last good one. */

@@ -57,16 +57,8 @@ public final class SurveyBenchmark {
         List<StarRow> rows = inventedStars(stars, seed);
         long before = cache.equilibria();
         long start = System.nanoTime();
-        SurveyRunner.run(rows.iterator(), settings, cache, threads, false, Progress.none(), new SurveyRunner.Sink() {
-            @Override
-            public void completed(StarRow row, List<SurveyRow> r, String block) {
-                // discarded: the benchmark times the computation
-            }
-
-            @Override
-            public void failed(StarRow row, StarJobException failure) {
-                // not called: failures stop the benchmark
-            }
+        SurveyRunner.run(rows.iterator(), settings, cache, threads, Progress.none(), star -> {
+            // discarded: the benchmark times the computation
         });
         double seconds = (System.nanoTime() - start) / 1e9;
         return new Figures(stars, draws, threads, seconds, cache.equilibria() - before);

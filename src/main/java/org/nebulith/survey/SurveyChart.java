@@ -53,7 +53,7 @@ final class SurveyChart {
                     }
                 }
                 int slot = r.get("quantity").equals("Fe_Si_molar") ? 0 : r.get("quantity").equals("Mg_Si_molar") ? 3 : -1;
-                if (slot >= 0) {
+                if (slot >= 0 && !r.get("median").isEmpty()) {
                     double[] v = pending.computeIfAbsent(r.get("zone"), z -> new double[6]);
                     v[slot] = Double.parseDouble(r.get("median"));
                     v[slot + 1] = Double.parseDouble(r.get("p16"));

@@ -10,7 +10,10 @@ import org.nebulith.report.CsvTableWriter;
  * The text of {@code survey.csv}: the header, and each star's block of rows (numbers by
  * {@link CellText}, the shortest round-trip decimal, so equal results give equal bytes).
  * Columns: {@code star,zone,quantity,median,p16,p84,unit}, then {@code nominal} (the single
- * estimate at the catalogue values) and {@code draws}.
+ * estimate at the catalogue values), {@code draws} (run for the star), {@code n_draws} (behind the
+ * percentiles: converged, and the quantity applies) and {@code n_not_applicable} (converged draws to
+ * which the quantity does not apply); draws - n_draws - n_not_applicable failed (failures.csv).
+ * A value that does not exist is an empty cell.
  */
 public final class SurveyCsv {
 
@@ -18,7 +21,7 @@ public final class SurveyCsv {
     public static final String FILE = "survey.csv";
     /** The columns, in order. */
     public static final List<String> COLUMNS = List.of("star", "zone", "quantity", "median", "p16", "p84", "unit",
-            "nominal", "draws");
+            "nominal", "draws", "n_draws", "n_not_applicable");
     /** The header line, with its line end. */
     public static final String HEADER = CsvTableWriter.FORMAT.format(COLUMNS.toArray()) + "\n";
 
@@ -38,15 +41,22 @@ public final class SurveyCsv {
             cells.add(r.star());
             cells.add(r.zone());
             cells.add(r.quantity());
-            cells.add(CellText.of(r.median(), FILE, "median", n));
-            cells.add(CellText.of(r.p16(), FILE, "p16", n));
-            cells.add(CellText.of(r.p84(), FILE, "p84", n));
+            cells.add(cell(r.median(), "median", n));
+            cells.add(cell(r.p16(), "p16", n));
+            cells.add(cell(r.p84(), "p84", n));
             cells.add(r.unit());
-            cells.add(CellText.of(r.nominal(), FILE, "nominal", n));
+            cells.add(cell(r.nominal(), "nominal", n));
             cells.add(Integer.toString(r.draws()));
+            cells.add(Integer.toString(r.nDraws()));
+            cells.add(Integer.toString(r.notApplicable()));
             text.append(CsvTableWriter.FORMAT.format(cells.toArray())).append('\n');
         }
         return text.toString();
+    }
+
+    /** NaN is the row's "no value" (see {@link SurveyRow}): an empty cell; infinities are refused. */
+    private static String cell(double v, String column, long row) {
+        return Double.isNaN(v) ? "" : CellText.of(v, FILE, column, row);
     }
 
     /**

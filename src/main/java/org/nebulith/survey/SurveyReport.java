@@ -78,13 +78,15 @@ final class SurveyReport {
                 + " stars: medians and 16th-84th percentiles over the draws (all quantities: survey.csv)");
         r.table(stars(run.starsCsv()), StarsTable.FILE + " (first " + SHOWN_STARS + " stars)");
         report.caution("Only the catalogue's random errors are propagated, not systematics between abundance analyses.");
+        report.caution("Draws that failed (failures.csv) or to which a quantity does not apply are left out of its "
+                + "percentiles (n_draws in survey.csv says how many remain); they are not a random sample.");
         report.caution("Each draw is an equilibrium-condensation planet estimate: ideal solutions, no kinetics, no "
                 + "silicate liquids, no metal-silicate equilibration; see the planet report's cautions.");
         settings(report, run.request());
         sources(run.request()).forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(run.inputs());
-        for (String f : List.of("survey.csv", StarsTable.FILE, LocalSurvey.NOTES, SurveyChart.BASE + ".png",
-                SurveyChart.BASE + ".svg", SurveyChart.BASE + ".pdf", "summary.md")) {
+        for (String f : List.of("survey.csv", SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES,
+                SurveyChart.BASE + ".png", SurveyChart.BASE + ".svg", SurveyChart.BASE + ".pdf", "summary.md")) {
             report.outputFile(f);
         }
         report.finish(Instant.now());

@@ -2,19 +2,19 @@ package org.nebulith.survey;
 
 import java.io.IOException;
 import java.util.Iterator;
-import java.util.List;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.progress.Progress;
 
 /**
- * The first phase of {@code --resume}: walks the catalogue and an earlier survey table together,
- * copying the stars already done. The earlier table must be a prefix of what this run would
- * write: the same stars in catalogue order (stars that failed and were skipped are recomputed
- * and must fail again). To catch a table made with other settings or another seed, the first
- * star is recomputed and must match byte for byte; the last one (perhaps cut short by the
- * interruption) is recomputed, must extend what is there, and replaces it. The caller then
- * computes the remaining stars, so the result equals an uninterrupted run's.
+ * The first phase of {@code --resume}: walks the catalogue, an earlier survey table and its failures
+ * table together, copying the stars already done with their failures. The earlier table must be a
+ * prefix of what this run would write: the same stars in catalogue order (a star missing there must
+ * be one whose nominal estimate failed, and it must fail again). To catch a table made with other
+ * settings or another seed, the first star is recomputed and must match byte for byte, failures
+ * included; the last one (perhaps cut short by the interruption) is recomputed, must extend what is
+ * there, and replaces it. The caller then computes the remaining stars, so the result equals an
+ * uninterrupted run's.
  */
 final class SurveyResume {
 
@@ -24,8 +24,8 @@ final class SurveyResume {
     /**
      * @return the number of stars taken over from the earlier table
      */
-    static long copyDone(ExistingSurvey existing, Iterator<StarRow> rows, SurveySettings settings,
-                         EstimatorCache estimators, boolean skipFailing, Progress progress,
+    static long copyDone(ExistingSurvey existing, ExistingFailures failures, Iterator<StarRow> rows,
+                         SurveySettings settings, EstimatorCache estimators, Progress progress,
                          SurveyRunner.Sink sink) throws IOException {
         long copied = 0;
         boolean first = true;
@@ -35,23 +35,25 @@ final class SurveyResume {
                 throw mismatch(existing, "it holds star '" + block.star() + "', which does not follow in the catalogue");
             }
             StarRow row = rows.next();
+            String oldFailures = failures.take(row.star());
             if (!row.star().equals(block.star())) {
-                recomputeMissing(existing, row, block, settings, estimators, skipFailing, sink);
+                recomputeFailed(existing, row, block, oldFailures, settings, estimators, sink);
                 progress.advance(settings.draws());
                 continue;
             }
             block = existing.next();
             if (first || block.last()) {
-                List<SurveyRow> fresh = StarJob.run(row, settings, estimators.get(settings.forStar(row)));
-                String text = SurveyCsv.block(fresh);
-                boolean ok = block.last() ? text.startsWith(block.text()) : text.equals(block.text());
-                if (!ok) {
-                    throw mismatch(existing, "the rows of star '" + row.star()
+                StarResult fresh = StarJob.survey(row, settings, estimators.get(settings.forStar(row)));
+                SurveyRunner.StarOutput out = SurveyRunner.StarOutput.of(row, fresh);
+                boolean ok = block.last() ? out.block().startsWith(block.text()) : out.block().equals(block.text());
+                if (!ok || !out.failures().equals(oldFailures)) {
+                    throw mismatch(existing, "the rows or failures of star '" + row.star()
                             + "' differ from a recomputation (other settings, seed, catalogue values or version)");
                 }
-                sink.completed(row, fresh, text);
+                sink.completed(out);
             } else {
-                sink.completed(row, null, block.text());
+                sink.completed(new SurveyRunner.StarOutput(row, block.text(), oldFailures,
+                        SurveyFailures.failedDraws(oldFailures, settings.draws()), null));
             }
             first = false;
             copied++;
@@ -60,20 +62,19 @@ final class SurveyResume {
         return copied;
     }
 
-    private static void recomputeMissing(ExistingSurvey existing, StarRow row, ExistingSurvey.Block block,
-                                         SurveySettings settings, EstimatorCache estimators, boolean skipFailing,
-                                         SurveyRunner.Sink sink) throws IOException {
-        try {
-            StarJob.run(row, settings, estimators.get(settings.forStar(row)));
-        } catch (StarJobException e) {
-            if (!skipFailing) {
-                throw e;
-            }
-            sink.failed(row, e);
-            return;
+    private static void recomputeFailed(ExistingSurvey existing, StarRow row, ExistingSurvey.Block block,
+                                        String oldFailures, SurveySettings settings, EstimatorCache estimators,
+                                        SurveyRunner.Sink sink) throws IOException {
+        StarResult r = StarJob.survey(row, settings, estimators.get(settings.forStar(row)));
+        SurveyRunner.StarOutput out = SurveyRunner.StarOutput.of(row, r);
+        if (!r.failed()) {
+            throw mismatch(existing, "star '" + row.star() + "' (catalogue line " + row.line()
+                    + ") is missing there, before '" + block.star() + "'");
         }
-        throw mismatch(existing, "star '" + row.star() + "' (catalogue line " + row.line() + ") is missing there, before '"
-                + block.star() + "'");
+        if (!out.failures().equals(oldFailures)) {
+            throw mismatch(existing, "the failure of star '" + row.star() + "' differs from a recomputation");
+        }
+        sink.completed(out);
     }
 
     private static InputException mismatch(ExistingSurvey existing, String what) {

@@ -15,7 +15,7 @@ import org.nebulith.progress.Progress;
 
 /**
  * Runs {@link StarJob} over a stream of stars on a pool of threads and hands the results to a sink
- * in catalogue order. At most {@value #WINDOW_PER_THREAD} stars per thread are in flight, so memory
+ * in catalogue order (failures included: a star's failed draws are part of its outcome). At most {@value #WINDOW_PER_THREAD} stars per thread are in flight, so memory
  * stays constant in the catalogue's length. Results do not depend on the number of threads: each
  * star is a pure function of its row, the settings and the seed, and the order of output is the
  * order of input.
@@ -28,32 +28,41 @@ public final class SurveyRunner {
     /** Receives each star's outcome, in catalogue order, on the calling thread. */
     public interface Sink {
         /**
-         * @param row   the star
-         * @param rows  its survey rows
-         * @param block the rows as survey.csv text
+         * @param star the star's outcome (it may stop the run by throwing)
          * @throws IOException if writing fails
          */
-        void completed(StarRow row, List<SurveyRow> rows, String block) throws IOException;
-
-        /**
-         * Called only when failing stars are skipped.
-         *
-         * @param row     the star
-         * @param failure why it failed
-         * @throws IOException if writing fails
-         */
-        void failed(StarRow row, StarJobException failure) throws IOException;
+        void completed(StarOutput star) throws IOException;
     }
 
     /**
-     * @param stars  stars completed
-     * @param failed stars that failed and were skipped
+     * One star's outcome as it is written.
+     *
+     * @param row         the star
+     * @param block       its rows as survey.csv text (empty when the star failed)
+     * @param failures    its failures as failures.csv text (empty when none)
+     * @param failedDraws draws lost (all of them when the nominal estimate failed)
+     * @param starFailure why the star failed as a whole (its nominal estimate), or null
+     */
+    public record StarOutput(StarRow row, String block, String failures, long failedDraws, String starFailure) {
+
+        /**
+         * @param row    the star
+         * @param result its survey
+         * @return the outcome as written
+         */
+        public static StarOutput of(StarRow row, StarResult result) {
+            String why = result.nominalFailure().map(StarJob::describe).orElse(null);
+            return new StarOutput(row, SurveyCsv.block(result.rows()), SurveyFailures.block(result.failures()),
+                    result.failedDraws(), why);
+        }
+    }
+
+    /**
+     * @param stars  stars completed (with rows)
+     * @param failed stars whose nominal estimate failed
      * @param draws  draws computed
      */
     public record Summary(long stars, long failed, long draws) {
-    }
-
-    private record Outcome(StarRow row, List<SurveyRow> rows, String block, StarJobException failure) {
     }
 
     private SurveyRunner() {
@@ -69,20 +78,19 @@ public final class SurveyRunner {
      * @param settings    the run settings
      * @param estimators  estimators per effective settings
      * @param threads     worker threads, &gt;= 1
-     * @param skipFailing whether a failing star is reported to the sink and skipped (else the run stops)
      * @param progress    advanced by the draws of each finished star
      * @param sink        receives the outcomes in order
      * @return what was done
-     * @throws StarJobException for the first failing star (in catalogue order) unless skipFailing
+     * @throws StarJobException for an estimator that breaks its contract (layout, reserved zone name)
      * @throws IOException if the sink fails
      */
     public static Summary run(Iterator<StarRow> stars, SurveySettings settings, EstimatorCache estimators, int threads,
-                              boolean skipFailing, Progress progress, Sink sink) throws IOException {
+                              Progress progress, Sink sink) throws IOException {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be >= 1, got " + threads);
         }
         ExecutorService pool = Executors.newFixedThreadPool(threads, daemonThreads());
-        ArrayDeque<Future<Outcome>> window = new ArrayDeque<>();
+        ArrayDeque<Future<StarOutput>> window = new ArrayDeque<>();
         long done = 0;
         long failed = 0;
         try {
@@ -92,15 +100,12 @@ public final class SurveyRunner {
                     PlanetEstimator estimator = estimators.get(settings.forStar(row));
                     window.add(pool.submit(() -> compute(row, settings, estimator, progress)));
                 }
-                Outcome o = take(window.removeFirst());
-                if (o.failure() == null) {
-                    sink.completed(o.row(), o.rows(), o.block());
+                StarOutput o = take(window.removeFirst());
+                sink.completed(o);
+                if (o.starFailure() == null) {
                     done++;
-                } else if (skipFailing) {
-                    sink.failed(o.row(), o.failure());
-                    failed++;
                 } else {
-                    throw o.failure();
+                    failed++;
                 }
             }
         } finally {
@@ -109,18 +114,16 @@ public final class SurveyRunner {
         return new Summary(done, failed, done * settings.draws());
     }
 
-    private static Outcome compute(StarRow row, SurveySettings settings, PlanetEstimator estimator, Progress progress) {
+    private static StarOutput compute(StarRow row, SurveySettings settings, PlanetEstimator estimator,
+                                      Progress progress) {
         try {
-            List<SurveyRow> rows = StarJob.run(row, settings, estimator);
-            return new Outcome(row, rows, SurveyCsv.block(rows), null);
-        } catch (StarJobException e) {
-            return new Outcome(row, null, null, e);
+            return StarOutput.of(row, StarJob.survey(row, settings, estimator));
         } finally {
             progress.advance(settings.draws());
         }
     }
 
-    private static Outcome take(Future<Outcome> future) throws IOException {
+    private static StarOutput take(Future<StarOutput> future) throws IOException {
         try {
             return future.get();
         } catch (InterruptedException e) {

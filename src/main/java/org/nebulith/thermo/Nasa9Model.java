@@ -88,7 +88,22 @@ public final class Nasa9Model implements ThermoModel {
 
     @Override
     public double gOverRT(double t) {
-        double[] a = coef(t);
+        return gOverRT(coef(t), t);
+    }
+
+    /**
+     * G/RT of one interval's polynomial, evaluated at any T (also outside that interval: used to
+     * measure how well neighbouring intervals meet at their common bound).
+     *
+     * @param interval an interval
+     * @param t        temperature [K]
+     * @return G/RT from that interval's coefficients
+     */
+    public static double gOverRT(Interval interval, double t) {
+        return gOverRT(interval.coefficients, t);
+    }
+
+    private static double gOverRT(double[] a, double t) {
         double lnT = Math.log(t);
         double h = -a[0] / (t * t) + a[1] * lnT / t + a[2]
                 + t * (a[3] / 2 + t * (a[4] / 3 + t * (a[5] / 4 + t * a[6] / 5))) + a[7] / t;

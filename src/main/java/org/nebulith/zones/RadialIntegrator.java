@@ -11,6 +11,7 @@ import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactor
 import org.nebulith.disk.DiskConstants;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskState;
+import org.nebulith.errors.NumericalException;
 
 /**
  * Integrates Sigma_gas(r) x f(r) x kernel(r) x 2 pi r dr over a feeding zone, for vector-valued f.
@@ -22,6 +23,15 @@ import org.nebulith.disk.DiskState;
  * error (relative to each component's tolerance) is split until the summed error of every component
  * is below relTol x the integral of its magnitude. Components whose integral is zero stay exact.
  * A jump that the caller does not announce is still resolved by bisection, only more slowly.
+ *
+ * <p>Error control may group components ({@link ErrorControl}): polymorphs of one phase swap at a
+ * transition where each jumps but their sum does not, so only the sum is controlled. An integrand
+ * that cannot be resolved below some level (the thermodynamic data's pieces meet with small jumps
+ * of G/RT, {@link org.nebulith.thermo.PieceJumps}) would otherwise be refined forever: a panel whose
+ * error has stopped falling for {@value #STALLS_TO_ACCEPT} consecutive halvings and lies within
+ * {@value #CONTINUITY_FACTOR} times the data's continuity of its own integral is accepted as it is
+ * and counted in {@link IntegrationQuality}. Anything else that exhausts the budget is a
+ * {@link NumericalException} naming the zone and the radius, T and P of the worst panel.
  */
 public final class RadialIntegrator {
     /** Default relative tolerance. */
@@ -34,6 +44,20 @@ public final class RadialIntegrator {
      * phases need not drive the refinement.
      */
     static final double TRACE_FLOOR = 1e-6;
+    /**
+     * A split whose two halves together keep at least this fraction of the parent's error has not
+     * helped: the error of a smooth integrand falls by orders of magnitude, that of a single jump by
+     * about half; only noise at every scale (an integrand that jumps wherever it is sampled) keeps it.
+     */
+    static final double STALL_RATIO = 0.75;
+    /** Consecutive stalled splits after which a panel may be accepted. */
+    static final int STALLS_TO_ACCEPT = 2;
+    /**
+     * A stalled panel is accepted when its error is within this many times the data's relative
+     * continuity of its own integral (the response of condensed amounts to a jump of G/RT is of the
+     * order of the jump; the factor leaves room for amplification near a phase boundary).
+     */
+    public static final double CONTINUITY_FACTOR = 10.0;
     private static final double AREA_FACTOR = 2 * Math.PI * DiskConstants.AU_CM * DiskConstants.AU_CM;
 
     private final double relTol;
@@ -76,12 +100,30 @@ public final class RadialIntegrator {
      * @param f           the integrand per gram of gas
      * @param breakRadiiAU radii [AU] where f may jump (any order; those outside the zone are ignored)
      * @return the totals and the weighted gas mass
-     * @throws IllegalStateException naming the zone and worst panel if the budget is exhausted
+     * @throws NumericalException naming the zone and the worst panel's radius, T and P if the budget is exhausted
      */
     public ZoneIntegral integrate(FeedingZone zone, DiskModel disk, RadialIntegrand f, List<Double> breakRadiiAU) {
+        return integrate(zone, disk, f, breakRadiiAU, ErrorControl.separate(f.dimension()));
+    }
+
+    /**
+     * @param zone         the feeding zone (its support must lie inside the disk's range)
+     * @param disk         the disk
+     * @param f            the integrand per gram of gas
+     * @param breakRadiiAU radii [AU] where f may jump (any order; those outside the zone are ignored)
+     * @param control      component groups and the data's continuity
+     * @return the totals, the weighted gas mass and the quality of the result
+     * @throws NumericalException naming the zone and the worst panel's radius, T and P if the budget is exhausted
+     */
+    public ZoneIntegral integrate(FeedingZone zone, DiskModel disk, RadialIntegrand f, List<Double> breakRadiiAU,
+                                  ErrorControl control) {
         disk.checkRange(zone.rInnerAU());
         disk.checkRange(zone.rOuterAU());
-        Evaluator ev = new Evaluator(zone, disk, f);
+        if (control.groupOf().length != f.dimension()) {
+            throw new IllegalArgumentException("error control for " + control.groupOf().length
+                    + " components, integrand has " + f.dimension());
+        }
+        Evaluator ev = new Evaluator(zone, disk, f, control);
         List<Double> edges = segmentEdges(zone, breakRadiiAU);
         List<Panel> panels = new ArrayList<>();
         for (int s = 0; s + 1 < edges.size(); s++) {
@@ -90,10 +132,12 @@ public final class RadialIntegrator {
             for (int k = 0; k < initialPanelsPerSegment; k++) {
                 double lo = a + k * h;
                 double hi = k == initialPanelsPerSegment - 1 ? edges.get(s + 1) : lo + h;
-                panels.add(new Panel(lo, hi, rule(ev, lo, hi), ev, this));
+                panels.add(new Panel(lo, hi, rule(ev, lo, hi), ev, this, 0));
             }
         }
-        refine(panels, ev, zone);
+        List<Panel> accepted = new ArrayList<>();
+        refine(panels, accepted, ev, zone, disk, control.continuityRel());
+        panels.addAll(accepted);
         panels.sort(Comparator.comparingDouble(p -> p.a));
         double[] sum = new double[ev.dim];
         for (Panel p : panels) {
@@ -102,7 +146,8 @@ public final class RadialIntegrator {
             }
         }
         double[] totals = java.util.Arrays.copyOf(sum, ev.dim - 1);
-        return new ZoneIntegral(totals, sum[ev.dim - 1], edges, ev.count, panels.size());
+        return new ZoneIntegral(totals, sum[ev.dim - 1], edges, ev.count, panels.size(),
+                quality(panels, accepted.size(), ev.groups));
     }
 
     /**
@@ -124,7 +169,7 @@ public final class RadialIntegrator {
         }
         disk.checkRange(zone.rInnerAU());
         disk.checkRange(zone.rOuterAU());
-        Evaluator ev = new Evaluator(zone, disk, f);
+        Evaluator ev = new Evaluator(zone, disk, f, ErrorControl.separate(f.dimension()));
         double lo = zone.rInnerAU();
         double h = (zone.rOuterAU() - lo) / panels;
         double[] sum = new double[ev.dim];
@@ -144,7 +189,8 @@ public final class RadialIntegrator {
         for (int p = 0; p <= panels; p++) {
             edges.add(lo + p * h);
         }
-        return new ZoneIntegral(java.util.Arrays.copyOf(sum, ev.dim - 1), sum[ev.dim - 1], edges, ev.count, panels);
+        return new ZoneIntegral(java.util.Arrays.copyOf(sum, ev.dim - 1), sum[ev.dim - 1], edges, ev.count, panels,
+                IntegrationQuality.fixed());
     }
 
     private double weightOf(double node) {
@@ -156,9 +202,10 @@ public final class RadialIntegrator {
         throw new IllegalStateException("unknown Gauss node " + node);
     }
 
-    private void refine(List<Panel> panels, Evaluator ev, FeedingZone zone) {
+    private void refine(List<Panel> panels, List<Panel> accepted, Evaluator ev, FeedingZone zone, DiskModel disk,
+                        double continuityRel) {
         while (true) {
-            double[] tol = tolerances(panels, ev.dim);
+            double[] tol = tolerances(panels, accepted, ev.groups);
             PriorityQueue<Panel> queue = new PriorityQueue<>(Comparator.comparingDouble((Panel p) -> -p.error(tol)));
             queue.addAll(panels);
             double total = 0;
@@ -168,43 +215,96 @@ public final class RadialIntegrator {
             if (total <= 1.0) {
                 return;
             }
-            while (total > 1.0) {
+            while (total > 1.0 && !queue.isEmpty()) {
                 if (ev.count > maxEvaluations) {
-                    Panel w = queue.peek();
-                    throw new IllegalStateException("zone '" + zone.name() + "': radial integration did not reach relative"
-                            + " tolerance " + relTol + " within " + maxEvaluations + " evaluations; worst panel "
-                            + w.a + "-" + w.b + " AU (supply the condensation fronts there as break radii)");
+                    throw exhausted(queue.peek(), zone, disk);
                 }
                 Panel worst = queue.poll();
-                total -= worst.error(tol);
+                double before = worst.error(tol);
+                total -= before;
                 panels.remove(worst);
                 double mid = 0.5 * (worst.a + worst.b);
-                for (Panel child : new Panel[] {new Panel(worst.a, mid, worst.left, ev, this),
-                    new Panel(mid, worst.b, worst.right, ev, this)}) {
-                    panels.add(child);
-                    queue.add(child);
-                    total += child.error(tol);
+                Panel left = new Panel(worst.a, mid, worst.left, ev, this, 0);
+                Panel right = new Panel(mid, worst.b, worst.right, ev, this, 0);
+                boolean stalled = left.error(tol) + right.error(tol) >= STALL_RATIO * before;
+                int stalls = stalled ? worst.stalls + 1 : 0;
+                for (Panel child : new Panel[] {left.withStalls(stalls), right.withStalls(stalls)}) {
+                    if (child.stalls >= STALLS_TO_ACCEPT && child.withinContinuity(continuityRel)) {
+                        accepted.add(child);
+                    } else {
+                        panels.add(child);
+                        queue.add(child);
+                        total += child.error(tol);
+                    }
                 }
             }
         }
     }
 
-    private double[] tolerances(List<Panel> panels, int dim) {
-        double[] tol = new double[dim];
-        for (Panel p : panels) {
-            for (int i = 0; i < dim; i++) {
-                tol[i] += Math.abs(p.fine[i]);
+    private NumericalException exhausted(Panel w, FeedingZone zone, DiskModel disk) {
+        double r = 0.5 * (w.a + w.b);
+        DiskState s = disk.stateAt(r);
+        return NumericalException.inZone(zone.name(), r, s.temperatureK(), s.pressureBar(),
+                "radial integration did not reach relative tolerance " + relTol + " within " + maxEvaluations
+                        + " evaluations; its worst panel is " + w.a + "-" + w.b + " AU, where the integrand jumps by"
+                        + " more than the thermodynamic data's continuity allows", null);
+    }
+
+    /** Absolute tolerance per group: relTol of the group's integral, trace groups of the floor. */
+    private double[] tolerances(List<Panel> panels, List<Panel> accepted, int groups) {
+        double[] scale = scales(panels, accepted, groups);
+        double[] tol = new double[groups];
+        for (int g = 0; g < groups; g++) {
+            tol[g] = relTol * scale[g];
+        }
+        return tol;
+    }
+
+    /** The integral of each group's magnitude, trace groups raised to the floor (gas group, last, excepted). */
+    private static double[] scales(List<Panel> panels, List<Panel> accepted, int groups) {
+        double[] scale = new double[groups];
+        for (List<Panel> list : List.of(panels, accepted)) {
+            for (Panel p : list) {
+                for (int g = 0; g < groups; g++) {
+                    scale[g] += Math.abs(p.fineGroup[g]);
+                }
             }
         }
         double largest = 0;
-        for (int i = 0; i < dim - 1; i++) {
-            largest = Math.max(largest, tol[i]);
+        for (int g = 0; g < groups - 1; g++) {
+            largest = Math.max(largest, scale[g]);
         }
-        for (int i = 0; i < dim; i++) {
-            double scale = i < dim - 1 ? Math.max(tol[i], TRACE_FLOOR * largest) : tol[i];
-            tol[i] = relTol * scale;
+        for (int g = 0; g < groups - 1; g++) {
+            scale[g] = Math.max(scale[g], TRACE_FLOOR * largest);
         }
-        return tol;
+        return scale;
+    }
+
+    private static IntegrationQuality quality(List<Panel> panels, int accepted, int groups) {
+        double[] scale = scales(panels, List.of(), groups);
+        double[] summed = new double[groups];
+        Panel worst = panels.get(0);
+        double worstRel = -1;
+        for (Panel p : panels) {
+            double rel = 0;
+            for (int g = 0; g < groups; g++) {
+                if (scale[g] > 0) {
+                    rel = Math.max(rel, p.diffGroup[g] / scale[g]);
+                    summed[g] += p.diffGroup[g];
+                }
+            }
+            if (rel > worstRel) {
+                worstRel = rel;
+                worst = p;
+            }
+        }
+        double total = 0;
+        for (int g = 0; g < groups; g++) {
+            if (scale[g] > 0) {
+                total = Math.max(total, summed[g] / scale[g]);
+            }
+        }
+        return new IntegrationQuality(worst.a, worst.b, worstRel, total, accepted, false);
     }
 
     private static List<Double> segmentEdges(FeedingZone zone, List<Double> breaks) {
@@ -245,15 +345,23 @@ public final class RadialIntegrator {
         final DiskModel disk;
         final RadialIntegrand f;
         final int dim;
+        final int groups;
+        final int[] groupOf;
         final double[] fBuf;
         final double[] out;
         int count;
 
-        Evaluator(FeedingZone zone, DiskModel disk, RadialIntegrand f) {
+        Evaluator(FeedingZone zone, DiskModel disk, RadialIntegrand f, ErrorControl control) {
             this.zone = zone;
             this.disk = disk;
             this.f = f;
             this.dim = f.dimension() + 1;
+            this.groups = control.groups() + 1;
+            this.groupOf = new int[dim];
+            for (int i = 0; i < dim - 1; i++) {
+                groupOf[i] = control.group(i);
+            }
+            groupOf[dim - 1] = groups - 1;
             this.fBuf = new double[f.dimension()];
             this.out = new double[dim];
         }
@@ -266,8 +374,8 @@ public final class RadialIntegrator {
             f.evaluate(s, fBuf);
             for (int i = 0; i < fBuf.length; i++) {
                 if (!Double.isFinite(fBuf[i])) {
-                    throw new IllegalStateException("integrand component " + i + " is not finite at r = " + rAU
-                            + " AU (T = " + s.temperatureK() + " K, P = " + s.pressureBar() + " bar)");
+                    throw NumericalException.inZone(zone.name(), rAU, s.temperatureK(), s.pressureBar(),
+                            "integrand component " + i + " is not finite (" + fBuf[i] + ")", null);
                 }
                 out[i] = g * fBuf[i];
             }
@@ -276,39 +384,89 @@ public final class RadialIntegrator {
         }
     }
 
-    /** One panel: coarse (whole-panel) and fine (two halves) estimates. */
+    /**
+     * One panel: coarse (whole-panel) and fine (two halves) estimates per component, and per control
+     * group the fine sum and the coarse-fine difference (the error estimate).
+     */
     static final class Panel {
         final double a;
         final double b;
         final double[] left;
         final double[] right;
         final double[] fine;
-        final double[] diff;
+        final double[] fineGroup;
+        final double[] diffGroup;
+        final int stalls;
 
-        Panel(double a, double b, double[] coarse, Evaluator ev, RadialIntegrator in) {
+        Panel(double a, double b, double[] coarse, Evaluator ev, RadialIntegrator in, int stalls) {
             this.a = a;
             this.b = b;
             double mid = 0.5 * (a + b);
             this.left = in.rule(ev, a, mid);
             this.right = in.rule(ev, mid, b);
             this.fine = new double[ev.dim];
-            this.diff = new double[ev.dim];
+            this.fineGroup = new double[ev.groups];
+            double[] coarseGroup = new double[ev.groups];
             for (int i = 0; i < ev.dim; i++) {
                 fine[i] = left[i] + right[i];
-                diff[i] = Math.abs(fine[i] - coarse[i]);
+                fineGroup[ev.groupOf[i]] += fine[i];
+                coarseGroup[ev.groupOf[i]] += coarse[i];
             }
+            this.diffGroup = new double[ev.groups];
+            for (int g = 0; g < ev.groups; g++) {
+                diffGroup[g] = Math.abs(fineGroup[g] - coarseGroup[g]);
+            }
+            this.stalls = stalls;
+        }
+
+        private Panel(Panel p, int stalls) {
+            this.a = p.a;
+            this.b = p.b;
+            this.left = p.left;
+            this.right = p.right;
+            this.fine = p.fine;
+            this.fineGroup = p.fineGroup;
+            this.diffGroup = p.diffGroup;
+            this.stalls = stalls;
+        }
+
+        Panel withStalls(int n) {
+            return n == stalls ? this : new Panel(this, n);
         }
 
         double error(double[] tol) {
             double e = 0;
-            for (int i = 0; i < diff.length; i++) {
-                if (tol[i] > 0) {
-                    e = Math.max(e, diff[i] / tol[i]);
-                } else if (diff[i] > 0) {
-                    e = 1e6; // a component that was zero on the coarse partition but not on the fine one
+            for (int g = 0; g < diffGroup.length; g++) {
+                if (tol[g] > 0) {
+                    e = Math.max(e, diffGroup[g] / tol[g]);
+                } else if (diffGroup[g] > 0) {
+                    e = 1e6; // a group that was zero on the coarse partition but not on the fine one
                 }
             }
             return e;
+        }
+
+        /**
+         * @param continuityRel the data's relative continuity
+         * @return whether every group's error is within {@link #CONTINUITY_FACTOR} x continuity of
+         *         this panel's own integral (trace groups: of the panel's trace floor)
+         */
+        boolean withinContinuity(double continuityRel) {
+            if (!(continuityRel > 0)) {
+                return false;
+            }
+            double largest = 0;
+            for (int g = 0; g < fineGroup.length - 1; g++) {
+                largest = Math.max(largest, Math.abs(fineGroup[g]));
+            }
+            for (int g = 0; g < fineGroup.length; g++) {
+                double scale = g < fineGroup.length - 1 ? Math.max(Math.abs(fineGroup[g]), TRACE_FLOOR * largest)
+                        : Math.abs(fineGroup[g]);
+                if (diffGroup[g] > CONTINUITY_FACTOR * continuityRel * scale) {
+                    return false;
+                }
+            }
+            return true;
         }
     }
 }

@@ -1,11 +1,15 @@
 package org.nebulith.zones;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskState;
 import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.ConvergenceException;
+import org.nebulith.errors.NumericalException;
 
 /**
  * Integrates the local condensates across a feeding zone: finds the condensation fronts inside
@@ -66,12 +70,25 @@ public final class ZoneCondensation {
      * @return what the zone collects
      */
     public ZoneInventory integrate(FeedingZone zone, DiskModel disk, LocalCondensation local) {
+        return integrate(zone, disk, local, 0.0);
+    }
+
+    /**
+     * @param zone          the zone (inside the disk's range)
+     * @param disk          the disk
+     * @param local         the local condensation of the gas
+     * @param continuityRel the largest jump of G/RT between pieces of the system's thermodynamic data
+     *                      ({@link org.nebulith.thermo.PieceJumps#largest}); 0 accepts no stalled panel
+     * @return what the zone collects
+     * @throws NumericalException naming the zone, radius, T and P if an equilibrium or the integral fails
+     */
+    public ZoneInventory integrate(FeedingZone zone, DiskModel disk, LocalCondensation local, double continuityRel) {
         double lo = zone.rInnerAU();
         double hi = zone.rOuterAU();
         disk.checkRange(lo);
         disk.checkRange(hi);
         List<Double> fronts = fixedPanels > 0 ? List.of() : FrontFinder.find(lo, hi, frontSamples,
-                r -> LocalCondensation.signature(local.at(disk.stateAt(r))), frontTolRel * (hi - lo));
+                r -> LocalCondensation.signature(solve(zone, local, disk.stateAt(r))), frontTolRel * (hi - lo));
         ChemicalSystem sys = local.system();
         int[][] index = new int[sys.phaseCount()][];
         int dim = 0;
@@ -83,6 +100,7 @@ public final class ZoneCondensation {
         }
         final int iceIndex = dim++;
         final int n = dim;
+        ErrorControl control = control(sys, index, n, continuityRel);
         RadialIntegrand f = new RadialIntegrand() {
             @Override
             public int dimension() {
@@ -92,7 +110,7 @@ public final class ZoneCondensation {
             @Override
             public void evaluate(DiskState s, double[] out) {
                 java.util.Arrays.fill(out, 0.0);
-                LocalCondensation.Local l = local.at(s);
+                LocalCondensation.Local l = solve(zone, local, s);
                 for (int p : l.result().presentCondensedPhases()) {
                     for (int k = 0; k < index[p].length; k++) {
                         out[index[p][k]] = l.result().memberMoles(p, k);
@@ -102,7 +120,7 @@ public final class ZoneCondensation {
             }
         };
         ZoneIntegral zi = fixedPanels > 0 ? integrator.integrateFixed(zone, disk, f, fixedPanels)
-                : integrator.integrate(zone, disk, f, fronts);
+                : integrator.integrate(zone, disk, f, fronts, control);
         double[][] moles = new double[sys.phaseCount()][];
         moles[0] = new double[sys.memberNames(0).size()];
         for (int p = 1; p < sys.phaseCount(); p++) {
@@ -112,6 +130,35 @@ public final class ZoneCondensation {
             }
         }
         return new ZoneInventory(zone, sys, moles, zi.total(iceIndex), zi.gasMassG(), new ArrayList<>(fronts),
-                zi.evaluations());
+                zi.evaluations(), zi.quality());
+    }
+
+    private static LocalCondensation.Local solve(FeedingZone zone, LocalCondensation local, DiskState s) {
+        try {
+            return local.at(s);
+        } catch (ConvergenceException | NumericalException e) {
+            throw NumericalException.inZone(zone.name(), s.rAU(), s.temperatureK(), s.pressureBar(), e.getMessage(), e);
+        }
+    }
+
+    /**
+     * One control group per distinct formula of condensed member (polymorphs, the liquid and the
+     * solution end-member of one compound move into each other at transitions; their sum is what
+     * must be smooth), water ice on its own.
+     */
+    private static ErrorControl control(ChemicalSystem sys, int[][] index, int n, double continuityRel) {
+        int[] groupOf = new int[n];
+        Map<List<Double>, Integer> byFormula = new HashMap<>();
+        for (int p = 1; p < sys.phaseCount(); p++) {
+            for (int k = 0; k < index[p].length; k++) {
+                List<Double> key = new ArrayList<>();
+                for (double a : sys.memberStoichiometry(p, k)) {
+                    key.add(a);
+                }
+                groupOf[index[p][k]] = byFormula.computeIfAbsent(key, x -> byFormula.size());
+            }
+        }
+        groupOf[n - 1] = byFormula.size();
+        return new ErrorControl(groupOf, byFormula.size() + 1, continuityRel);
     }
 }

@@ -12,8 +12,10 @@ import java.util.List;
  *                     (zone edges plus the break radii inside the zone)
  * @param evaluations  number of integrand evaluations
  * @param panels       number of Gauss-Legendre panels in the final partition
+ * @param quality      the error estimate and its worst panel
  */
-public record ZoneIntegral(double[] totals, double gasMassG, List<Double> segmentEdges, int evaluations, int panels) {
+public record ZoneIntegral(double[] totals, double gasMassG, List<Double> segmentEdges, int evaluations, int panels,
+                           IntegrationQuality quality) {
     public ZoneIntegral {
         totals = totals.clone();
         segmentEdges = List.copyOf(segmentEdges);

@@ -15,9 +15,10 @@ import org.nebulith.equilibrium.ChemicalSystem;
  * @param gasMassG      kernel-weighted gas mass of the zone [g]
  * @param fronts        condensation fronts found inside the zone [AU]
  * @param evaluations   integrand evaluations
+ * @param quality       the integral's error estimate and its worst panel
  */
 public record ZoneInventory(FeedingZone zone, ChemicalSystem system, double[][] memberMoles, double iceMoles,
-                            double gasMassG, List<Double> fronts, int evaluations) {
+                            double gasMassG, List<Double> fronts, int evaluations, IntegrationQuality quality) {
 
     /** @return true if anything condensed in the zone */
     public boolean hasSolids() {

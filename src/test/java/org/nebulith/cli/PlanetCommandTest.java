@@ -117,4 +117,59 @@ class PlanetCommandTest {
         assertEquals(1, e.strip().lines().count(), e);
         assertFalse(Files.exists(outDir));
     }
+
+    @Test
+    void flatDiskAt400KFinishesWithTheProtosolarRatios() throws Exception {
+        // The reproduction of the flat-disk failure: r_AU 0.3 to 5 in 5 % steps, T = 400 K, P = 1e-5 bar,
+        // Sigma = 1700 r^-1.5 (an invented test disk), one tophat zone 1.0 +- 0.3 AU. It used to end in
+        // "internal error" after 200000 evaluations; the issue asks for it to finish in seconds.
+        StringBuilder disk = new StringBuilder("# flat test disk (invented)\nr_AU,T_K,P_bar,sigma_gas_g_cm2\n");
+        for (double r = 0.3; r < 5.0; r *= 1.05) {
+            disk.append(r).append(",400,1e-5,").append(1700 * Math.pow(r, -1.5)).append('\n');
+        }
+        disk.append("5,400,1e-5,").append(1700 * Math.pow(5, -1.5)).append('\n');
+        Path diskFile = Files.writeString(dir.resolve("that.csv"), disk);
+        Path zones = Files.writeString(dir.resolve("that-zones.csv"),
+                "zone,shape,r_center_AU,half_width_AU\nbar-zone,tophat,1.0,0.3\n");
+        Path outDir = dir.resolve("flat");
+        assertEquals(0, run("--quiet", "planet", "--composition", "protosolar-lodders2003", "--disk", diskFile.toString(),
+                "--zones", zones.toString(), "--profile-points", "12", "--out", outDir.toString()),
+                err.toString(StandardCharsets.UTF_8));
+        Map<String, Double> csv = new HashMap<>();
+        for (CSVRecord r : read(outDir.resolve("bulk-composition.csv"))) {
+            csv.put(r.get("quantity"), r.get("value").isEmpty() ? null : Double.parseDouble(r.get("value")));
+        }
+        // Lodders 2003, ApJ 591, 1220, Table 2 (atoms per 1e6 Si): Mg 1.020e6, Fe 8.38e5, Ca 6.287e4, Al 8.41e4
+        Map<String, Double> lodders = Map.of("Mg_Si_molar", 1.020, "Fe_Si_molar", 0.838, "Ca_Si_molar", 0.06287,
+                "Al_Si_molar", 0.0841);
+        lodders.forEach((q, v) -> assertEquals(v, csv.get(q), 0.005 * v, q));
+        String report = Files.readString(outDir.resolve("report.html"));
+        assertTrue(report.contains("Radial integration") && report.contains("bar-zone: ")
+                && report.contains("worst panel"), "run notes on the integral");
+    }
+
+    @Test
+    void hotEarlyDiskGivesTheRefractoryNoticeAndNoRadiusOrMgNumberForTheCaAlZone() throws Exception {
+        // Tessaly-b of the demo system (feeding-zones/demo-system.csv), alone
+        Path zones = Files.writeString(dir.resolve("b.csv"),
+                "zone,shape,r_center_AU,half_width_AU,planet_mass_Mearth\nTessaly-b,gaussian,0.45,0.05,0.6\n");
+        Path outDir = dir.resolve("hot");
+        assertEquals(0, run("planet", "--composition", "protosolar-lodders2003", "--disk", "hot-early-disk",
+                "--zones", zones.toString(), "--profile-points", "12", "--out", outDir.toString()),
+                err.toString(StandardCharsets.UTF_8));
+        String e = err.toString(StandardCharsets.UTF_8);
+        assertTrue(e.contains("notice: zone 'Tessaly-b': its solids are ") && e.contains("% refractory oxides"), e);
+        Map<String, String> b = new HashMap<>();
+        for (CSVRecord r : read(outDir.resolve("bulk-composition.csv"))) {
+            if (r.get("zone").equals("Tessaly-b")) {
+                b.put(r.get("quantity"), r.get("value") + " | " + r.get("unit"));
+            }
+        }
+        assertTrue(b.get("radius_Rearth_Zeng2016").startsWith(" | R_earth (for 0.6 M_earth; not applicable: "),
+                b.get("radius_Rearth_Zeng2016"));
+        assertFalse(b.containsKey("mantle_Mg_number"), "no Mg# for a mantle of Ca-Al oxides: " + b);
+        assertFalse(Files.readString(outDir.resolve("bulk-composition.csv")).contains("NaN"));
+        assertTrue(Files.readString(outDir.resolve("report.html")).contains("Notice: zone &#39;Tessaly-b&#39;")
+                || Files.readString(outDir.resolve("report.html")).contains("Notice: zone 'Tessaly-b'"));
+    }
 }

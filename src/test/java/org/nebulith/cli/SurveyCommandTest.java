@@ -37,11 +37,48 @@ class SurveyCommandTest {
         }
     }
 
+    /**
+     * The real survey estimate, with a failure injected at the seam: a composition without Ti
+     * (Ti/H below 1e-11) cannot converge, and says so as the zone integration would.
+     */
+    @Command(name = "survey-failing")
+    static final class FailingSurvey extends SurveyCommand {
+        @Override
+        protected PlanetEstimator estimatorFor(final SurveySettings settings) {
+            PlanetEstimator real = SurveyCommand.estimator(settings);
+            return new PlanetEstimator() {
+                @Override
+                public java.util.LinkedHashMap<String, java.util.List<org.nebulith.planet.Quantity>> estimate(
+                        final org.nebulith.composition.ElementAbundances gas) {
+                    check(gas);
+                    return real.estimate(gas);
+                }
+
+                @Override
+                public PlanetEstimator near(final org.nebulith.composition.ElementAbundances nominal) {
+                    check(nominal);
+                    PlanetEstimator star = real.near(nominal);
+                    return gas -> {
+                        check(gas);
+                        return star.estimate(gas);
+                    };
+                }
+            };
+        }
+
+        private static void check(final org.nebulith.composition.ElementAbundances gas) {
+            if (gas.moles(org.nebulith.thermo.Element.Ti) < 1e-11 * gas.moles(org.nebulith.thermo.Element.H)) {
+                throw org.nebulith.errors.NumericalException.inZone("earth-analogue", 1.0, 612.5, 3.2e-5,
+                        "equilibrium did not converge (injected test failure)", null);
+            }
+        }
+    }
+
     private int run(final String... args) {
         out.reset();
         err.reset();
         return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), List.of(new StandInSurvey()));
+                new PrintStream(err, true, StandardCharsets.UTF_8), List.of(new StandInSurvey(), new FailingSurvey()));
     }
 
     private String err() {
@@ -54,7 +91,7 @@ class SurveyCommandTest {
         assertEquals(0, run("survey-standin", "--catalogue", "presets/demo-catalogue.csv", "--draws", "40", "--seed", "7",
                 "--threads", "2", "--out", outDir.toString()), err());
         List<String> lines = Files.readAllLines(outDir.resolve("survey.csv"));
-        assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws", lines.get(0));
+        assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws,n_draws,n_not_applicable", lines.get(0));
         assertTrue(lines.get(1).startsWith("NDC Alder,host,Mg_Si_molar,"), lines.get(1));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("NDC Tamarack,cold,Fe_Si_molar,")));
         assertTrue(Files.exists(outDir.resolve("survey-stars.csv")) && Files.exists(outDir.resolve("survey-notes.txt")));
@@ -94,7 +131,7 @@ class SurveyCommandTest {
         assertEquals(0, run("survey", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3", "--threads", "2",
                 "--out", dir.resolve("r").toString()), err());
         List<String> lines = Files.readAllLines(dir.resolve("r").resolve("survey.csv"));
-        assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws", lines.get(0));
+        assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws,n_draws,n_not_applicable", lines.get(0));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-B,earth-analogue,core_mass_fraction,")), lines.toString());
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-A,host,Mg_Si_molar,")), lines.toString());
         Path report = dir.resolve("r").resolve("report.html");
@@ -110,5 +147,36 @@ class SurveyCommandTest {
             assertEquals(List.of(), page.console(), "console messages");
             assertTrue(page.overflow() <= 0, "no horizontal overflow: " + page.overflow() + " px");
         }
+    }
+
+    @Test
+    void aFailingStarIsRecordedAndTheSurveyFinishesIdenticallyOnOneAndTwoThreads() throws Exception {
+        Path cat = dir.resolve("three-stars.csv");
+        Files.writeString(cat, "# three invented stars; the second cannot converge (no Ti)\n"
+                + "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err,Si_H,Si_H_err,Ti_H,Ti_H_err\n"
+                + "Smoke-A,0.1,0.05,0.05,0.04,0.08,0.04,,\n"
+                + "Smoke-X,0.0,0.05,0.0,0.04,0.0,0.04,-5,0.05\n"
+                + "Smoke-B,-0.2,0.05,-0.15,0.04,-0.18,0.04,,\n");
+        for (String threads : List.of("1", "2")) {
+            assertEquals(0, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
+                    "--threads", threads, "--max-failed-fraction", "0.5", "--out", dir.resolve("t" + threads).toString()),
+                    err() + out.toString(StandardCharsets.UTF_8));
+            assertEquals("4 of 12 draws failed (failures.csv)", out.toString(StandardCharsets.UTF_8).strip());
+        }
+        for (String f : List.of("survey.csv", "failures.csv", "survey-stars.csv", "survey-notes.txt")) {
+            assertEquals(Files.readString(dir.resolve("t1").resolve(f)), Files.readString(dir.resolve("t2").resolve(f)), f);
+        }
+        assertEquals(List.of("star,draw,zone,T_K,P_bar,stage,reason",
+                "Smoke-X,,earth-analogue,612.5,3.2e-5,nominal,equilibrium did not converge (injected test failure)"),
+                Files.readAllLines(dir.resolve("t2").resolve("failures.csv")));
+        assertTrue(Files.readString(dir.resolve("t2").resolve("survey-stars.csv")).contains("Smoke-X,4,failed,"));
+        List<String> survey = Files.readAllLines(dir.resolve("t2").resolve("survey.csv"));
+        assertTrue(survey.stream().anyMatch(l -> l.startsWith("Smoke-B,earth-analogue,")));
+        assertFalse(survey.stream().anyMatch(l -> l.startsWith("Smoke-X,")));
+        // the default limit (1 % of the draws) is exceeded: exit 3, the partial results kept
+        assertEquals(3, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
+                "--out", dir.resolve("limit").toString()));
+        assertTrue(err().contains("4 of 12 draws failed, more than --max-failed-fraction 0.01"), err());
+        assertTrue(Files.exists(dir.resolve("limit").resolve(".survey.csv.partial")));
     }
 }

@@ -72,4 +72,45 @@ class TabulatedDiskTest {
         assertEquals(6.0, c.value(2.5), 1e-15);
         assertThrows(IllegalArgumentException.class, () -> new MonotoneCubic(new double[] {0, 0}, new double[] {1, 2}));
     }
+
+    @Test
+    void flatSegmentsAndRowsGiveTheRowValueBitForBit() {
+        // A table held at 400 K over 0.3-5 AU in 5 % steps (the reproduction of a flat disk):
+        // every radius, on a row or between rows, must give exactly 400 K and 1e-5 bar, not a value
+        // one rounding error away (exact identity of the interpolant on a constant).
+        int n = 58;
+        double[] r = new double[n];
+        double[] t = new double[n];
+        double[] p = new double[n];
+        double[] s = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = 0.3 * Math.pow(1.05, i);
+            t[i] = 400;
+            p[i] = 1e-5;
+            s[i] = 1700 * Math.pow(r[i], -1.5);
+        }
+        TabulatedDisk disk = new TabulatedDisk(r, t, p, s, "flat test disk (invented)");
+        java.util.SplittableRandom rng = new java.util.SplittableRandom(3);
+        for (int k = 0; k < 20_000; k++) {
+            double x = r[0] + (r[n - 1] - r[0]) * rng.nextDouble();
+            DiskState st = disk.stateAt(x);
+            assertEquals(400.0, st.temperatureK(), 0.0, "T at r = " + x);
+            assertEquals(1e-5, st.pressureBar(), 0.0, "P at r = " + x);
+        }
+        for (int i = 0; i < n; i++) {
+            assertEquals(s[i], disk.stateAt(r[i]).sigmaGasGcm2(), 0.0, "Sigma on row " + i);
+        }
+    }
+
+    @Test
+    void monotoneCubicIsExactOnAFlatSegmentAndSmoothElsewhere() {
+        MonotoneCubic m = new MonotoneCubic(new double[] {0, 1, 2, 3}, new double[] {5, Math.log(400), Math.log(400), 7});
+        for (double x = 1; x <= 2; x += 1.0 / 1024) {
+            assertEquals(Math.log(400), m.value(x), 0.0, "x = " + x);
+            assertTrue(m.exactNode(x) >= 0);
+        }
+        assertEquals(-1, m.exactNode(2.5));
+        double v = m.value(2.5);
+        assertTrue(v > Math.log(400) && v < 7, "monotone between the rows: " + v);
+    }
 }

@@ -62,7 +62,7 @@ class LocalSurveyTest {
         run(dir.resolve("one"), 1);
         LocalSurvey.Result four = run(dir.resolve("four"), 4);
         assertEquals(20, four.stars());
-        for (String f : List.of(SurveyCsv.FILE, StarsTable.FILE, LocalSurvey.NOTES)) {
+        for (String f : List.of(SurveyCsv.FILE, SurveyFailures.FILE, StarsTable.FILE, LocalSurvey.NOTES)) {
             assertArrayEquals(Files.readAllBytes(dir.resolve("one").resolve(f)), Files.readAllBytes(dir.resolve("four").resolve(f)), f);
         }
         List<String> lines = Files.readAllLines(dir.resolve("four").resolve(SurveyCsv.FILE));
@@ -85,6 +85,7 @@ class LocalSurveyTest {
         Path broken = dir.resolve("broken");
         Files.createDirectories(broken);
         Files.writeString(broken.resolve(LocalSurvey.PARTIAL), text.substring(0, cut));
+        Files.writeString(broken.resolve(LocalSurvey.FAILURES_PARTIAL), SurveyFailures.HEADER);
         assertThrows(InputException.class, () -> run(broken, 2));
         LocalSurvey.Result resumed = run(SurveyTestData.DEMO, broken, 2, false, true, false, SETTINGS,
                 s -> new FullyCondensedEstimator());
@@ -150,38 +151,118 @@ class LocalSurveyTest {
         run(SurveyTestData.DEMO, out, 1, false, false, true, SETTINGS, s -> new FullyCondensedEstimator());
     }
 
+    /**
+     * A stand-in estimate that cannot converge for some compositions, as the solver's failures name
+     * them (zone, radius, T, P): every draw whose [Fe/H] exceeds +0.37, and every composition with
+     * Ti/H below 1e-11 (the test star "NDC Nonesuch", nominal included).
+     */
+    static final PlanetEstimator FAILING = gas -> {
+        if (gas.moles(Element.Ti) < 1e-11) {
+            throw NumericalException.inZone("cold", 1.0, 400.0, 1e-5, "equilibrium did not converge (Ti-free test"
+                    + " composition)", null);
+        }
+        if (gas.moles(Element.Fe) > Math.pow(10, 7.5 + 0.37 - 12)) {
+            throw NumericalException.noConvergence(300, 1e-4, gas.toInline(), 100, 1e-3);
+        }
+        return new FullyCondensedEstimator().estimate(gas);
+    };
+
+    /** The demo catalogue with the failing test star appended (Ti_H -5: Ti/H about 1e-12.05). */
+    private Path catalogueWithAFailingStar() throws IOException {
+        List<String> lines = new ArrayList<>(Files.readAllLines(SurveyTestData.DEMO));
+        String header = lines.stream().filter(l -> l.startsWith("star,")).findFirst().orElseThrow();
+        List<String> cols = List.of(header.split(","));
+        String[] cells = new String[cols.size()];
+        java.util.Arrays.fill(cells, "");
+        cells[0] = "NDC Nonesuch";
+        cells[cols.indexOf("Fe_H")] = "0.0";
+        cells[cols.indexOf("Fe_H_err")] = "0.05";
+        cells[cols.indexOf("Ti_H")] = "-5";
+        cells[cols.indexOf("Ti_H_err")] = "0.05";
+        lines.add(String.join(",", cells));
+        return Files.write(dir.resolve("with-failing.csv"), lines);
+    }
+
+    private static final List<String> OUTPUTS = List.of(SurveyCsv.FILE, SurveyFailures.FILE, StarsTable.FILE,
+            LocalSurvey.NOTES);
+
+    private LocalSurvey.Result runFailing(Path catalogue, Path out, int threads, boolean resume, double fraction,
+                                          boolean strict) throws IOException {
+        LocalSurvey.Request r = new LocalSurvey.Request(catalogue, catalogue.getFileName().toString(), out, SETTINGS,
+                threads, false, resume, false, fraction, strict);
+        return LocalSurvey.run(r, new EstimatorCache(s -> FAILING), new RunInputs().add(catalogue, "catalogue"),
+                total -> Progress.none(), new LocalSurvey.Log() {
+                    @Override
+                    public void info(String line) {
+                    }
+
+                    @Override
+                    public void warn(String line) {
+                        warnings.add(line);
+                    }
+                });
+    }
+
     @Test
-    void aFailingStarStopsTheRunOrIsSkippedAndListed() throws IOException {
-        // fails whenever the drawn [Fe/H] exceeds +0.37 (a stand-in for a non-convergent estimate)
-        PlanetEstimator failingEstimator = gas -> {
-            if (gas.moles(Element.Fe) > Math.pow(10, 7.5 + 0.37 - 12)) {
-                throw NumericalException.noConvergence(300, 1e-4, gas.toInline(), 100, 1e-3);
-            }
-            return new FullyCondensedEstimator().estimate(gas);
-        };
-        List<StarRow> failingStars = new ArrayList<>();
-        for (StarRow row : SurveyTestData.demoRows()) {
-            try {
-                StarJob.run(row, SETTINGS, failingEstimator);
-            } catch (StarJobException e) {
-                failingStars.add(row);
-            }
+    void failedDrawsAndAFailingStarAreRecordedAndTheRunFinishesIdenticallyOnOneAndTwoThreads() throws IOException {
+        Path catalogue = catalogueWithAFailingStar();
+        LocalSurvey.Result one = runFailing(catalogue, dir.resolve("one"), 1, false, 0.2, false);
+        LocalSurvey.Result two = runFailing(catalogue, dir.resolve("two"), 2, false, 0.2, false);
+        for (String f : OUTPUTS) {
+            assertArrayEquals(Files.readAllBytes(dir.resolve("one").resolve(f)), Files.readAllBytes(dir.resolve("two")
+                    .resolve(f)), f);
         }
-        assertFalse(failingStars.isEmpty());
-        Path out = dir.resolve("fail");
-        StarJobException e = assertThrows(StarJobException.class, () -> run(SurveyTestData.DEMO, out, 2, false, false,
-                false, SETTINGS, s -> failingEstimator));
-        assertEquals(failingStars.get(0).star(), e.star(), "the first failing star in catalogue order");
-        assertTrue(e.getMessage().contains("did not converge"), e.getMessage());
-        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)), "partial results kept for --resume");
+        assertEquals(19, two.stars());
+        assertEquals(2, two.failed(), "NDC Nonesuch, and NDC Tamarack ([Fe/H] +0.38 at its catalogue values)");
+        assertEquals(21 * 64, two.runDraws());
+        assertTrue(two.failedDraws() > 128, "the failing stars' 2 x 64 draws and some high-[Fe/H] draws");
+        assertEquals(two.failedDraws() + " of 1344 draws failed (failures.csv)", two.failureLine());
+        List<String> failures = Files.readAllLines(dir.resolve("two").resolve(SurveyFailures.FILE));
+        assertEquals("star,draw,zone,T_K,P_bar,stage,reason", failures.get(0));
+        assertEquals("NDC Nonesuch,,cold,400,1e-5,nominal,equilibrium did not converge (Ti-free test composition)",
+                failures.get(failures.size() - 1));
+        assertEquals(two.failedDraws() - 128, failures.size() - 3, "one line per failed draw, one per failed star");
+        String drawLine = failures.get(1);
+        assertTrue(drawLine.matches("[^,]+,\\d+,,300,[^,]+,draw,\"equilibrium did not converge at T = 300 K.*"),
+                drawLine);
+        String stars = Files.readString(dir.resolve("two").resolve(StarsTable.FILE));
+        assertTrue(stars.contains("NDC Nonesuch,28,failed,"), stars);
+        assertTrue(stars.contains("nominal estimate, zone 'cold', T = 400 K, P = 1e-5 bar: equilibrium did not"), stars);
+        assertTrue(stars.contains(" of 64 draws failed (failures.csv)"), stars);
+        // percentiles come from the converged draws: n_draws says how many
+        List<String> survey = Files.readAllLines(dir.resolve("two").resolve(SurveyCsv.FILE));
+        assertTrue(survey.get(0).endsWith(",nominal,draws,n_draws,n_not_applicable"), survey.get(0));
+        assertTrue(survey.stream().anyMatch(l -> l.matches(".*,64,(\\d+),0") && !l.endsWith(",64,64,0")),
+                "a star with failed draws has n_draws < draws");
+        assertFalse(survey.stream().anyMatch(l -> l.startsWith("NDC Nonesuch,")));
+    }
+
+    @Test
+    void tooManyFailedDrawsStopWithANumericalFailureAndResumeFinishesWithTheSameBytes() throws IOException {
+        Path catalogue = catalogueWithAFailingStar();
+        Path reference = dir.resolve("reference");
+        runFailing(catalogue, reference, 2, false, 0.2, false);
+        Path out = dir.resolve("stopped");
+        NumericalException e = assertThrows(NumericalException.class, () -> runFailing(catalogue, out, 2, false,
+                LocalSurvey.DEFAULT_MAX_FAILED_FRACTION, false));
+        assertTrue(e.getMessage().contains("draws failed, more than --max-failed-fraction 0.01"), e.getMessage());
+        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)) && Files.exists(out.resolve(LocalSurvey.FAILURES_PARTIAL)));
+        assertTrue(warnings.stream().anyMatch(w -> w.contains("--resume")), warnings.toString());
         assertFalse(Files.exists(out.resolve(SurveyCsv.FILE)));
-        LocalSurvey.Result r = run(SurveyTestData.DEMO, out, 2, true, true, false, SETTINGS, s -> failingEstimator);
-        assertEquals(20 - failingStars.size(), r.stars());
-        assertEquals(failingStars.size(), r.failed());
-        String stars = Files.readString(out.resolve(StarsTable.FILE));
-        for (StarRow f : failingStars) {
-            assertTrue(stars.contains(f.star() + "," + f.line() + ",failed,"), stars);
+        runFailing(catalogue, out, 1, true, 0.2, false);
+        for (String f : List.of(SurveyCsv.FILE, SurveyFailures.FILE, StarsTable.FILE)) {
+            assertArrayEquals(Files.readAllBytes(reference.resolve(f)), Files.readAllBytes(out.resolve(f)), f);
         }
+    }
+
+    @Test
+    void strictStopsAtTheFirstFailureNamingTheState() throws IOException {
+        Path out = dir.resolve("strict");
+        NumericalException e = assertThrows(NumericalException.class, () -> runFailing(catalogueWithAFailingStar(), out,
+                2, false, 1.0, true));
+        assertTrue(e.getMessage().startsWith("--strict: stopped at the first failed estimate: star '"), e.getMessage());
+        assertTrue(e.getMessage().contains("draw ") && e.getMessage().contains("T = 300 K, P = "), e.getMessage());
+        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)), "partial results kept for --resume");
     }
 
     @Test

@@ -167,4 +167,38 @@ class StarJobTest {
         }
         return sxy / sxx;
     }
+
+    @Test
+    void notApplicableDrawsAreLeftOutOfThePercentilesAndCounted() {
+        // A stand-in whose quantity "x" is [Fe/H]-dependent: it does not apply where Fe/H exceeds the
+        // solar value; the percentiles must come from the other draws only, and failures from neither.
+        double solarFe = SolarReference.ASPLUND2009.abundances().moles(Element.Fe)
+                / SolarReference.ASPLUND2009.abundances().moles(Element.H);
+        PlanetEstimator partial = gas -> {
+            double fe = gas.moles(Element.Fe) / gas.moles(Element.H);
+            LinkedHashMap<String, List<Quantity>> z = new LinkedHashMap<>();
+            z.put("cold", List.of(fe > solarFe ? Quantity.notApplicable("x", "-") : new Quantity("x", fe / solarFe, "-")));
+            if (fe > 1.4 * solarFe) {
+                throw new org.nebulith.errors.NumericalException(org.nebulith.errors.Messages.NUMERICAL_FAILURE, null,
+                        "test failure", 300.0, 1e-4, "test");
+            }
+            return z;
+        };
+        Map<Element, Measurement> m = new EnumMap<>(Element.class);
+        m.put(Element.Fe, new Measurement(-0.01, 0.1));
+        StarResult r = StarJob.survey(StarRow.of("Partial", m), new SurveySettings(400, 5, SolarReference.ASPLUND2009,
+                null, null), partial);
+        SurveyRow x = SurveyTestData.find(r.rows(), "cold", "x");
+        assertEquals(400, x.draws());
+        assertEquals(400, x.nDraws() + x.notApplicable() + r.failures().size());
+        assertTrue(x.notApplicable() > 100 && x.nDraws() > 100 && !r.failures().isEmpty(), x + " " + r.failures().size());
+        assertTrue(x.p84() <= 1.0 && x.median() < 1.0, "only draws with Fe/H below solar: " + x);
+        for (DrawFailure f : r.failures()) {
+            assertEquals("draw", f.stage());
+            assertEquals(300.0, f.tK());
+            assertEquals(1e-4, f.pBar());
+        }
+        SurveyRow host = SurveyTestData.find(r.rows(), "host", "Fe_Si_molar");
+        assertEquals(400 - r.failures().size(), host.nDraws());
+    }
 }

@@ -12,6 +12,7 @@ import org.junit.jupiter.api.Test;
 import org.nebulith.disk.DiskConstants;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.PowerLawDisk;
+import org.nebulith.errors.NumericalException;
 
 /**
  * Convergence against analytic integrals. The test disk has Sigma = 1000 g cm^-2 (r/AU)^-1, so
@@ -95,12 +96,12 @@ class RadialIntegratorTest {
                 out[0] = s.rAU() > 1.2 ? Double.NaN : 1;
             }
         };
-        String m = assertThrows(IllegalStateException.class,
+        String m = assertThrows(NumericalException.class,
                 () -> RadialIntegrator.defaults().integrate(tophat, disk, bad, List.of())).getMessage();
         assertTrue(m.contains("T = ") && m.contains("not finite"), m);
-        m = assertThrows(IllegalStateException.class,
+        m = assertThrows(NumericalException.class,
                 () -> new RadialIntegrator(1e-9, 8, 1, 50).integrate(tophat, disk, f, List.of())).getMessage();
-        assertTrue(m.contains("zone 't'"), m);
+        assertTrue(m.contains("zone \"t\"") && m.contains("r = ") && m.contains("T = ") && m.contains("P = "), m);
     }
 
     @Test
@@ -109,5 +110,68 @@ class RadialIntegratorTest {
         assertEquals(1, fronts.size());
         assertEquals(STEP_R, fronts.get(0), 1e-10);
         assertTrue(FrontFinder.find(0.1, 10, 50, r -> 1, 1e-10).isEmpty());
+    }
+
+    /**
+     * An integrand that jumps by a relative 3e-5 wherever it is sampled (as a flat disk on a data
+     * piece boundary once did): 1 + 3e-5 sign(hash of r). Its integral is known to 3e-5; halving
+     * never helps.
+     */
+    private static final RadialIntegrand NOISY = new RadialIntegrand() {
+        @Override
+        public int dimension() {
+            return 1;
+        }
+
+        @Override
+        public void evaluate(org.nebulith.disk.DiskState s, double[] out) {
+            long bits = Double.doubleToLongBits(s.rAU()) * 0x9E3779B97F4A7C15L;
+            out[0] = 1 + ((bits >>> 40 & 1) == 0 ? 3e-5 : -3e-5);
+        }
+    };
+
+    @Test
+    void noiseAtEveryScaleIsAcceptedWithinTheDataContinuityAndRecorded() {
+        ErrorControl control = new ErrorControl(new int[] {0}, 1, 3e-5);
+        ZoneIntegral zi = new RadialIntegrator(1e-9, 8, 2, 200_000).integrate(tophat, disk, NOISY, List.of(), control);
+        assertEquals(C * 0.8, zi.total(0), 3e-5 * C * 0.8); // exact integral of the mean, 1 x C x width
+        IntegrationQuality q = zi.quality();
+        assertTrue(q.acceptedPanels() > 0, "stalled panels are recorded: " + q);
+        assertTrue(q.worstLoAU() >= 0.6 && q.worstHiAU() <= 1.4 && q.worstLoAU() < q.worstHiAU(), q.toString());
+        assertTrue(q.worstRelError() > 0 && q.totalRelError() < RadialIntegrator.CONTINUITY_FACTOR * 3e-5, q.toString());
+        assertTrue(zi.evaluations() < 200_000, "finished well within the budget: " + zi.evaluations());
+    }
+
+    @Test
+    void noiseAboveTheDataContinuityIsANumericalFailureNamingTheState() {
+        ErrorControl tooSmooth = new ErrorControl(new int[] {0}, 1, 1e-8);
+        String m = assertThrows(NumericalException.class, () -> new RadialIntegrator(1e-9, 8, 2, 20_000)
+                .integrate(tophat, disk, NOISY, List.of(), tooSmooth)).getMessage();
+        assertTrue(m.startsWith("zone \"t\", r = ") && m.contains(" AU, T = ") && m.contains(" K, P = "), m);
+    }
+
+    @Test
+    void polymorphsControlledTogetherNeedNoRefinementAtTheirSwap() {
+        // Two components that swap at 1.137 AU with a smooth sum: grouped, only the sum is controlled.
+        RadialIntegrand swap = new RadialIntegrand() {
+            @Override
+            public int dimension() {
+                return 2;
+            }
+
+            @Override
+            public void evaluate(org.nebulith.disk.DiskState s, double[] out) {
+                boolean low = s.rAU() < STEP_R;
+                out[0] = low ? s.rAU() : 0;
+                out[1] = low ? 0 : s.rAU();
+            }
+        };
+        ZoneIntegral together = RadialIntegrator.defaults().integrate(tophat, disk, swap, List.of(),
+                new ErrorControl(new int[] {0, 0}, 1, 0));
+        ZoneIntegral apart = RadialIntegrator.defaults().integrate(tophat, disk, swap, List.of());
+        double exact = C * (1.4 * 1.4 - 0.6 * 0.6) / 2;
+        assertEquals(1.0, (together.total(0) + together.total(1)) / exact, 1e-12);
+        assertTrue(together.evaluations() * 10 < apart.evaluations(),
+                together.evaluations() + " evaluations grouped, " + apart.evaluations() + " apart");
     }
 }

@@ -9,6 +9,7 @@ import java.util.Set;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
@@ -20,7 +21,9 @@ import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
+import org.nebulith.zones.IntegrationQuality;
 import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.ZoneInventory;
 
 /** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
 public final class PlanetReportWriter {
@@ -113,6 +116,7 @@ public final class PlanetReportWriter {
         Report.Section planets = report.section("Planets");
         for (ZonePlanet zp : data.planets()) {
             planets.paragraph(summary(zp));
+            ZoneNotices.of(zp).forEach(n -> planets.paragraph("Notice: " + n + "."));
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
@@ -141,6 +145,10 @@ public final class PlanetReportWriter {
                         + "condensation fronts, '+' where a phase appears and '\u2212' where it disappears "
                         + "going outwards. Distance on a log scale, limited to the zones plus 30%.")
                 .table(phases, "zone-phases.csv: what each zone collected");
+        Report.Section integration = report.section("Radial integration");
+        for (ZonePlanet zp : data.planets()) {
+            integration.paragraph(integrationNote(zp));
+        }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         CAUTIONS.forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
@@ -171,7 +179,7 @@ public final class PlanetReportWriter {
         if (c.hasRock()) {
             sb.append(", core mass fraction ").append(Decimal.forPeople(c.coreMassFraction()));
         }
-        if (c.oxides() != null && c.oxides().hasMgNumber()) {
+        if (c.hasMgNumber()) {
             sb.append(", mantle Mg# ").append(Decimal.forPeople(c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
@@ -185,6 +193,23 @@ public final class PlanetReportWriter {
         return v == null || !Double.isFinite(v) ? "n/a" : Decimal.forPeople(v);
     }
 
+    /**
+     * @param zp a zone planet
+     * @return the run note on its radial integral: evaluations, the worst panel, its radius and its
+     *         estimated error, and panels accepted where the error stopped falling
+     */
+    public static String integrationNote(ZonePlanet zp) {
+        ZoneInventory inv = zp.inventory();
+        IntegrationQuality q = inv.quality();
+        if (q.fixedRule()) {
+            return zp.zoneName() + ": fixed composite rule, " + inv.evaluations() + " evaluations (no error estimate).";
+        }
+        return String.format(java.util.Locale.ROOT, "%s: %d evaluations, %d fronts; worst panel %.6g-%.6g AU"
+                + " (r = %.6g AU), estimated error %.2g relative; whole zone %.2g relative; %d panel(s) accepted"
+                + " where the error stopped falling when halved.", zp.zoneName(), inv.evaluations(), inv.fronts().size(),
+                q.worstLoAU(), q.worstHiAU(), q.worstRadiusAU(), q.worstRelError(), q.totalRelError(), q.acceptedPanels());
+    }
+
     private static Table keyRows(List<ZonePlanet> planets) {
         Table t = Table.withColumns("key quantities", "zone", "Mg_Si_molar", "Fe_Si_molar", "core_mass_fraction",
                 "mantle_Mg_number", "ice_mass_fraction");
@@ -196,7 +221,7 @@ public final class PlanetReportWriter {
             PlanetComposition c = zp.planet().require();
             t.row(zp.zoneName(), c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar"),
                     c.hasRock() ? c.coreMassFraction() : null,
-                    c.oxides() != null && c.oxides().hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
+                    c.hasMgNumber() ? c.oxides().mgNumber() : null, c.iceMassFraction());
         }
         return t;
     }

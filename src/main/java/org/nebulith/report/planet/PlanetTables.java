@@ -7,11 +7,12 @@ import java.util.Map;
 import java.util.StringJoiner;
 
 import org.nebulith.composition.ElementAbundances;
-import org.nebulith.planet.MassRadius;
+import org.nebulith.planet.PlanetRadius;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.Quantity;
 import org.nebulith.planet.ReferenceBodies;
+import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
 import org.nebulith.report.FormulaText;
@@ -45,15 +46,20 @@ public final class PlanetTables {
             }
             PlanetComposition c = zp.planet().require();
             for (Quantity q : c.quantities()) {
-                t.row(zp.zoneName(), q.name(), q.value(), q.unit());
+                t.row(zp.zoneName(), q.name(), q.valueOrNull(), q.unit());
             }
             t.row(zp.zoneName(), "solids_mass_g", c.bulk().massGrams(), "g");
             zp.inventory().zone().planetMassMearth().ifPresent(m -> {
+                PlanetRadius r = PlanetRadius.zeng2016(m, c);
+                t.row(zp.zoneName(), "radius_Rearth_Zeng2016", r.radiusRearth().orElse(null),
+                        "R_earth (for " + m + " M_earth" + (r.note().isEmpty() ? "" : "; " + r.note()) + ")");
                 if (c.hasRock()) {
-                    t.row(zp.zoneName(), "radius_Rearth_Zeng2016", MassRadius.radiusRearth(m, c.coreMassFraction()),
-                            "R_earth (for " + m + " M_earth)");
-                    t.row(zp.zoneName(), "radius_Rearth_structure", StructureRadius.of(c, m),
-                            "R_earth (for " + m + " M_earth)");
+                    double refractory = c.refractoryOxideFraction();
+                    boolean fits = refractory <= ZoneNotices.REFRACTORY_LIMIT;
+                    t.row(zp.zoneName(), "radius_Rearth_structure", fits ? StructureRadius.of(c, m) : null,
+                            "R_earth (for " + m + " M_earth" + (fits ? "" : String.format(java.util.Locale.ROOT,
+                                    "; not applicable: solids %.0f %% refractory oxides, outside the model's Fe core"
+                                            + " + Mg-silicate mantle", 100 * refractory)) + ")");
                 }
             });
         }

@@ -16,9 +16,7 @@ import org.nebulith.composition.SolarReference;
 import org.nebulith.progress.Progress;
 import org.nebulith.survey.EstimatorCache;
 import org.nebulith.survey.PlanetSurveyEstimator;
-import org.nebulith.survey.StarJobException;
 import org.nebulith.survey.StarRow;
-import org.nebulith.survey.SurveyRow;
 import org.nebulith.survey.SurveyRunner;
 import org.nebulith.survey.SurveySettings;
 
@@ -138,18 +136,10 @@ public final class SparkBenchmark {
 
     private static List<String> local(List<StarRow> rows, SurveySettings settings, int threads) throws IOException {
         List<String> blocks = new ArrayList<>();
-        SurveyRunner.run(rows.iterator(), settings, new EstimatorCache(SparkBenchmark::planet), threads, true,
-                Progress.none(), new SurveyRunner.Sink() {
-                    @Override
-                    public void completed(StarRow row, List<SurveyRow> r, String block) {
-                        blocks.add(block);
-                    }
-
-                    @Override
-                    public void failed(StarRow row, StarJobException failure) {
-                        blocks.add("FAILED " + failure.getMessage());
-                    }
-                });
+        SurveyRunner.run(rows.iterator(), settings, new EstimatorCache(SparkBenchmark::planet), threads,
+                Progress.none(), star -> blocks.add(star.starFailure() == null ? star.block()
+                        : "FAILED star '" + star.row().star() + "' (catalogue line " + star.row().line() + "), "
+                        + star.starFailure()));
         return blocks;
     }
 

@@ -24,7 +24,7 @@ import picocli.CommandLine.Option;
 @Command(name = "nebulith-spark", mixinStandardHelpOptions = true, versionProvider = SparkSurveyMain.Version.class,
         description = {
             "Host-star survey on Apache Spark: the per-star work of `nebulith survey`, as Spark tasks.",
-            "Writes survey.csv (or survey-grid.csv for a grid), survey.parquet, survey-failures.csv and",
+            "Writes survey.csv (or survey-grid.csv for a grid), survey.parquet, failures.csv and",
             "survey-notes.txt into --out. Two or more --disk or --zones values make a grid: every star",
             "is computed under each disk model and zone file.",
         },
@@ -120,6 +120,7 @@ public final class SparkSurveyMain implements Callable<Integer> {
             err.println(String.format(Locale.ROOT, "nebulith-spark: %d tasks in %d partitions: %d computed, %d failed;"
                     + " %d draws in %.1f s; wrote %s", o.tasks(), o.partitions(), w.stars(), w.failed(),
                     w.stars() * (long) draws, o.seconds(), w.folder()));
+            err.println(w.failedDraws() + " of " + o.tasks() * (long) draws + " draws failed (" + SurveyTables.FAILURES + ")");
             return w.failed() > 0 && !skipBad ? STARS_FAILED : OK;
         } catch (InputException e) {
             err.println("nebulith-spark: " + e.getMessage());

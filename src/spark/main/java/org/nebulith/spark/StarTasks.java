@@ -11,8 +11,10 @@ import org.apache.spark.api.java.function.FlatMapFunction;
 import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.StarJob;
 import org.nebulith.survey.StarJobException;
+import org.nebulith.report.CsvTableWriter;
+import org.nebulith.survey.StarResult;
 import org.nebulith.survey.StarRow;
-import org.nebulith.survey.SurveyCsv;
+import org.nebulith.survey.SurveyRunner;
 import org.nebulith.survey.SurveyRow;
 import org.nebulith.survey.SurveySettings;
 
@@ -21,9 +23,10 @@ import org.nebulith.survey.SurveySettings;
  * as the local survey (no second implementation of the science). Estimators are built lazily, once
  * per partition and distinct effective settings (disk, zones); they stay on the executor.
  *
- * <p>Every failure of a star (its estimate cannot be built, a draw does not converge, a value is
- * not finite) is caught here and returned as a {@link TaskResult} naming the star and the reason;
- * the other stars of the partition are unaffected.
+ * <p>Failed draws are part of a star's result, as in the local survey (recorded, left out of the
+ * percentiles). Every failure of a star as a whole (its estimate cannot be built, its nominal
+ * estimate does not converge, a value is not finite) is caught here and returned as a
+ * {@link TaskResult} naming the star and the reason; the other stars of the partition are unaffected.
  */
 public final class StarTasks implements FlatMapFunction<Iterator<GridTask>, TaskResult> {
 
@@ -74,8 +77,13 @@ public final class StarTasks implements FlatMapFunction<Iterator<GridTask>, Task
                     + "' and zones '" + zones + "': " + why);
         }
         try {
-            List<SurveyRow> rows = StarJob.run(row, settings, (PlanetEstimator) estimator);
-            return new TaskResult(task.index(), row.star(), row.line(), disk, zones, rows, SurveyCsv.block(rows), 0, null);
+            StarResult r = StarJob.survey(row, settings, (PlanetEstimator) estimator);
+            SurveyRunner.StarOutput out = SurveyRunner.StarOutput.of(row, r);
+            List<SurveyRow> rows = r.rows();
+            return new TaskResult(task.index(), row.star(), row.line(), disk, zones, rows, out.block(),
+                    r.failed() ? StarJobException.NOMINAL : 0, out.starFailure() == null ? null
+                    : "star '" + row.star() + "' (catalogue line " + row.line() + "), " + out.starFailure(),
+                    out.failures(), out.failedDraws());
         } catch (StarJobException e) {
             return failed(task, disk, zones, e.draw(), e.getMessage());
         } catch (RuntimeException e) {
@@ -93,9 +101,13 @@ public final class StarTasks implements FlatMapFunction<Iterator<GridTask>, Task
         }
     }
 
-    private static TaskResult failed(GridTask task, String disk, String zones, int draw, String why) {
+    private TaskResult failed(GridTask task, String disk, String zones, int draw, String why) {
         StarRow row = task.row();
-        return new TaskResult(task.index(), row.star(), row.line(), disk, zones, List.of(), "", draw, why);
+        String stage = draw == TaskResult.SETUP ? "setup" : draw == StarJobException.NOMINAL ? "nominal" : "draw";
+        String line = CsvTableWriter.FORMAT.format(row.star(), draw < 0 ? "" : Integer.toString(draw), "", "", "", stage,
+                why.replaceAll("\\s*[\\r\\n]+\\s*", " ")) + "\n";
+        return new TaskResult(task.index(), row.star(), row.line(), disk, zones, List.of(), "", draw, why, line,
+                settings.draws());
     }
 
     private static String describe(Throwable e) {

@@ -100,7 +100,8 @@ public final class SurveyJob {
         b.append("tasks: ").append(tasks).append(" in ").append(partitions).append(" partitions; Spark master ")
                 .append(master).append('\n');
         b.append("computed: ").append(w.stars()).append(" tasks, ").append(w.rows()).append(" rows; failed: ")
-                .append(w.failed()).append(" (listed in ").append(SurveyTables.FAILURES).append(")\n\n");
+                .append(w.failed()).append(" tasks; draws failed: ").append(w.failedDraws()).append(" of ")
+                .append(tasks * r.draws()).append(" (listed in ").append(SurveyTables.FAILURES).append(")\n\n");
         b.append("Method: the same per-star function as `nebulith survey` (draw d of star S uses the random stream\n");
         b.append("of (seed, S, d)), so every star's block equals the local survey's whatever the partitioning.\n");
         b.append("Caution: only the catalogue's random errors are propagated, not systematics between abundance\n");

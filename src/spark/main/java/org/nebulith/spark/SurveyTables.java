@@ -23,6 +23,7 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.report.CsvTableWriter;
 import org.nebulith.survey.SurveyCsv;
+import org.nebulith.survey.SurveyFailures;
 import org.nebulith.survey.SurveyRow;
 
 /**
@@ -35,8 +36,10 @@ import org.nebulith.survey.SurveyRow;
  * <li>{@code survey-grid.csv} instead, for a grid: columns {@code disk,zones} in front, then the
  *     same lines, cell by cell;</li>
  * <li>{@code survey.parquet}: every row with typed columns ({@link #SCHEMA});</li>
- * <li>{@code survey-failures.csv}: {@code star,line,disk,zones,step,reason} of every failed task
- *     (header only when none failed);</li>
+ * <li>{@code failures.csv}: every failed estimate, with the local survey's columns
+ *     ({@link SurveyFailures#COLUMNS}: {@code star,draw,zone,T_K,P_bar,stage,reason}; stage {@code setup}
+ *     when a star's disk or zone file cannot be used), the same bytes as the local survey's without a
+ *     grid; for a grid, {@code disk,zones} in front (header only when nothing failed);</li>
  * <li>{@code survey-notes.txt}: the settings and counts (text given by the caller).</li>
  * </ul>
  * The results are persisted while they are written, so each task is computed once.
@@ -49,12 +52,12 @@ public final class SurveyTables {
     public static final String GRID_CSV = "survey-grid.csv";
     /** Parquet table (a folder). */
     public static final String PARQUET = "survey.parquet";
-    /** Failed tasks. */
-    public static final String FAILURES = "survey-failures.csv";
+    /** Failed estimates. */
+    public static final String FAILURES = SurveyFailures.FILE;
     /** Notes. */
     public static final String NOTES = "survey-notes.txt";
-    /** Columns of the failures table. */
-    public static final List<String> FAILURE_COLUMNS = List.of("star", "line", "disk", "zones", "step", "reason");
+    /** Columns of the failures table (without a grid). */
+    public static final List<String> FAILURE_COLUMNS = SurveyFailures.COLUMNS;
 
     /** Columns of the Parquet table: the grid index, star, effective disk and zones, then those of survey.csv. */
     public static final StructType SCHEMA = new StructType(new StructField[] {
@@ -64,21 +67,24 @@ public final class SurveyTables {
         DataTypes.createStructField("zones", DataTypes.StringType, false),
         DataTypes.createStructField("zone", DataTypes.StringType, false),
         DataTypes.createStructField("quantity", DataTypes.StringType, false),
-        DataTypes.createStructField("median", DataTypes.DoubleType, false),
-        DataTypes.createStructField("p16", DataTypes.DoubleType, false),
-        DataTypes.createStructField("p84", DataTypes.DoubleType, false),
+        DataTypes.createStructField("median", DataTypes.DoubleType, true),
+        DataTypes.createStructField("p16", DataTypes.DoubleType, true),
+        DataTypes.createStructField("p84", DataTypes.DoubleType, true),
         DataTypes.createStructField("unit", DataTypes.StringType, false),
-        DataTypes.createStructField("nominal", DataTypes.DoubleType, false),
+        DataTypes.createStructField("nominal", DataTypes.DoubleType, true),
         DataTypes.createStructField("draws", DataTypes.IntegerType, false),
+        DataTypes.createStructField("n_draws", DataTypes.IntegerType, false),
+        DataTypes.createStructField("n_not_applicable", DataTypes.IntegerType, false),
     });
 
     /**
      * @param stars  stars (tasks) computed
      * @param failed tasks failed
      * @param rows   survey rows written
+     * @param failedDraws draws failed (all of a failed task's draws included)
      * @param folder the output folder
      */
-    public record Written(long stars, long failed, long rows, String folder) {
+    public record Written(long stars, long failed, long rows, long failedDraws, String folder) {
     }
 
     private SurveyTables() {
@@ -149,16 +155,17 @@ public final class SurveyTables {
         long stars = 0;
         long failed = 0;
         long rows = 0;
+        long failedDraws = 0;
         try (BufferedWriter csv = writer(fs, new Path(partial, grid ? GRID_CSV : CSV));
              BufferedWriter failures = writer(fs, new Path(partial, FAILURES))) {
             csv.write(grid ? prefix("disk", "zones") + SurveyCsv.HEADER : SurveyCsv.HEADER);
-            failures.write(CsvTableWriter.FORMAT.format(FAILURE_COLUMNS.toArray()) + "\n");
+            failures.write(grid ? prefix("disk", "zones") + SurveyFailures.HEADER : SurveyFailures.HEADER);
             while (results.hasNext()) {
                 TaskResult r = results.next();
+                failures.write(grid ? prefixed(r, r.failures()) : r.failures());
+                failedDraws += r.failedDraws();
                 if (!r.ok()) {
                     failed++;
-                    failures.write(CsvTableWriter.FORMAT.format(r.star(), r.line(), r.disk(), r.zones(), r.step(),
-                            r.failure()) + "\n");
                     onFailure.accept(r);
                     continue;
                 }
@@ -167,14 +174,21 @@ public final class SurveyTables {
                 csv.write(grid ? gridBlock(r) : r.block());
             }
         }
-        return new Written(stars, failed, rows, folder);
+        return new Written(stars, failed, rows, failedDraws, folder);
     }
 
     /** @return the star's block with its disk and zones in front of every line */
     private static String gridBlock(TaskResult r) {
+        return prefixed(r, r.block());
+    }
+
+    private static String prefixed(TaskResult r, String lines) {
+        if (lines.isEmpty()) {
+            return "";
+        }
         String front = prefix(r.disk(), r.zones());
-        StringBuilder b = new StringBuilder(r.block().length() + r.rows().size() * front.length());
-        for (String line : r.block().split("\n")) {
+        StringBuilder b = new StringBuilder(lines.length() + 16 * front.length());
+        for (String line : lines.split("\n")) {
             b.append(front).append(line).append('\n');
         }
         return b.toString();
@@ -187,10 +201,16 @@ public final class SurveyTables {
     private static Iterator<Row> rows(TaskResult r) {
         List<Row> out = new ArrayList<>(r.rows().size());
         for (SurveyRow s : r.rows()) {
-            out.add(RowFactory.create(r.index(), s.star(), r.disk(), r.zones(), s.zone(), s.quantity(), s.median(),
-                    s.p16(), s.p84(), s.unit(), s.nominal(), s.draws()));
+            out.add(RowFactory.create(r.index(), s.star(), r.disk(), r.zones(), s.zone(), s.quantity(), orNull(s.median()),
+                    orNull(s.p16()), orNull(s.p84()), s.unit(), orNull(s.nominal()), s.draws(), s.nDraws(),
+                    s.notApplicable()));
         }
         return out.iterator();
+    }
+
+    /** NaN is a survey row's "no value": null in Parquet, as it is an empty cell in the CSV. */
+    private static Double orNull(double v) {
+        return Double.isNaN(v) ? null : v;
     }
 
     private static BufferedWriter writer(FileSystem fs, Path file) throws IOException {

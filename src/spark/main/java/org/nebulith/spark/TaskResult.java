@@ -18,9 +18,13 @@ import java.util.List;
  * @param draw    for a failure: the failing draw, {@link org.nebulith.survey.StarJobException#NOMINAL} for the
  *                nominal estimate, or {@link #SETUP} when the estimate could not be built
  * @param failure why the star failed, or null
+ * @param failures    the star's failed estimates as lines of the failures table
+ *                    ({@link org.nebulith.survey.SurveyFailures#block}; a setup failure has stage {@code setup})
+ * @param failedDraws draws lost (all of them when the star failed)
  */
 public record TaskResult(long index, String star, long line, String disk, String zones,
-                         List<org.nebulith.survey.SurveyRow> rows, String block, int draw, String failure)
+                         List<org.nebulith.survey.SurveyRow> rows, String block, int draw, String failure,
+                         String failures, long failedDraws)
         implements Serializable {
 
     /** {@link #draw()} of a failure to build the estimate (a bad disk or zone file). */
