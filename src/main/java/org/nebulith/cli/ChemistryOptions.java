@@ -56,8 +56,11 @@ public final class ChemistryOptions {
     private String elements;
 
     @Option(names = "--dust-enrichment", paramLabel = "F", defaultValue = "1",
-            description = "Add (F-1) times the CI-chondrite dust per Si of the gas; 1 means none. Default: ${DEFAULT-VALUE}.")
+            description = "Add (F-1) times the CI-chondrite dust per Si of the gas; 1 means none, at most 100000. Default: ${DEFAULT-VALUE}.")
     private double dustEnrichment;
+
+    /** Largest dust enrichment accepted (the gas is then essentially evaporated CI dust). */
+    static final double MAX_DUST_ENRICHMENT = 100_000;
 
     @Option(names = "--C-O", paramLabel = "RATIO",
             description = "Set the C/O atom ratio by changing C only.")
@@ -104,9 +107,16 @@ public final class ChemistryOptions {
      */
     public ElementAbundances composition(RunContext context) {
         ElementAbundances base = baseComposition(context).abundances();
-        if (!(dustEnrichment >= 1)) {
+        if (base.asMap().values().stream().allMatch(v -> v == 0)) {
+            throw elements != null
+                    ? InputException.atOption("--elements", elements, "every amount is zero", "at least one amount > 0")
+                    : InputException.atOption("--composition", compositionArg(), "every amount is zero",
+                            "a composition with at least one amount > 0");
+        }
+        if (!(dustEnrichment >= 1) || dustEnrichment > MAX_DUST_ENRICHMENT) {
             throw InputException.atOption("--dust-enrichment", Double.toString(dustEnrichment),
-                    "enrichment below 1 would remove dust", "a factor >= 1");
+                    dustEnrichment > MAX_DUST_ENRICHMENT ? "more than " + (long) MAX_DUST_ENRICHMENT + " times the CI dust"
+                            : "enrichment below 1 would remove dust", "a factor from 1 to " + (long) MAX_DUST_ENRICHMENT);
         }
         if (dustEnrichment > 1) {
             base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);

@@ -36,8 +36,12 @@ public final class DataAuditCommand extends RunCommand {
             throw InputException.atOption("--sources", sources.toString(), "no nasa_glenn_thermo.inp in it",
                     "the folder src/data/thermo-sources of the source tree");
         }
-        AuditReport report = AuditCommandSupport.report(SpeciesDatabase.bundled(), sources);
+        if (sources != null) {
+            context.input(sources.resolve("nasa_glenn_thermo.inp"), "thermodynamic source");
+        }
+        AuditReport report;
         try (RunFolder run = context.openRunFolder("data-audit")) {
+            report = AuditCommandSupport.report(SpeciesDatabase.bundled(), sources);
             run.writeText("data-audit.md", report.markdown());
             run.writeText("data-audit.csv", report.csv());
             run.commit();

@@ -8,9 +8,11 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.NoSuchFileException;
 
 import org.nebulith.errors.InputException;
+import org.nebulith.errors.Messages;
 import org.nebulith.errors.InternalException;
 import org.nebulith.errors.NebulithException;
 import org.nebulith.errors.NumericalException;
+import org.nebulith.report.OutputWriteException;
 
 import picocli.CommandLine;
 
@@ -51,6 +53,45 @@ final class FailureReport {
      * @return exit code and message
      */
     static Outcome classify(final Throwable failure) {
+        Outcome outcome = classifyRaw(failure);
+        boolean picocli = failure instanceof CommandLine.ParameterException;
+        return new Outcome(outcome.exitCode(), shorten(outcome.message(), picocli ? Messages.ECHO_LIMIT : LONG_MESSAGE));
+    }
+
+    /** Messages longer than this get their long quoted values cut [characters]. */
+    private static final int LONG_MESSAGE = 300;
+
+    /** Longest message line shown [characters]; an echoed value is cut well before. */
+    private static final int MAX_MESSAGE = 1000;
+    private static final java.util.regex.Pattern LONG_QUOTED =
+            java.util.regex.Pattern.compile("(['\"])([^'\"]{" + Messages.ECHO_LIMIT + "})[^'\"]+\\1");
+
+    /**
+     * @param message a failure message
+     * @param above   length from which quoted values are cut
+     * @return the message with every quoted value longer than {@link Messages#ECHO_LIMIT} cut, and at
+     *         most {@value #MAX_MESSAGE} characters long
+     */
+    static String shorten(final String message, final int above) {
+        if (message == null || message.length() <= above) {
+            return message;
+        }
+        String cut = LONG_QUOTED.matcher(message).replaceAll("$1$2...$1");
+        return cut.length() <= MAX_MESSAGE ? cut : cut.substring(0, MAX_MESSAGE) + "... (message cut)";
+    }
+
+    private static Outcome classifyRaw(final Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof OutputWriteException) {
+                return new Outcome(ExitCodes.FAILURE, t.getMessage());
+            }
+        }
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof java.nio.charset.CharacterCodingException) {
+                return new Outcome(ExitCodes.BAD_INPUT, "an input file is not UTF-8 text (" + t.getClass().getSimpleName()
+                        + "); accepted: UTF-8 text");
+            }
+        }
         for (Throwable t = failure; t != null; t = t.getCause()) {
             if (t instanceof NebulithException) {
                 return new Outcome(exitCodeOf((NebulithException) t), t.getMessage());

@@ -83,14 +83,14 @@ public final class InteriorCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         InteriorModel model = model(context);
-        Structure s = solve(model);
         try (RunFolder run = context.openRunFolder("interior-" + RunNames.number(mass) + "Mearth")) {
+            Structure s = solve(model);
             InteriorReportWriter.writeInterior(run, header(context, "nebulith interior"), s);
             Path done = run.commit();
             context.out().println(InteriorReportWriter.summaryLine(s));
             context.out().println("report: " + done.resolve("report.html"));
+            context.cautions(InteriorReportWriter.CAUTIONS, done.resolve("report.html"));
         }
-        InteriorReportWriter.CAUTIONS.forEach(context::warn);
         return ExitCodes.OK;
     }
 

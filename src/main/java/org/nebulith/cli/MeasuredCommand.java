@@ -103,6 +103,7 @@ public final class MeasuredCommand extends RunCommand {
         checkOptions();
         context.input(planetsFile, "planets");
         context.input(catalogue, "catalogue");
+        org.nebulith.survey.CatalogueCheck.registerNamedFiles(catalogue, catalogue.toString(), context.inputs());
         for (String f : new String[] {disk, zones}) {
             if (f != null && Files.isRegularFile(Path.of(f))) {
                 context.input(Path.of(f), "disk or zones");
@@ -119,6 +120,23 @@ public final class MeasuredCommand extends RunCommand {
         for (MeasuredPlanet p : planets) {
             check(p, stars, test);
         }
+        String base = planetsFile.getFileName().toString().replaceFirst("\\.csv$", "");
+        try (RunFolder run = context.openRunFolder("measured-" + (base.matches("[A-Za-z0-9._-]+") ? base : "planets"))) {
+            List<PlanetVerdict> verdicts = verdicts(context, planets, stars, test, settings);
+            double[] masses = curveMasses(planets);
+            List<Curve> curves = curves(masses, core);
+            InteriorReportWriter.writeMeasured(run, InteriorCommand.header(context, "nebulith measured"), verdicts,
+                    masses, curves, scenario());
+            Path done = run.commit();
+            verdicts.forEach(v -> context.out().println(InteriorReportWriter.verdictLine(v)));
+            context.out().println("report: " + done.resolve("report.html"));
+            context.cautions(InteriorReportWriter.MEASURED_CAUTIONS, done.resolve("report.html"));
+        }
+        return ExitCodes.OK;
+    }
+
+    private List<PlanetVerdict> verdicts(RunContext context, List<MeasuredPlanet> planets, Map<String, StarRow> stars,
+                                         HostStarTest test, SurveySettings settings) throws IOException {
         List<PlanetVerdict> verdicts = new ArrayList<>();
         try (Progress progress = context.progress("planets", planets.size())) {
             for (MeasuredPlanet p : planets) {
@@ -128,20 +146,8 @@ public final class MeasuredCommand extends RunCommand {
         } catch (StructureException e) {
             throw new NumericalException(Messages.STRUCTURE_FAILURE, e, e.getMessage());
         }
-        double[] masses = curveMasses(planets);
-        List<Curve> curves = curves(masses, core);
-        String base = planetsFile.getFileName().toString().replaceFirst("\\.csv$", "");
-        try (RunFolder run = context.openRunFolder("measured-" + (base.matches("[A-Za-z0-9._-]+") ? base : "planets"))) {
-            InteriorReportWriter.writeMeasured(run, InteriorCommand.header(context, "nebulith measured"), verdicts,
-                    masses, curves, scenario());
-            Path done = run.commit();
-            verdicts.forEach(v -> context.out().println(InteriorReportWriter.verdictLine(v)));
-            context.out().println("report: " + done.resolve("report.html"));
-        }
-        InteriorReportWriter.MEASURED_CAUTIONS.forEach(context::warn);
-        return ExitCodes.OK;
+        return verdicts;
     }
-
     private void checkOptions() {
         if (draws < 1) {
             throw InputException.atOption("--draws", draws, "must be at least 1", "an integer >= 1");

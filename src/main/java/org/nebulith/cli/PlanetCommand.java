@@ -22,6 +22,10 @@ import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
+import org.nebulith.report.SourceList;
+import org.nebulith.report.planet.PlanetCharts;
+import org.nebulith.survey.HostMonteCarlo;
+import org.nebulith.thermo.Element;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
@@ -35,11 +39,7 @@ import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
 import org.nebulith.report.RunFolder;
-import org.nebulith.report.SourceList;
-import org.nebulith.thermo.Element;
-import org.nebulith.survey.HostMonteCarlo;
 import org.nebulith.report.html.Report;
-import org.nebulith.report.planet.PlanetCharts;
 import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.zones.FeedingZone;
@@ -73,6 +73,9 @@ import picocli.CommandLine.Option;
 public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
+
+    /** Most radii of the radial profile (each is an equilibrium solve). */
+    static final int MAX_PROFILE_POINTS = 10_000;
 
     @Mixin
     private ChemistryOptions chemistry;
@@ -123,14 +126,25 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
+            throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
+                    : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
+        }
         ElementAbundances gas = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
+        ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
         Map<Element, Double> errors = errors();
-        if (profilePoints < 2) {
-            throw InputException.atOption("--profile-points", profilePoints, "too few radii", "an integer >= 2");
+        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
+                .format(context.started());
+        try (RunFolder run = context.openRunFolder(runName)) {
+            return compute(context, run, gas, spec, diskModel, zoneList, errors);
         }
+    }
+
+    private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
+                        List<FeedingZone> zoneList, Map<Element, Double> errors) {
         FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
                 new CoreOptions(!sulfideInMantle, coreSi, coreO));
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
@@ -147,43 +161,41 @@ public final class PlanetCommand extends RunCommand {
             Map<String, double[][]> bands = errors == null ? null : HostMonteCarlo.offsets(gas, errors, diskModel,
                     zoneList, PlanetCharts.quantityNames(), errorDraws, seed);
             Map<Element, Double> t50 = hostT50(spec, gas);
-            return writeOutputs(context, gas, diskModel, spec, planets, scan, bands, t50, errors == null ? null
+            String errorNote = errors == null ? null
                     : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
                     + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "
-                    + "estimate on this disk and these zones and centred on the values shown");
+                    + "estimate on this disk and these zones and centred on the values shown";
+            return writeOutputs(context, run, gas, diskModel, spec, planets, scan, bands, t50, errorNote);
         }
     }
 
-    private int writeOutputs(RunContext context, ElementAbundances gas, DiskModel diskModel, SystemSpec spec,
-                             List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
+    private int writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
+                             SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
                              Map<String, double[][]> bands, Map<Element, Double> t50, String errorNote) {
-        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
-                .format(context.started());
-        try (RunFolder run = context.openRunFolder(runName)) {
-            List<Report.Setting> settings = new ArrayList<>();
-            context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-            List<Report.Citation> extra = new ArrayList<>();
-            extra.add(new Report.Citation("disk", diskModel.description()));
-            extra.add(new Report.Citation("reference bodies", PlanetCharts.REFERENCE_SOURCES));
-            extra.add(new Report.Citation("Zeng2016", "Zeng L., Sasselov D.D. & Jacobsen S.B. (2016) ApJ 819, 127: "
-                    + "mass-radius relation of rocky planets (radius_Rearth_Zeng2016 in bulk-composition.csv)"));
-            List<Report.Citation> sources = SourceList.of(chemistry.citeComposition(context), spec.species(),
-                    ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
-            PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
-                    "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                    gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote, t50,
-                    chemistry.ciReference());
-            PlanetReportWriter.write(run, data);
-            Path done = run.commit();
-            for (ZonePlanet zp : planets) {
-                context.out().println(PlanetReportWriter.summary(zp));
-            }
-            for (ZonePlanet zp : planets) {
-                org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
-            }
-            context.out().println("report: " + done.resolve("report.html"));
-            PlanetReportWriter.CAUTIONS.forEach(context::warn);
+        List<Report.Setting> settings = new ArrayList<>();
+        context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
+        List<Report.Citation> extra = new ArrayList<>();
+        extra.add(new Report.Citation("disk", diskModel.description()));
+        extra.add(new Report.Citation("reference bodies", PlanetCharts.REFERENCE_SOURCES));
+        extra.add(new Report.Citation("Zeng2016", "Zeng L., Sasselov D.D. & Jacobsen S.B. (2016) ApJ 819, 127: "
+                + "mass-radius relation of rocky planets (radius_Rearth_Zeng2016 in bulk-composition.csv)"));
+        List<Report.Citation> sources = SourceList.of(chemistry.citeComposition(context), spec.species(),
+                ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
+        PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
+                "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
+                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote,
+                t50, chemistry.ciReference());
+        PlanetReportWriter.write(run, data);
+        Path done = run.commit();
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
         }
+        for (ZonePlanet zp : planets) {
+            org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.cautions(context.verbosity() == Verbosity.QUIET ? PlanetReportWriter.cautions(planets)
+                : PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
         return ExitCodes.OK;
     }
 

@@ -66,19 +66,21 @@ public final class PointCommand extends RunCommand {
         checkState();
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
-        ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
-        EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
-        EquilibriumResult result = solve(problem, comp);
-        String csv = csv(result);
         Optional<Path> out = context.outOption();
-        if (out.isPresent()) {
-            AtomicOutput.writeText(out.get(), csv, context.force(), context.inputs());
-        } else {
-            Writer w = new OutputStreamWriter(context.out(), StandardCharsets.UTF_8);
-            w.write(csv);
-            w.flush();
+        try (AtomicOutput.OutputFile file = context.reserveOutputFile(String.join(",", PointTable.COLUMNS)).orElse(null)) {
+            ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
+            EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
+            EquilibriumResult result = solve(problem, comp);
+            String csv = csv(result);
+            if (file != null) {
+                file.write(o -> o.write(csv.getBytes(StandardCharsets.UTF_8)));
+            } else {
+                Writer w = new OutputStreamWriter(context.out(), StandardCharsets.UTF_8);
+                w.write(csv);
+                w.flush();
+            }
+            summarise(context, result, spec, out);
         }
-        summarise(context, result, spec, out);
         return ExitCodes.OK;
     }
 

@@ -86,7 +86,7 @@ public final class PresetFile {
      */
     static PresetFile parse(final Path file, final Reader in) throws IOException {
         Map<String, Entry> entries = new LinkedHashMap<>();
-        BufferedReader lines = new BufferedReader(in);
+        BufferedReader lines = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in));
         int number = 0;
         for (String line = lines.readLine(); line != null; line = lines.readLine()) {
             number++;

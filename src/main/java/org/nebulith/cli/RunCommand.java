@@ -19,6 +19,9 @@ import picocli.CommandLine.Spec;
  * </ol>
  * It inherits {@code --help}, {@code --version}, {@code --quiet}, {@code --verbose}, {@code --out}, {@code --run-name}, {@code --force}
  * and {@code --preset}. Every option can be set from a preset by its long name without dashes.
+ * Order inside {@code execute}: check the options, register every input file, open the output
+ * ({@link RunContext#openRunFolder(String)} or {@link RunContext#reserveOutputFile(String)}: every check
+ * of the output path and its lock), and only then compute.
  * Failures are thrown, not printed: {@link FailureReport} maps them to exit codes.
  */
 @Command(mixinStandardHelpOptions = true, versionProvider = ToolVersion.class, sortOptions = false, usageHelpAutoWidth = true,

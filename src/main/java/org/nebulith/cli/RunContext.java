@@ -17,6 +17,7 @@ import org.nebulith.progress.ProgressMode;
 import org.nebulith.report.AtomicOutput;
 import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
+import org.nebulith.report.RunMarker;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
@@ -116,6 +117,23 @@ public final class RunContext {
     }
 
     /**
+     * The standing cautions of a run: every one as a warning, or with --quiet one line pointing to
+     * where they are written.
+     *
+     * @param cautions the cautions
+     * @param where    the report that lists them
+     */
+    public void cautions(final List<String> cautions, final Path where) {
+        if (verbosity == Verbosity.QUIET) {
+            if (!cautions.isEmpty()) {
+                err.println("warning: " + cautions.size() + " cautions apply to these results; see " + where);
+            }
+            return;
+        }
+        cautions.forEach(this::warn);
+    }
+
+    /**
      * @param task  short task name
      * @param total number of steps
      * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
@@ -161,13 +179,31 @@ public final class RunContext {
     }
 
     /**
-     * Register all inputs first: the folder may not be or contain one.
+     * Checks the output folder and locks it; call it after every input is registered and before
+     * anything is computed (the folder may not be or contain an input).
      *
      * @param defaultRunName run name used when neither --out nor --run-name is given
      * @return an open run folder (commit it at the end; close it in any case)
      */
     public RunFolder openRunFolder(final String defaultRunName) {
-        return AtomicOutput.openRunFolder(outputFolder(defaultRunName), force(), inputs);
+        return RunFolder.open(outputFolder(defaultRunName), force(), inputs, marker());
+    }
+
+    /**
+     * Checks the single output file named by --out and locks it; call it after every input is
+     * registered and before anything is computed.
+     *
+     * @param firstLine the first line of every output of this command (an existing file is
+     *                  replaced with --force only if it starts with it)
+     * @return the reserved file, if --out was given
+     */
+    public Optional<AtomicOutput.OutputFile> reserveOutputFile(final String firstLine) {
+        return outOption().map(path -> AtomicOutput.reserveFile(path, force(), inputs, firstLine, command));
+    }
+
+    /** @return the marker of this run's output folder */
+    public RunMarker marker() {
+        return new RunMarker(command, toolVersion(), started);
     }
 
     /** @return when the run started */

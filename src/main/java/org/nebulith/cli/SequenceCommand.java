@@ -62,6 +62,9 @@ public final class SequenceCommand extends RunCommand {
     /** Pressure used when neither --P-bar nor --path is given [bar]. */
     static final double DEFAULT_P_BAR = 1e-4;
 
+    /** Most grid temperatures of one sequence (about a day of work at 10 ms a state). */
+    static final int MAX_GRID_POINTS = 1_000_000;
+
     @Mixin
     private ChemistryOptions chemistry;
 
@@ -97,19 +100,19 @@ public final class SequenceCommand extends RunCommand {
         PressurePath path = pressurePath(context);
         SequenceSettings settings = settings(path);
         Set<Element> elements = ChemistryOptions.elementsOf(comp);
-        ChemicalSystem system = spec.build(elements);
-        double[] totals = new double[system.elementCount()];
-        for (int j = 0; j < totals.length; j++) {
-            totals[j] = comp.moles(system.elements().get(j));
-        }
-        List<String> cautions = SequenceCautions.lines(spec.describe(),
-                SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK));
-        long t0 = System.nanoTime();
-        CondensationSequence seq = run(system, totals, settings);
-        double elapsed = (System.nanoTime() - t0) / 1e9;
-        SequenceTables tables = new SequenceTables(seq);
         Path folder;
         try (RunFolder run = context.openRunFolder("sequence")) {
+            ChemicalSystem system = spec.build(elements);
+            double[] totals = new double[system.elementCount()];
+            for (int j = 0; j < totals.length; j++) {
+                totals[j] = comp.moles(system.elements().get(j));
+            }
+            List<String> cautions = SequenceCautions.lines(spec.describe(),
+                    SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK));
+            long t0 = System.nanoTime();
+            CondensationSequence seq = run(system, totals, settings);
+            double elapsed = (System.nanoTime() - t0) / 1e9;
+            SequenceTables tables = new SequenceTables(seq);
             run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
             run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
             run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
@@ -123,10 +126,11 @@ public final class SequenceCommand extends RunCommand {
                     context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
                     reportSettings(context), cautions, sources(context, spec, elements), context.inputs()));
             folder = run.commit();
+            printCautions(context, cautions);
+            context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
+                    + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote "
+                    + folder);
         }
-        printCautions(context, cautions);
-        context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
-                + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
         return ExitCodes.OK;
     }
 
@@ -185,6 +189,13 @@ public final class SequenceCommand extends RunCommand {
         if (!(tStepK > 0) || tStepK > tMaxK - tMinK) {
             throw InputException.atOption("--T-step-K", tStepK, "not a step inside the range",
                     "a number of K > 0 and at most T-max - T-min");
+        }
+        double steps = Math.floor((tMaxK - tMinK) / tStepK) + 1;
+        if (steps > MAX_GRID_POINTS) {
+            throw InputException.atOption("--T-step-K", tStepK, "gives " + (long) steps
+                    + " grid temperatures, more than " + MAX_GRID_POINTS, "a step of at least "
+                    + Decimal.format((tMaxK - tMinK) / (MAX_GRID_POINTS - 1)) + " K for this range"
+                    + " (boundaries are refined to 0.05 K anyway)");
         }
         if (!(isolation >= 0 && isolation <= 1)) {
             throw InputException.atOption("--isolation", isolation, "outside [0, 1]",

@@ -48,7 +48,7 @@ public class SurveyCommand extends RunCommand {
     private Path catalogue;
 
     @Option(names = "--draws", paramLabel = "N", defaultValue = "1000",
-            description = "Monte Carlo draws per star (default: ${DEFAULT-VALUE}).")
+            description = "Monte Carlo draws per star, at most 100000, and at most 1e8 in all (default: ${DEFAULT-VALUE}).")
     private int draws;
 
     @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
@@ -56,7 +56,7 @@ public class SurveyCommand extends RunCommand {
     private long seed;
 
     @Option(names = "--threads", paramLabel = "N",
-            description = "Worker threads (default: all processors); results do not depend on it.")
+            description = "Worker threads, at most 4 per processor (default: all processors); results do not depend on it.")
     private Integer threads;
 
     @Option(names = "--disk", paramLabel = "NAME|FILE", description = "Disk preset or file (default: the planet estimate's).")
@@ -118,8 +118,10 @@ public class SurveyCommand extends RunCommand {
             throw InputException.atOption("--draws", draws, "must be at least 1", "an integer >= 1");
         }
         int workers = threads == null ? SurveyRunner.defaultThreads() : threads;
-        if (workers < 1) {
-            throw InputException.atOption("--threads", workers, "must be at least 1", "an integer >= 1");
+        if (workers < 1 || workers > maxThreads()) {
+            throw InputException.atOption("--threads", workers, workers < 1 ? "must be at least 1"
+                    : "more than 4 per processor", "an integer from 1 to " + maxThreads() + " (4 x "
+                    + Runtime.getRuntime().availableProcessors() + " processors)");
         }
         if (!(maxFailedFraction >= 0 && maxFailedFraction <= 1)) {
             throw InputException.atOption("--max-failed-fraction", maxFailedFraction, "must be a fraction",
@@ -156,6 +158,11 @@ public class SurveyCommand extends RunCommand {
                 + " survey-chart.png/.svg");
         context.out().println(r.failureLine());
         return ExitCodes.OK;
+    }
+
+    /** @return the most worker threads accepted: 4 per processor */
+    static int maxThreads() {
+        return 4 * Runtime.getRuntime().availableProcessors();
     }
 
     private SolarReference solar() {

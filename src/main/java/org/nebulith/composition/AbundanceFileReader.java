@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 
+import org.nebulith.errors.Messages;
 import org.nebulith.format.HeaderedLines;
 import org.nebulith.thermo.Element;
 
@@ -22,6 +23,11 @@ public final class AbundanceFileReader {
     private AbundanceFileReader() {
     }
 
+    /** Largest accepted log eps: 10^8 times hydrogen (log eps(H) = 12 by definition). */
+    static final double MAX_LOG_EPS = 20;
+    /** Smallest accepted log eps (10^-62 times hydrogen; anything less is absent). */
+    static final double MIN_LOG_EPS = -50;
+
     /**
      * @param in   the file contents (closed by this method)
      * @param name file or preset name for messages
@@ -35,11 +41,15 @@ public final class AbundanceFileReader {
         AbundanceUnit[] unit = new AbundanceUnit[1];
         boolean headerSeen = HeaderedLines.read(in, HEADER, provenance,
                 (line, lineNo) -> new AbundanceFormatException(name, lineNo, "header",
-                        "expected exactly '" + HEADER + "', found '" + line + "'"),
+                        "expected exactly '" + HEADER + "', found '" + Messages.echo(line) + "'"),
                 (line, lineNo) -> unit[0] = readRow(line, lineNo, name, unit[0], amounts));
         if (!headerSeen || amounts.isEmpty()) {
             throw new AbundanceFormatException(name, 0, "element",
                     "no data rows; expected header '" + HEADER + "' and one row per element");
+        }
+        if (amounts.values().stream().allMatch(v -> v == 0)) {
+            throw new AbundanceFormatException(name, 0, "value", "every amount is zero; at least one element"
+                    + " needs an amount > 0");
         }
         return new AbundanceSet(name, provenance, ElementAbundances.of(amounts));
     }
@@ -54,12 +64,12 @@ public final class AbundanceFileReader {
         Element el = Element.fromSymbol(f[0]);
         if (el == null) {
             throw new AbundanceFormatException(name, lineNo, "element",
-                    "unknown element '" + f[0].strip() + "'; accepted: " + java.util.Arrays.toString(Element.values()));
+                    "unknown element '" + Messages.echo(f[0].strip()) + "'; accepted: " + java.util.Arrays.toString(Element.values()));
         }
         AbundanceUnit u = AbundanceUnit.fromToken(f[2]);
         if (u == null) {
             throw new AbundanceFormatException(name, lineNo, "unit",
-                    "unknown unit '" + f[2].strip() + "'; accepted: " + AbundanceUnit.accepted());
+                    "unknown unit '" + Messages.echo(f[2].strip()) + "'; accepted: " + AbundanceUnit.accepted());
         }
         if (unit != null && u != unit) {
             throw new AbundanceFormatException(name, lineNo, "unit",
@@ -77,12 +87,16 @@ public final class AbundanceFileReader {
         try {
             v = Double.parseDouble(s.strip());
         } catch (NumberFormatException ex) {
-            throw new AbundanceFormatException(name, lineNo, "value", "'" + s.strip() + "' is not a number");
+            throw new AbundanceFormatException(name, lineNo, "value", "'" + Messages.echo(s.strip()) + "' is not a number");
         }
         boolean ok = Double.isFinite(v) && (u == AbundanceUnit.LOG_EPS || v >= 0);
         if (!ok) {
-            throw new AbundanceFormatException(name, lineNo, "value", "'" + s.strip()
+            throw new AbundanceFormatException(name, lineNo, "value", "'" + Messages.echo(s.strip())
                     + "' must be finite" + (u == AbundanceUnit.LOG_EPS ? "" : " and >= 0"));
+        }
+        if (u == AbundanceUnit.LOG_EPS && (v > MAX_LOG_EPS || v < MIN_LOG_EPS)) {
+            throw new AbundanceFormatException(name, lineNo, "value", "log eps " + Messages.echo(s.strip())
+                    + " is outside " + (int) MIN_LOG_EPS + " to " + (int) MAX_LOG_EPS + " (log eps(H) = 12 by definition)");
         }
         return v;
     }

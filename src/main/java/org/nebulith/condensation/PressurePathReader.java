@@ -35,7 +35,7 @@ public final class PressurePathReader {
         List<double[]> rows = new ArrayList<>();
         boolean header = false;
         int lineNo = 0;
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
                 lineNo++;
                 String line = raw.strip();
@@ -44,7 +44,7 @@ public final class PressurePathReader {
                 }
                 if (!header) {
                     if (!line.equals(HEADER)) {
-                        throw InputException.atField(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER);
+                        throw InputException.atField(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER);
                     }
                     header = true;
                     continue;

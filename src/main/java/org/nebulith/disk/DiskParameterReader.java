@@ -57,7 +57,7 @@ public final class DiskParameterReader {
 
     private void load(Reader in) throws IOException {
         boolean header = HeaderedLines.read(in, HEADER, comments,
-                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER),
+                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER),
                 this::addEntry);
         if (!header) {
             throw new DiskFormatException(name, 0, "header", "no header line", HEADER + " then key,value rows");

@@ -73,7 +73,7 @@ public final class DiskPresets {
      */
     public static DiskModel read(Reader in, String name) throws IOException {
         String text;
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             text = br.lines().collect(Collectors.joining("\n", "", "\n"));
         }
         List<String> lines = text.lines().map(String::strip).toList();
@@ -88,7 +88,8 @@ public final class DiskPresets {
         if (header.equals(DiskParameterReader.HEADER)) {
             return DiskParameterReader.read(new StringReader(text), name);
         }
-        throw new DiskFormatException(name, headerLine + 1, "header", "found '" + header + "'",
+        throw new DiskFormatException(name, headerLine + 1, "header",
+                "found '" + org.nebulith.errors.Messages.echo(header) + "'",
                 TabulatedDiskReader.HEADER + " (table) or " + DiskParameterReader.HEADER + " (parameters)");
     }
 }

@@ -31,7 +31,7 @@ public final class TabulatedDiskReader {
         List<double[]> rows = new ArrayList<>();
         List<String> comments = new ArrayList<>();
         HeaderedLines.read(in, HEADER, comments,
-                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + line + "'", "exactly " + HEADER),
+                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER),
                 (line, lineNo) -> {
                     double[] row = parseRow(line, lineNo, name);
                     if (!rows.isEmpty() && !(row[0] > rows.get(rows.size() - 1)[0])) {
@@ -57,7 +57,7 @@ public final class TabulatedDiskReader {
             try {
                 v[i] = Double.parseDouble(f[i].strip());
             } catch (NumberFormatException ex) {
-                throw new DiskFormatException(name, lineNo, FIELDS[i], "'" + f[i].strip() + "' is not a number",
+                throw new DiskFormatException(name, lineNo, FIELDS[i], "'" + org.nebulith.errors.Messages.echo(f[i].strip()) + "' is not a number",
                         "a finite number > 0");
             }
             if (!(v[i] > 0) || Double.isInfinite(v[i])) {

@@ -56,6 +56,7 @@ public final class InputException extends NebulithException {
      */
     public static InputException atOption(final String option, final Object value, final String problem,
                                           final String accepted) {
-        return new InputException(Messages.BAD_OPTION_VALUE, null, option, value, problem, accepted);
+        Object shown = value instanceof CharSequence ? Messages.echo(value) : value;
+        return new InputException(Messages.BAD_OPTION_VALUE, null, option, shown, problem, accepted);
     }
 }

@@ -29,6 +29,16 @@ public enum Messages {
     OUTPUT_EXISTS(1, "{0}: output already exists; use --force to replace it, or choose another --out or --run-name"),
     /** An output would overwrite or replace an input of the same run: output, input. */
     OUTPUT_IS_INPUT(2, "{0}: refusing to write here because it would overwrite the input file {1}"),
+    /** An existing output that a run may not replace (not an earlier run of this tool, or a protected folder): path, why, accepted. */
+    OUTPUT_NOT_REPLACEABLE(3, "{0}: refusing to replace it: {1}; accepted: {2}"),
+    /** An output path that can only fail: path, what is wrong, what is accepted. */
+    OUTPUT_UNUSABLE(3, "{0}: cannot write the output here: {1}; accepted: {2}"),
+    /** Another run holds the output's lock: output, holder (process, host, command, start). */
+    OUTPUT_LOCKED(2, "{0}: another nebulith run is writing this output ({1}); wait for it to finish, or choose"
+            + " another --out"),
+    /** A lock whose owner is gone: output, holder, lock file. */
+    OUTPUT_LOCK_STALE(3, "{0}: locked by {1}, which is no longer running; if no run is writing this output,"
+            + " delete {2} and run again"),
     /** An output name that is not a plain file or folder name: name, accepted. */
     BAD_OUTPUT_NAME(2, "output name \"{0}\" is not allowed; accepted: {1}"),
     /** The equilibrium iteration did not converge: T [K], P [bar], composition, iterations, residual. */
@@ -92,7 +102,31 @@ public enum Messages {
         return new MessageFormat(template, Locale.ROOT).format(shown);
     }
 
+    /** Longest echoed value, in characters; longer values are cut (see {@link #echo(Object)}). */
+    public static final int ECHO_LIMIT = 80;
+
+    /** Parts longer than this are cut even where they are not an echoed value (a safety net). */
+    private static final int PART_LIMIT = 2000;
+
+    /**
+     * @param value a value from the user's input, to be quoted in a message
+     * @return its text, cut to {@value #ECHO_LIMIT} characters (with the full length noted)
+     */
+    public static String echo(final Object value) {
+        return cut(String.valueOf(value), ECHO_LIMIT);
+    }
+
+    private static String cut(final String text, final int limit) {
+        if (text.length() <= limit) {
+            return text;
+        }
+        return text.substring(0, limit) + "... (" + text.length() + " characters)";
+    }
+
     private static Object render(final Object part) {
+        if (part instanceof CharSequence && ((CharSequence) part).length() > PART_LIMIT) {
+            return cut(part.toString(), ECHO_LIMIT);
+        }
         if (part instanceof Double || part instanceof Float) {
             double value = ((Number) part).doubleValue();
             return Double.isFinite(value) ? Decimal.format(value) : Double.toString(value);

@@ -38,7 +38,7 @@ public final class HeaderedLines {
     public static boolean read(Reader in, String header, List<String> comments, BadHeader bad, Row row)
             throws IOException {
         boolean headerSeen = false;
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(TextInput.withoutBom(in))) {
             int lineNo = 0;
             for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
                 lineNo++;

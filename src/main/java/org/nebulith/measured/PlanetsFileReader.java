@@ -35,7 +35,7 @@ public final class PlanetsFileReader {
      * @throws InputException for the first bad line or field
      */
     public static List<MeasuredPlanet> read(final Reader in, final String name) throws IOException {
-        BufferedReader r = new BufferedReader(in);
+        BufferedReader r = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in));
         List<MeasuredPlanet> out = new ArrayList<>();
         Set<String> seen = new HashSet<>();
         boolean withDistance = false;

@@ -12,7 +12,6 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.regex.Pattern;
 
 import org.nebulith.errors.InputException;
-import org.nebulith.errors.Messages;
 
 /**
  * Writes outputs so that nothing half-written is ever visible under the final name.
@@ -48,24 +47,37 @@ public final class AtomicOutput {
     }
 
     /**
-     * Writes a file atomically.
+     * Writes a file atomically, under the output's lock. With {@code force} an existing file is
+     * replaced only if it starts with the same first line as the new content (an earlier output
+     * of the same kind), never a user's other file.
      *
      * @param target  the final path
      * @param content what to write
-     * @param force   whether an existing file may be replaced
+     * @param force   whether an earlier output may be replaced
      * @param inputs  the run's inputs, which are never overwritten
      * @return target
-     * @throws InputException if the target exists without force, or is an input
-     * @throws UncheckedIOException if writing fails (nothing is left behind)
+     * @throws InputException if the target exists without force, is not an earlier output, or is an input
+     * @throws OutputWriteException if writing fails (nothing is left behind)
      */
     public static Path writeFile(final Path target, final Content content, final boolean force,
                                  final RunInputs inputs) {
-        inputs.checkNotInput(target);
-        if (!force && Files.exists(target)) {
-            throw new InputException(Messages.OUTPUT_EXISTS, null, target);
+        byte[] bytes = render(target, content);
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        int end = text.indexOf('\n');
+        try (OutputFile file = reserveFile(target, force, inputs, end < 0 ? text : text.substring(0, end), "write")) {
+            file.write(out -> out.write(bytes));
         }
-        replaceAtomically(target, content);
         return target;
+    }
+
+    private static byte[] render(final Path target, final Content content) {
+        java.io.ByteArrayOutputStream buffer = new java.io.ByteArrayOutputStream();
+        try {
+            content.writeTo(buffer);
+        } catch (IOException e) {
+            throw new OutputWriteException(target, e);
+        }
+        return buffer.toByteArray();
     }
 
     /**
@@ -73,7 +85,7 @@ public final class AtomicOutput {
      *
      * @param target the final path
      * @param text   the content
-     * @param force  whether an existing file may be replaced
+     * @param force  whether an earlier output may be replaced
      * @param inputs the run's inputs
      * @return target
      */
@@ -82,16 +94,75 @@ public final class AtomicOutput {
     }
 
     /**
+     * Checks a single-file output and takes its lock, before anything is computed.
+     *
+     * @param target    the final path
+     * @param force     whether an earlier output may be replaced
+     * @param inputs    the run's inputs (all registered)
+     * @param firstLine the first line of every output of this kind: an existing file is replaced only if it
+     *                  starts with it
+     * @param command   what is running (named to a second run that finds the lock)
+     * @return the reserved file; write it, then close it
+     * @throws InputException if the path cannot or may not be used, or another run writes it
+     */
+    public static OutputFile reserveFile(final Path target, final boolean force, final RunInputs inputs,
+                                         final String firstLine, final String command) {
+        OutputChecks.file(target, force, inputs, firstLine);
+        OutputLock lock = OutputLock.acquire(target, command);
+        try {
+            OutputChecks.file(target, force, inputs, firstLine);
+        } catch (RuntimeException e) {
+            lock.close();
+            throw e;
+        }
+        return new OutputFile(target, lock);
+    }
+
+    /**
      * Opens a run folder built in a temporary sibling; see {@link RunFolder}.
      *
      * @param target the final folder, e.g. {@code reports/demo}
-     * @param force  whether an existing folder may be replaced at commit
+     * @param force  whether an earlier run folder may be replaced at commit
      * @param inputs the run's inputs; the folder may not be or contain one
      * @return the open folder
      * @throws InputException if the folder exists without force, or is or holds an input
      */
     public static RunFolder openRunFolder(final Path target, final boolean force, final RunInputs inputs) {
-        return RunFolder.open(target, force, inputs);
+        return RunFolder.open(target, force, inputs, RunMarker.now("run", "dev"));
+    }
+
+    /** A single output file reserved by {@link #reserveFile}: checked, locked, written once. */
+    public static final class OutputFile implements AutoCloseable {
+        private final Path target;
+        private final OutputLock lock;
+
+        private OutputFile(final Path target, final OutputLock lock) {
+            this.target = target;
+            this.lock = lock;
+        }
+
+        /** @return the final path */
+        public Path target() {
+            return target;
+        }
+
+        /**
+         * @param content what to write (to a hidden sibling, then renamed onto the target)
+         * @throws OutputWriteException naming the target if writing fails
+         */
+        public void write(final Content content) {
+            try {
+                replaceAtomically(target, content);
+            } catch (UncheckedIOException e) {
+                throw new OutputWriteException(target, e.getCause());
+            }
+        }
+
+        /** Releases the lock. */
+        @Override
+        public void close() {
+            lock.close();
+        }
     }
 
     /**
@@ -113,7 +184,7 @@ public final class AtomicOutput {
             move(temp, target);
         } catch (IOException e) {
             deleteQuietly(temp);
-            throw new UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
+            throw new UncheckedIOException(e);
         } catch (RuntimeException | Error e) {
             deleteQuietly(temp);
             throw e;

@@ -3,6 +3,12 @@ package org.nebulith.report;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.DigestInputStream;
@@ -53,11 +59,87 @@ public final class RunInputs {
             }
         }
         try {
-            files.add(new InputFile(file, role, sha256(file), Files.size(file)));
+            files.add(new InputFile(file, role, checkedSha256(file, file.toString()), Files.size(file)));
         } catch (IOException e) {
             throw new InputException(Messages.INPUT_NOT_READABLE, e, file, e.getClass().getSimpleName());
         }
         return this;
+    }
+
+    /**
+     * Checks that a file is UTF-8 text without registering it (an earlier output read back, for
+     * instance).
+     *
+     * @param file  the file
+     * @param shown the file as named in a message
+     * @throws InputException naming the file and line of the first byte that is not UTF-8
+     */
+    public static void checkText(final Path file, final String shown) {
+        try {
+            checkedSha256(file, shown);
+        } catch (IOException e) {
+            throw new InputException(Messages.INPUT_NOT_READABLE, e, shown, e.getClass().getSimpleName());
+        }
+    }
+
+    /** Reads the file once: its SHA-256, and a check that it decodes as UTF-8, line by line. */
+    private static String checkedSha256(final Path file, final String shown) throws IOException {
+        MessageDigest digest = newDigest();
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer bytes = ByteBuffer.allocate(1 << 16);
+        CharBuffer chars = CharBuffer.allocate(1 << 16);
+        long line = 1;
+        try (InputStream in = Files.newInputStream(file)) {
+            boolean end = false;
+            while (!end) {
+                int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
+                end = n < 0;
+                if (n > 0) {
+                    digest.update(bytes.array(), bytes.position(), n);
+                    bytes.position(bytes.position() + n);
+                }
+                bytes.flip();
+                long asciiLines = asciiNewlines(bytes.array(), bytes.position(), bytes.limit());
+                if (asciiLines >= 0) { // plain ASCII (the common case) needs no decoding
+                    line += asciiLines;
+                    bytes.position(bytes.limit());
+                    bytes.compact();
+                    continue;
+                }
+                int start = bytes.position();
+                CoderResult result = decoder.decode(bytes, chars, end);
+                line += newlines(bytes.array(), start, bytes.position());
+                if (result.isError()) {
+                    throw InputException.inFile(shown, "line " + line + ": byte 0x" + String.format("%02X",
+                            bytes.get(bytes.position()) & 0xFF) + " is not UTF-8 text", "UTF-8 text (save the file as"
+                            + " UTF-8; plain ASCII is UTF-8)");
+                }
+                chars.clear();
+                bytes.compact();
+            }
+        }
+        return HexFormat.of().formatHex(digest.digest());
+    }
+
+    /** @return the line ends in the range, or -1 if it holds a byte that is not ASCII */
+    private static long asciiNewlines(final byte[] bytes, final int from, final int to) {
+        long n = 0;
+        for (int i = from; i < to; i++) {
+            if (bytes[i] < 0) {
+                return -1;
+            }
+            n += bytes[i] == '\n' ? 1 : 0;
+        }
+        return n;
+    }
+
+    private static long newlines(final byte[] bytes, final int from, final int to) {
+        long n = 0;
+        for (int i = from; i < to; i++) {
+            n += bytes[i] == '\n' ? 1 : 0;
+        }
+        return n;
     }
 
     /** @return the registered files, in registration order */

@@ -1,6 +1,7 @@
 package org.nebulith.survey;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -9,6 +10,7 @@ import java.util.Map;
 import java.util.TreeMap;
 
 import org.nebulith.errors.InputException;
+import org.nebulith.report.RunInputs;
 
 /**
  * The validating first pass over a catalogue: every row is parsed, duplicates are found, and each
@@ -62,6 +64,40 @@ public record CatalogueCheck(List<CatalogueProblem> problems, Map<Long, String> 
             }
         }
         return new CatalogueCheck(List.copyOf(problems), bad, good, problems.stream().noneMatch(p -> isHeader(p, bad)));
+    }
+
+    /**
+     * The cheap pass before any output is opened: registers every existing file named in a star's
+     * disk or zones column as an input of the run (so no output may replace it) and counts the rows.
+     *
+     * @param file      the catalogue
+     * @param shownName the catalogue as the user named it
+     * @param inputs    the run's inputs
+     * @return the number of star rows (good or not)
+     * @throws IOException if the file cannot be read
+     */
+    public static long registerNamedFiles(Path file, String shownName, RunInputs inputs) throws IOException {
+        inputs.add(file, "catalogue");
+        long rows = 0;
+        try (CatalogueReader reader = CatalogueReader.open(file)) {
+            for (CatalogueReader.Parsed p = reader.next(); p != null; p = reader.next()) {
+                rows++;
+                if (p.row() != null) {
+                    register(p.row().disk(), "disk (catalogue line " + p.line() + ")", inputs);
+                    register(p.row().zones(), "feeding zones (catalogue line " + p.line() + ")", inputs);
+                }
+            }
+        }
+        return rows;
+    }
+
+    private static void register(String value, String role, RunInputs inputs) {
+        if (value != null) {
+            Path path = Path.of(value);
+            if (Files.isRegularFile(path)) {
+                inputs.add(path, role);
+            }
+        }
     }
 
     private static boolean isHeader(CatalogueProblem p, Map<Long, String> bad) {

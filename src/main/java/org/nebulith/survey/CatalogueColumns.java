@@ -94,7 +94,7 @@ final class CatalogueColumns {
         String symbol = name.substring(0, name.length() - (error ? 6 : 2));
         Element el = Element.fromSymbol(symbol);
         if (el == null || el == Element.H || el == Element.He) {
-            String why = el == null ? "unknown element '" + symbol + "'"
+            String why = el == null ? "unknown element '" + org.nebulith.errors.Messages.echo(symbol) + "'"
                     : "[" + el + "/H] is not accepted (H is the reference, He stays solar)";
             problems.add(new CatalogueProblem(line, name, "", why, ACCEPTED));
             return;

@@ -18,7 +18,7 @@ public record CatalogueProblem(long line, String column, String star, String pro
      * @return the one-line message: {@code file: line L: field "C": [star 'S': ]problem; accepted: ...}
      */
     public String text(Object file) {
-        String what = star.isEmpty() ? problem : "star '" + star + "': " + problem;
-        return Messages.BAD_INPUT_FIELD.format(file, line, column, what, accepted);
+        String what = star.isEmpty() ? problem : "star '" + Messages.echo(star) + "': " + problem;
+        return Messages.BAD_INPUT_FIELD.format(file, line, Messages.echo(column), what, accepted);
     }
 }

@@ -16,6 +16,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.nebulith.errors.Messages;
 import org.nebulith.thermo.Element;
 
 /**
@@ -178,12 +179,12 @@ public final class CatalogueReader implements Closeable {
         try {
             v = Double.parseDouble(text);
         } catch (NumberFormatException e) {
-            problems.add(new CatalogueProblem(line, column, star, "'" + text + "' is not a number", accepted));
+            problems.add(new CatalogueProblem(line, column, star, "'" + Messages.echo(text) + "' is not a number", accepted));
             return null;
         }
         if (!Double.isFinite(v) || v < min || v > max) {
             problems.add(new CatalogueProblem(line, column, star, (v < 0 && min == 0 ? "negative value " : "value ")
-                    + text + " is out of range", accepted));
+                    + Messages.echo(text) + " is out of range", accepted));
             return null;
         }
         return v;

@@ -18,26 +18,31 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.OutputWriteException;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.RunMarker;
 import org.nebulith.report.RunInputs;
 
 /**
  * A whole survey on this machine: validating pass over the catalogue, then the streaming compute
- * pass ({@link SurveyResume} for stars already done, {@link SurveyRunner} for the rest), writing
- * into the output folder:
+ * pass ({@link SurveyResume} for stars already done, {@link SurveyRunner} for the rest). Every file
+ * is built in the run's hidden, resumable folder ({@link RunFolder#openResumable}, checked and
+ * locked before anything is computed) and all appear together when it is renamed into place:
  * <ul>
- * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into the hidden {@code .survey.csv.partial}
- *     (flushed after every star) and renamed at the end; an interrupted or failed run leaves the
- *     partial file for {@code --resume} and nothing under the final name;</li>
+ * <li>{@code survey.csv} ({@link SurveyCsv}), streamed into {@code .survey.csv.partial} there
+ *     (flushed after every star); an interrupted or failed run keeps that folder for
+ *     {@code --resume} and leaves nothing under the final name;</li>
  * <li>{@code failures.csv} ({@link SurveyFailures}): every failed estimate, streamed the same way
- *     into {@code .failures.csv.partial} (a star's failures before its rows) and renamed at the end;</li>
+ *     into {@code .failures.csv.partial} (a star's failures before its rows);</li>
  * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
- *     cautions) and {@code survey-chart.png/.svg} ({@link SurveyChart}), written at the end.</li>
+ *     cautions), {@code survey-chart.png/.svg} ({@link SurveyChart}), {@code report.html} and
+ *     {@code summary.md}, written at the end.</li>
  * </ul>
  * A failed draw does not stop the run; the run stops (a {@link NumericalException}, exit 3, the
  * partial files kept for {@code --resume}) when the failed draws exceed the request's fraction of
  * the run's draws, or at the first failure when it is strict.
- * The files do not depend on the thread count.
+ * The files do not depend on the thread count. Files named in the catalogue's disk and zones
+ * columns are registered as inputs first, so no output can replace them.
  */
 public final class LocalSurvey {
 
@@ -120,17 +125,42 @@ public final class LocalSurvey {
      */
     public static Result run(Request request, EstimatorCache estimators, RunInputs inputs, LongFunction<Progress> progress,
                              Log log) throws IOException {
+        long stars = CatalogueCheck.registerNamedFiles(request.catalogue(), request.shownName(), inputs);
+        checkWork(stars, request.settings().draws());
+        try (RunFolder run = RunFolder.openResumable(request.folder(), request.force(), request.resume(), inputs,
+                RunMarker.now("survey", version()))) {
+            boolean unfinished = run.resumed();
+            Result result;
+            try {
+                result = compute(request, estimators, inputs, progress, log, run);
+            } catch (IOException | RuntimeException | Error e) {
+                if (Files.exists(run.workingFolder().resolve(PARTIAL)) && hasStars(run.workingFolder().resolve(PARTIAL))) {
+                    log.warn("the survey stopped; the stars done so far are kept in " + run.workingFolder()
+                            + "; run again with --resume to continue");
+                } else if (!unfinished) {
+                    run.discardOnClose();
+                }
+                throw e;
+            }
+            return result;
+        }
+    }
+
+    private static Result compute(Request request, EstimatorCache estimators, RunInputs inputs,
+                                  LongFunction<Progress> progress, Log log, RunFolder run) throws IOException {
         java.time.Instant started = java.time.Instant.now();
         CatalogueCheck check = CatalogueCheck.run(request.catalogue(), request.settings(), estimators);
         reportProblems(request, check, log);
-        Path folder = request.folder();
+        Path folder = run.workingFolder();
         Path partial = folder.resolve(PARTIAL);
-        Path survey = folder.resolve(SurveyCsv.FILE);
-        checkOutputs(request, inputs, partial, survey);
-        Files.createDirectories(folder);
-        Path source = !request.resume() ? null : Files.exists(partial) ? partial : Files.exists(survey) ? survey : null;
+        Path earlier = request.folder().resolve(SurveyCsv.FILE);
+        Path source = !request.resume() ? null : Files.exists(partial) ? partial : Files.exists(earlier) ? earlier : null;
         if (request.resume() && source == null) {
-            log.info("--resume: no earlier survey in " + folder + "; starting with the first star");
+            log.info("--resume: no earlier survey in " + request.folder() + "; starting with the first star");
+        }
+        if (source != null) {
+            RunInputs.checkText(source, source == partial ? run.target().resolve(SurveyCsv.FILE) + " (unfinished, in "
+                    + folder + ")" : source.toString());
         }
         Map<Long, String> reasons = new TreeMap<>();
         check.problems().forEach(p -> reasons.putIfAbsent(p.line(), p.text(request.shownName())));
@@ -143,15 +173,16 @@ public final class LocalSurvey {
         boolean finished = false;
         try (Progress bar = progress.apply(check.goodRows() * request.settings().draws());
              CatalogueReader reader = CatalogueReader.open(request.catalogue());
-             BufferedWriter starsOut = Files.newBufferedWriter(starsPartial, StandardCharsets.UTF_8)) {
+             BufferedWriter starsOut = writer(starsPartial, run.target().resolve(StarsTable.FILE))) {
             StarsTable stars = new StarsTable(starsOut, check.bad(), reasons, request.settings().solar());
             Iterator<StarRow> rows = goodRows(reader, check.bad());
-            OutputSink sink = new OutputSink(Files.newBufferedWriter(writing, StandardCharsets.UTF_8),
-                    Files.newBufferedWriter(failuresWriting, StandardCharsets.UTF_8), stars, counter, request);
+            OutputSink sink = new OutputSink(writer(writing, run.target().resolve(SurveyCsv.FILE)),
+                    writer(failuresWriting, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
             try {
                 sink.header();
                 if (source != null) {
-                    Path oldFailures = source.equals(partial) ? failuresPartial : folder.resolve(SurveyFailures.FILE);
+                    Path oldFailures = source.equals(partial) ? failuresPartial
+                            : request.folder().resolve(SurveyFailures.FILE);
                     try (ExistingSurvey existing = ExistingSurvey.open(source);
                          ExistingFailures old = ExistingFailures.open(oldFailures)) {
                         counter.resumed = SurveyResume.copyDone(existing, old, rows, request.settings(), estimators,
@@ -160,9 +191,8 @@ public final class LocalSurvey {
                     sink.close();
                     Files.move(writing, partial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
                     Files.move(failuresWriting, failuresPartial, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-                    sink = new OutputSink(Files.newBufferedWriter(partial, StandardCharsets.UTF_8,
-                            StandardOpenOption.APPEND), Files.newBufferedWriter(failuresPartial, StandardCharsets.UTF_8,
-                            StandardOpenOption.APPEND), stars, counter, request);
+                    sink = new OutputSink(appender(partial, run.target().resolve(SurveyCsv.FILE)),
+                            appender(failuresPartial, run.target().resolve(SurveyFailures.FILE)), stars, counter, request);
                 }
                 SurveyRunner.Summary s = SurveyRunner.run(rows, request.settings(), estimators, request.threads(),
                         bar, sink);
@@ -177,24 +207,77 @@ public final class LocalSurvey {
                 Files.deleteIfExists(starsPartial);
                 Files.deleteIfExists(folder.resolve(NEXT));
                 Files.deleteIfExists(folder.resolve(FAILURES_NEXT));
-                if (Files.exists(partial)) {
-                    log.warn("the survey stopped; the stars done so far are kept in " + partial + " (failures in "
-                            + failuresPartial.getFileName() + "); run again with --resume to continue");
-                }
             }
         }
         long skipped = check.bad().size();
         String notes = SurveyNotes.text(request, counter.stars, skipped, counter.failed, counter.failedDraws,
                 counter.runDraws);
-        AtomicOutput.writeText(folder.resolve(NOTES), notes, true, inputs);
-        Files.move(starsPartial, folder.resolve(StarsTable.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        byte[] png = SurveyChart.write(partial, folder, inputs);
-        SurveyReport.write(new SurveyReport.Run(folder, request, started, notes, png, folder.resolve(StarsTable.FILE),
+        run.writeText(NOTES, notes);
+        rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
+        byte[] png = SurveyChart.write(partial, run);
+        SurveyReport.write(new SurveyReport.Run(run, request, started, notes, png, run.file(StarsTable.FILE),
                 partial, inputs));
-        Files.move(failuresPartial, folder.resolve(SurveyFailures.FILE), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        Files.move(partial, survey, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));
+        rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
+        Path done = run.commit();
         return new Result(counter.stars, counter.resumed, skipped, counter.failed, counter.draws, counter.failedDraws,
-                counter.runDraws, survey);
+                counter.runDraws, done.resolve(SurveyCsv.FILE));
+    }
+
+    /** Most draws per star (memory: about 500 bytes a draw per star in flight). */
+    public static final int MAX_DRAWS = 100_000;
+
+    /** Most draws of one survey, draws per star times stars (weeks of work beyond). */
+    public static final long MAX_TOTAL_DRAWS = 100_000_000L;
+
+    private static void checkWork(long stars, int draws) {
+        if (draws < 1 || draws > MAX_DRAWS) {
+            throw InputException.atOption("--draws", draws, "outside 1 to " + MAX_DRAWS + " draws per star",
+                    "an integer from 1 to " + MAX_DRAWS);
+        }
+        if (stars * (long) draws > MAX_TOTAL_DRAWS) {
+            throw InputException.atOption("--draws", draws, stars + " stars x " + draws + " draws = " + stars * draws
+                    + " draws, more than " + MAX_TOTAL_DRAWS, "at most " + Math.max(1, MAX_TOTAL_DRAWS / stars)
+                    + " draws per star for this catalogue, or a catalogue split into parts");
+        }
+    }
+
+    private static void rename(Path from, Path to, Path shown) {
+        try {
+            Files.move(from, to, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        } catch (IOException e) {
+            throw new OutputWriteException(shown, e);
+        }
+    }
+
+    private static BufferedWriter writer(Path file, Path shown) throws IOException {
+        return new BufferedWriter(RunFolder.named(Files.newBufferedWriter(file, StandardCharsets.UTF_8), shown));
+    }
+
+    private static BufferedWriter appender(Path file, Path shown) throws IOException {
+        return new BufferedWriter(RunFolder.named(Files.newBufferedWriter(file, StandardCharsets.UTF_8,
+                StandardOpenOption.APPEND), shown));
+    }
+
+    private static boolean hasStars(Path partial) {
+        try (var lines = Files.lines(partial, StandardCharsets.UTF_8)) {
+            return lines.limit(2).count() > 1;
+        } catch (IOException | java.io.UncheckedIOException e) {
+            return true;
+        }
+    }
+
+    private static String version() {
+        String v = LocalSurvey.class.getPackage().getImplementationVersion();
+        return v == null || v.isBlank() ? "dev" : v;
+    }
+
+    /**
+     * @param folder a survey's output folder
+     * @return where an interrupted run keeps its partial survey table (for --resume)
+     */
+    public static Path partialTable(Path folder) {
+        return RunFolder.unfinished(folder).resolve(PARTIAL);
     }
 
     private static void reportProblems(Request request, CatalogueCheck check, Log log) {
@@ -220,23 +303,6 @@ public final class LocalSurvey {
                     : "a header of star, X_H, X_H_err columns (header problems cannot be skipped)");
         }
         log.warn("--skip-bad: skipping " + check.bad().size() + " bad row(s); they are listed in " + StarsTable.FILE);
-    }
-
-    private static void checkOutputs(Request request, RunInputs inputs, Path partial, Path survey) {
-        for (String name : List.of(SurveyCsv.FILE, StarsTable.FILE, NOTES, PARTIAL, NEXT, SurveyFailures.FILE,
-                FAILURES_PARTIAL, FAILURES_NEXT)) {
-            inputs.checkNotInput(request.folder().resolve(name));
-        }
-        if (request.resume() || request.force()) {
-            return;
-        }
-        if (Files.exists(survey)) {
-            throw new InputException(Messages.OUTPUT_EXISTS, null, survey);
-        }
-        if (Files.exists(partial)) {
-            throw InputException.inFile(partial, "an interrupted survey left its partial results here",
-                    "--resume to continue it, or --force to start again");
-        }
     }
 
     private static Iterator<StarRow> goodRows(CatalogueReader reader, Map<Long, String> bad) {

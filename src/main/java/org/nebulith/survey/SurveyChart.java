@@ -12,13 +12,12 @@ import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunInputs;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.report.chart.Drawing;
-import org.nebulith.report.chart.SvgWriter;
+import org.nebulith.report.RunFolder;
+import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.chart.SurveyScatter;
@@ -37,7 +36,7 @@ final class SurveyChart {
     }
 
     /** @return the PNG bytes of the chart, or null if there is nothing to draw */
-    static byte[] write(Path survey, Path folder, RunInputs inputs) throws IOException {
+    static byte[] write(Path survey, RunFolder run) throws IOException {
         List<SurveyScatter.Point> stars = new ArrayList<>();
         List<SurveyScatter.Point> planets = new ArrayList<>();
         Map<String, double[]> pending = new HashMap<>();
@@ -68,12 +67,7 @@ final class SurveyChart {
             return null;
         }
         Drawing chart = new SurveyScatter(stars, planets, references()).chart(ChartSize.COLUMN_TALL);
-        byte[] png = ChartRenderer.png(chart);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".png"), out -> out.write(png), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".svg"),
-                out -> out.write(SvgWriter.write(chart).getBytes(StandardCharsets.UTF_8)), true, inputs);
-        AtomicOutput.writeFile(folder.resolve(BASE + ".pdf"), out -> ChartRenderer.pdf(chart, out), true, inputs);
-        return png;
+        return ChartRenderer.write(chart, run, BASE, java.util.EnumSet.allOf(ChartFormat.class)).png();
     }
 
     /** @return the Sun (photosphere, Asplund et al. 2009) and bulk Earth (McDonough 2003) */

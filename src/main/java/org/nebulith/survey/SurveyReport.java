@@ -17,7 +17,7 @@ import org.apache.commons.csv.CSVRecord;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.SolarReference;
 import org.nebulith.equilibrium.SystemSpec;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.report.RunFolder;
 import org.nebulith.report.RunInputs;
 import org.nebulith.report.SourceList;
 import org.nebulith.report.Table;
@@ -40,7 +40,7 @@ final class SurveyReport {
     static final List<String> PLANET_QUANTITIES = List.of("Mg_Si_molar", "Fe_Si_molar", "core_mass_fraction");
 
     /**
-     * @param folder   the survey folder
+     * @param folder   the survey's open run folder
      * @param request  the survey request (settings)
      * @param started  when the survey started
      * @param notes    the run notes text
@@ -49,7 +49,7 @@ final class SurveyReport {
      * @param surveyCsv the survey table (median, p16, p84 per star, zone and quantity)
      * @param inputs   the run's inputs
      */
-    record Run(Path folder, LocalSurvey.Request request, Instant started, String notes, byte[] png, Path starsCsv,
+    record Run(RunFolder folder, LocalSurvey.Request request, Instant started, String notes, byte[] png, Path starsCsv,
                Path surveyCsv, RunInputs inputs) {
     }
 
@@ -90,9 +90,8 @@ final class SurveyReport {
             report.outputFile(f);
         }
         report.finish(Instant.now());
-        AtomicOutput.writeText(run.folder().resolve("report.html"), HtmlReportWriter.write(report), true, run.inputs());
-        AtomicOutput.writeText(run.folder().resolve("summary.md"), MarkdownSummaryWriter.write(report), true,
-                run.inputs());
+        run.folder().writeText("report.html", HtmlReportWriter.write(report));
+        run.folder().writeText("summary.md", MarkdownSummaryWriter.write(report));
     }
 
     private static void settings(Report report, LocalSurvey.Request q) {

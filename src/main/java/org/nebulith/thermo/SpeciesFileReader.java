@@ -46,7 +46,7 @@ final class SpeciesFileReader {
     }
 
     private void parse(String text) {
-        Body body = stripComments(text);
+        Body body = stripComments(org.nebulith.format.TextInput.withoutBom(text));
         List<Row> rows = new ArrayList<>();
         CSVFormat fmt = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get();
         try (CSVParser p = CSVParser.parse(new StringReader(body.text), fmt)) {

@@ -29,7 +29,7 @@ public final class SpeciesListReader {
             known.add(s.id());
         }
         Set<String> ids = new LinkedHashSet<>();
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             int lineNo = 0;
             for (String line = br.readLine(); line != null; line = br.readLine()) {
                 lineNo++;
@@ -39,7 +39,7 @@ public final class SpeciesListReader {
                 }
                 if (!known.contains(id)) {
                     throw new DataFormatException(name, lineNo, "species id",
-                            "'" + id + "' is not a " + (gas ? "gas" : "condensed") + " species of data set "
+                            "'" + org.nebulith.errors.Messages.echo(id) + "' is not a " + (gas ? "gas" : "condensed") + " species of data set "
                                     + dataSet.name(), "ids as spelled in the data set, one per line, # for comments");
                 }
                 ids.add(id);

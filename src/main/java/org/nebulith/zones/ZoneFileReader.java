@@ -41,7 +41,7 @@ public final class ZoneFileReader {
         List<FeedingZone> zones = new ArrayList<>();
         Set<String> names = new HashSet<>();
         int columns = -1;
-        try (BufferedReader br = new BufferedReader(in)) {
+        try (BufferedReader br = new BufferedReader(org.nebulith.format.TextInput.withoutBom(in))) {
             int lineNo = 0;
             for (String raw = br.readLine(); raw != null; raw = br.readLine()) {
                 lineNo++;
@@ -72,7 +72,7 @@ public final class ZoneFileReader {
         if (line.equals(HEADER + "," + PLANET_MASS)) {
             return 5;
         }
-        throw new DiskFormatException(name, lineNo, "header", "found '" + line + "'",
+        throw new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'",
                 HEADER + " optionally followed by ," + PLANET_MASS);
     }
 
@@ -86,7 +86,7 @@ public final class ZoneFileReader {
         }
         KernelShape shape = KernelShape.fromToken(f[1]);
         if (shape == null) {
-            throw new DiskFormatException(name, lineNo, "shape", "unknown shape '" + f[1].strip() + "'", "tophat, gaussian");
+            throw new DiskFormatException(name, lineNo, "shape", "unknown shape '" + org.nebulith.errors.Messages.echo(f[1].strip()) + "'", "tophat, gaussian");
         }
         double rc = positive(f[2], "r_center_AU", name, lineNo);
         double hw = positive(f[3], "half_width_AU", name, lineNo);
@@ -104,7 +104,7 @@ public final class ZoneFileReader {
         try {
             v = Double.parseDouble(s.strip());
         } catch (NumberFormatException e) {
-            throw new DiskFormatException(name, lineNo, field, "'" + s.strip() + "' is not a number", "a finite number > 0");
+            throw new DiskFormatException(name, lineNo, field, "'" + org.nebulith.errors.Messages.echo(s.strip()) + "' is not a number", "a finite number > 0");
         }
         if (!(v > 0) || Double.isInfinite(v)) {
             throw new DiskFormatException(name, lineNo, field, "value " + s.strip(), "a finite number > 0");
@@ -126,5 +126,32 @@ public final class ZoneFileReader {
                     + " AU (" + z.shape().token() + ")", "zones inside the disk's range " + disk.rMinAU() + "-"
                     + disk.rMaxAU() + " AU");
         }
+    }
+
+    /**
+     * Zones whose kernels overlap draw on the same solids: each planet then counts them in full, so
+     * the zones' masses are not independent. This is allowed (a modelling choice) but worth a notice.
+     *
+     * @param zones zones in order of increasing radius
+     * @return one line per overlapping neighbour pair, empty if none overlap
+     */
+    public static List<String> overlaps(List<FeedingZone> zones) {
+        List<String> lines = new java.util.ArrayList<>();
+        for (int i = 1; i < zones.size(); i++) {
+            FeedingZone a = zones.get(i - 1);
+            FeedingZone b = zones.get(i);
+            if (b.rInnerAU() < a.rOuterAU()) {
+                lines.add("feeding zones '" + a.name() + "' (" + au(a.rInnerAU()) + "-"
+                        + au(a.rOuterAU()) + " AU) and '" + b.name() + "' ("
+                        + au(b.rInnerAU()) + "-"
+                        + au(b.rOuterAU()) + " AU) overlap: the same solids feed both"
+                        + " planets");
+            }
+        }
+        return lines;
+    }
+
+    private static String au(double r) {
+        return String.format(java.util.Locale.ROOT, "%.3g", r);
     }
 }

@@ -177,6 +177,6 @@ class SurveyCommandTest {
         assertEquals(3, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
                 "--out", dir.resolve("limit").toString()));
         assertTrue(err().contains("4 of 12 draws failed, more than --max-failed-fraction 0.01"), err());
-        assertTrue(Files.exists(dir.resolve("limit").resolve(".survey.csv.partial")));
+        assertTrue(Files.exists(org.nebulith.survey.LocalSurvey.partialTable(dir.resolve("limit"))));
     }
 }

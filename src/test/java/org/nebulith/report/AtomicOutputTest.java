@@ -46,20 +46,28 @@ class AtomicOutputTest {
 
     @Test
     void aStoppedJvmLeavesNothing() throws Exception {
-        Path target = dir.resolve("stopped");
+        stopChild(dir.resolve("stopped"), "folder", 2);
+    }
+
+    @Test
+    void aStoppedJvmReleasesTheLockOfAFileItReserved() throws Exception {
+        stopChild(dir.resolve("state.csv"), "file", 1);
+    }
+
+    private void stopChild(final Path target, final String kind, final int whileRunning) throws Exception {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         Process child = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"),
-                InterruptedRunProbe.class.getName(), target.toString()).redirectErrorStream(true).start();
+                InterruptedRunProbe.class.getName(), target.toString(), kind).redirectErrorStream(true).start();
         try (BufferedReader out = new BufferedReader(new InputStreamReader(child.getInputStream(),
                 StandardCharsets.UTF_8))) {
             assertEquals("writing", out.readLine());
-            assertEquals(1, listing().size(), "the temporary folder exists while the run works");
+            assertEquals(whileRunning, listing().size(), "the temporary folder and the lock exist while the run works");
             child.destroy(); // SIGTERM, as from Ctrl-C or a job scheduler: shutdown hooks run
             assertTrue(child.waitFor(20, TimeUnit.SECONDS));
         } finally {
             child.destroyForcibly();
         }
-        assertEquals(List.of(), listing(), "no half-written run folder and no temporary folder");
+        assertEquals(List.of(), listing(), "no half-written run folder, no temporary folder, no lock");
     }
 
     @Test
@@ -100,8 +108,11 @@ class AtomicOutputTest {
         Path file = dir.resolve("point.csv");
         AtomicOutput.writeText(file, "species,phase,moles\n", false, new RunInputs());
         assertThrows(InputException.class, () -> AtomicOutput.writeText(file, "other", false, new RunInputs()));
-        AtomicOutput.writeText(file, "v2\n", true, new RunInputs());
-        assertEquals("v2\n", Files.readString(file));
+        InputException foreign = assertThrows(InputException.class,
+                () -> AtomicOutput.writeText(file, "v2\n", true, new RunInputs()));
+        assertTrue(foreign.getMessage().contains("not an earlier output"), foreign.getMessage());
+        AtomicOutput.writeText(file, "species,phase,moles\nH2,gas,1\n", true, new RunInputs());
+        assertEquals("species,phase,moles\nH2,gas,1\n", Files.readString(file));
         assertEquals(List.of(file), listing());
         assertThrows(InputException.class, () -> {
             try (RunFolder run = AtomicOutput.openRunFolder(dir.resolve("r"), false, new RunInputs())) {

@@ -83,15 +83,17 @@ class LocalSurveyTest {
         // an interrupted run: whole stars, then a star cut in the middle of a line
         int cut = nthLineEnd(text, 1 + 7 * 8 + 3) + 17;
         Path broken = dir.resolve("broken");
-        Files.createDirectories(broken);
-        Files.writeString(broken.resolve(LocalSurvey.PARTIAL), text.substring(0, cut));
-        Files.writeString(broken.resolve(LocalSurvey.FAILURES_PARTIAL), SurveyFailures.HEADER);
+        Files.createDirectories(LocalSurvey.partialTable(broken).getParent());
+        Files.writeString(LocalSurvey.partialTable(broken), text.substring(0, cut));
+        Files.writeString(LocalSurvey.partialTable(broken).resolveSibling(LocalSurvey.FAILURES_PARTIAL),
+                SurveyFailures.HEADER);
         assertThrows(InputException.class, () -> run(broken, 2));
         LocalSurvey.Result resumed = run(SurveyTestData.DEMO, broken, 2, false, true, false, SETTINGS,
                 s -> new FullyCondensedEstimator());
         assertEquals(8, resumed.resumed());
         assertArrayEquals(expected, Files.readAllBytes(broken.resolve(SurveyCsv.FILE)));
-        assertFalse(Files.exists(broken.resolve(LocalSurvey.PARTIAL)));
+        assertFalse(Files.exists(LocalSurvey.partialTable(broken)));
+        assertFalse(Files.exists(LocalSurvey.partialTable(broken).getParent()), "the unfinished folder became the run");
         for (String f : List.of(StarsTable.FILE, LocalSurvey.NOTES)) {
             assertArrayEquals(Files.readAllBytes(full.resolve(f)), Files.readAllBytes(broken.resolve(f)), f);
         }
@@ -246,7 +248,8 @@ class LocalSurveyTest {
         NumericalException e = assertThrows(NumericalException.class, () -> runFailing(catalogue, out, 2, false,
                 LocalSurvey.DEFAULT_MAX_FAILED_FRACTION, false));
         assertTrue(e.getMessage().contains("draws failed, more than --max-failed-fraction 0.01"), e.getMessage());
-        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)) && Files.exists(out.resolve(LocalSurvey.FAILURES_PARTIAL)));
+        Path partial = LocalSurvey.partialTable(out);
+        assertTrue(Files.exists(partial) && Files.exists(partial.resolveSibling(LocalSurvey.FAILURES_PARTIAL)));
         assertTrue(warnings.stream().anyMatch(w -> w.contains("--resume")), warnings.toString());
         assertFalse(Files.exists(out.resolve(SurveyCsv.FILE)));
         runFailing(catalogue, out, 1, true, 0.2, false);
@@ -262,7 +265,7 @@ class LocalSurveyTest {
                 2, false, 1.0, true));
         assertTrue(e.getMessage().startsWith("--strict: stopped at the first failed estimate: star '"), e.getMessage());
         assertTrue(e.getMessage().contains("draw ") && e.getMessage().contains("T = 300 K, P = "), e.getMessage());
-        assertTrue(Files.exists(out.resolve(LocalSurvey.PARTIAL)), "partial results kept for --resume");
+        assertTrue(Files.exists(LocalSurvey.partialTable(out)), "partial results kept for --resume");
     }
 
     @Test

@@ -70,11 +70,27 @@ public final class MarkdownSummaryWriter {
         for (int r = 0; r < rows.size(); r++) {
             m.append('|');
             for (int c = 0; c < table.columns().size(); c++) {
-                m.append(' ').append(cell(CellText.forPeople(rows.get(r).get(c), table.name(), table.columns().get(c), r + 1)))
+                m.append(' ').append(dataCell(CellText.forPeople(rows.get(r).get(c), table.name(), table.columns().get(c),
+                        r + 1)))
                         .append(" |");
             }
             m.append('\n');
         }
+    }
+
+    /**
+     * @param text a value from the run (a zone or star name, for instance)
+     * @return the text with every Markdown special character escaped, so it shows as written
+     */
+    static String dataCell(final String text) {
+        StringBuilder out = new StringBuilder(text.length() + 8);
+        for (char ch : text.replace('\n', ' ').replace('\r', ' ').toCharArray()) {
+            if ("\\`*_[]<>|~&".indexOf(ch) >= 0) {
+                out.append('\\');
+            }
+            out.append(ch);
+        }
+        return out.toString();
     }
 
     private static String cell(final String text) {

@@ -86,6 +86,22 @@ public final class PlanetReportWriter {
     }
 
     /**
+     * @param planets the zone planets, inner first
+     * @return the standing {@link #CAUTIONS}, then one per pair of overlapping feeding zones
+     */
+    public static List<String> cautions(List<ZonePlanet> planets) {
+        List<String> all = new java.util.ArrayList<>(CAUTIONS);
+        List<org.nebulith.zones.FeedingZone> zones = new java.util.ArrayList<>();
+        planets.forEach(p -> zones.add(p.inventory().zone()));
+        org.nebulith.zones.ZoneFileReader.overlaps(zones).forEach(line -> all.add(capitalised(line) + "."));
+        return all;
+    }
+
+    private static String capitalised(String line) {
+        return Character.toUpperCase(line.charAt(0)) + line.substring(1);
+    }
+
+    /**
      * @param run  the open run folder (committed by the caller)
      * @param data the run's data
      * @return the report (for printing a summary)
@@ -150,7 +166,7 @@ public final class PlanetReportWriter {
             integration.paragraph(integrationNote(zp));
         }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
-        CAUTIONS.forEach(report::caution);
+        cautions(data.planets()).forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
