@@ -130,12 +130,12 @@ public final class PlanetCommand extends RunCommand {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
         }
+        Map<Element, Double> errors = errors();
         ElementAbundances gas = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
-        Map<Element, Double> errors = errors();
         String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
                 .format(context.started());
         try (RunFolder run = context.openRunFolder(runName)) {
