@@ -18,6 +18,7 @@ import org.nebulith.equilibrium.WarmStart;
 import org.nebulith.errors.InputException;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -33,13 +34,14 @@ import picocli.CommandLine.Option;
 @Command(name = "bench",
         description = {
             "Benchmark of the equilibrium engine and of the condensation sequence.",
-            "Prints the median microseconds and mean Newton iterations per warm-started state of",
-            "a 1 K-step sequence, and the median wall time of the full sequence, with their targets.",
+            "Prints the median microseconds and mean Newton iterations per warm-started",
+            "state of a 1 K-step sequence, and the median wall time of the full sequence,",
+            "with their targets. Writes no files. Takes a minute or two.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
             "  nebulith bench",
-            "  nebulith bench --warmup 1 --repeats 3 --T-min-K 1000     (quicker, less steady)",
+            "  nebulith bench --warmup 1 --repeats 3 --T-min-K 1000   (quicker, less steady)",
         })
 public final class BenchCommand extends RunCommand {
     /** Target of the engine benchmark [us per state] (issue: one core of this machine). */
@@ -48,6 +50,9 @@ public final class BenchCommand extends RunCommand {
     static final double TARGET_ITERATIONS = 3;
     /** Target of the sequence benchmark [s]. */
     static final double TARGET_SEQUENCE_S = 0.5;
+
+    @Mixin
+    private PresetOption preset;
 
     @Option(names = "--P-bar", paramLabel = "P", defaultValue = "1e-4", description = "Pressure [bar]. Default: ${DEFAULT-VALUE}.")
     private double pressureBar;

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 
+import org.nebulith.composition.AbundanceFileReader;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.AbundanceSet;
 import org.nebulith.composition.CarbonToOxygen;
@@ -35,9 +36,9 @@ import picocli.CommandLine.Option;
 public final class ChemistryOptions {
 
     @Option(names = "--composition", paramLabel = "NAME|FILE",
-            description = "Gas composition: a preset (protosolar-lodders2003, photosphere-asplund2009, "
-                    + "ci-chondrite, star-tessaly) or an abundance file. Default: protosolar-lodders2003 "
-                    + "(planet: the invented demo star star-tessaly).")
+            description = "Gas composition: a preset name (see 'nebulith presets': protosolar-lodders2003, "
+                    + "photosphere-asplund2009, ci-chondrite, star-tessaly) or an abundance file. Default: "
+                    + "protosolar-lodders2003 (planet: the invented demo star star-tessaly).")
     private String composition;
 
     private String defaultComposition = AbundancePresets.PROTOSOLAR_LODDERS2003;
@@ -52,7 +53,7 @@ public final class ChemistryOptions {
     }
 
     @Option(names = "--elements", paramLabel = "X=n,...",
-            description = "Inline composition in moles, e.g. H=1,He=0.085,O=4.9e-4 (replaces --composition).")
+            description = "Inline composition in moles, such as H=1,O=5e-4 (replaces --composition).")
     private String elements;
 
     @Option(names = "--dust-enrichment", paramLabel = "F", defaultValue = "1",
@@ -119,7 +120,9 @@ public final class ChemistryOptions {
                             : "enrichment below 1 would remove dust", "a factor from 1 to " + (long) MAX_DUST_ENRICHMENT);
         }
         if (dustEnrichment > 1) {
-            base = DustEnrichment.enrich(base, ciReference().abundances(), dustEnrichment);
+            String ci = ciReference().preset();
+            base = DustEnrichment.enrich(base, namedComposition(context, ci, "dust composition")
+                    .map(AbundanceSet::abundances).orElseGet(() -> ciReference().abundances()), dustEnrichment);
         }
         if (carbonToOxygen != null) {
             if (!(carbonToOxygen > 0) || Double.isInfinite(carbonToOxygen)) {
@@ -138,8 +141,12 @@ public final class ChemistryOptions {
                 return AbundancePresets.resolve(elements);
             }
             String arg = compositionArg();
+            Optional<AbundanceSet> named = namedComposition(context, arg, "composition");
+            if (named.isPresent()) {
+                return named.get();
+            }
             Path p = Path.of(arg);
-            if (!AbundancePresets.NAMES.contains(arg) && Files.exists(p)) {
+            if (Files.exists(p)) {
                 context.input(p, "composition");
             }
             return AbundancePresets.resolve(arg);
@@ -157,6 +164,25 @@ public final class ChemistryOptions {
         AbundanceSet set = baseComposition(context);
         String text = String.join(" ", set.provenance()).strip();
         return set.name() + (text.isEmpty() ? "" : ": " + text);
+    }
+
+    /**
+     * @param context the run (the preset is registered with its checksum)
+     * @param name    a preset name
+     * @param role    what it is for
+     * @return the composition of the working folder's presets/NAME.csv, else of the built-in copy
+     */
+    private static Optional<AbundanceSet> namedComposition(RunContext context, String name, String role) {
+        Optional<PresetCatalogue.Entry> e = PresetCatalogue.here().find(PresetCatalogue.Kind.COMPOSITION, name);
+        if (e.isEmpty()) {
+            return Optional.empty();
+        }
+        context.namedInput(e.get(), role + " preset");
+        try {
+            return Optional.of(AbundanceFileReader.read(new java.io.StringReader(e.get().text()), e.get().shown()));
+        } catch (IOException ex) {
+            throw new java.io.UncheckedIOException(ex);
+        }
     }
 
     /** @return a one-line description of the composition options, for reports */

@@ -24,6 +24,7 @@ import org.nebulith.report.html.Report;
 import org.nebulith.report.interior.InteriorReportWriter;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -32,19 +33,31 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "interior",
         description = {
-            "Interior structure of a rocky planet: radius, core radius, central and core-mantle",
-            "boundary pressures, and the profile of mass, pressure, density and gravity.",
-            "Cold structure with published equations of state (iron core, olivine-pyroxene,",
-            "bridgmanite and post-bridgmanite mantle, optional ice VII layer).",
-            "Writes interior-structure.csv, interior-profile.csv, interior-profile.png/.svg/.pdf, report.html.",
+            "Interior structure of a rocky planet: radius, core radius, central and",
+            "core-mantle boundary pressures, and the profile of mass, pressure, density and",
+            "gravity. Cold structure with published equations of state (iron core,",
+            "olivine-pyroxene, bridgmanite and post-bridgmanite mantle, optional ice VII).",
+            "Writes into --out (default reports/interior-<yyyyMMdd-HHmmss>/):",
+            "  interior-structure.csv, interior-profile.csv, interior-profile chart",
+            "  (.png/.svg/.pdf), report.html.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
             "  nebulith interior --mass-Mearth 1 --core-mass-fraction 0.325",
-            "  nebulith interior --mass-Mearth 4 --core-mass-fraction 0.3 --water-mass-fraction 0.2",
-            "  nebulith interior --mass-Mearth 1 --bulk reports/planet-X/bulk-composition.csv --zone inner",
+            "  nebulith interior --mass-Mearth 4 --core-mass-fraction 0.3 \\",
+            "      --water-mass-fraction 0.2",
+            "  nebulith interior --mass-Mearth 1 \\",
+            "      --bulk reports/planet-X/bulk-composition.csv --zone inner",
         })
 public final class InteriorCommand extends RunCommand {
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     @Option(names = "--mass-Mearth", required = true, paramLabel = "M", description = "Planet mass [M_earth].")
     private double mass;
@@ -83,7 +96,7 @@ public final class InteriorCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         InteriorModel model = model(context);
-        try (RunFolder run = context.openRunFolder("interior-" + RunNames.number(mass) + "Mearth")) {
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             Structure s = solve(model);
             InteriorReportWriter.writeInterior(run, header(context, "nebulith interior"), s);
             Path done = run.commit();

@@ -52,6 +52,10 @@ public final class Main {
         PrintWriter errWriter = new PrintWriter(err, true, StandardCharsets.UTF_8);
         boolean verbose = Arrays.asList(args).contains("--verbose") || Arrays.asList(args).contains("-v");
         PresetDefaults defaults;
+        java.util.Optional<org.nebulith.errors.InputException> retired = RetiredOptions.check(List.of(args));
+        if (retired.isPresent()) {
+            return FailureReport.report(retired.get(), errWriter, verbose);
+        }
         try {
             defaults = PresetDefaults.fromArguments(List.of(args), PresetLocator.defaultFolders());
         } catch (RuntimeException e) {

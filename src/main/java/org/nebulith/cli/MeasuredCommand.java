@@ -39,6 +39,7 @@ import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.KernelShape;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -46,20 +47,33 @@ import picocli.CommandLine.Option;
  */
 @Command(name = "measured",
         description = {
-            "Host-star test of measured planets: the core mass fraction from each planet's mass",
-            "and radius (interior model, Monte Carlo over the errors) against the one predicted",
-            "from its star's abundances (the survey's Monte Carlo), in standard deviations.",
-            "Planets CSV: " + PlanetsFileReader.HEADER + "[,a_AU]; stars: a survey catalogue.",
-            "Without --disk/--zones the star's planet is that of a zone where every rock-forming",
-            "element condensed; with --disk, a_AU places a zone (a +- 0.1 a) in that disk.",
-            "Writes planets.csv, mass-radius.png/.svg/.pdf, core-fraction-comparison.png/.svg/.pdf, report.html.",
+            "Host-star test of measured planets: the core mass fraction from each planet's",
+            "mass and radius (interior model, Monte Carlo over the errors) against the one",
+            "predicted from its star's abundances (the survey's Monte Carlo), in standard",
+            "deviations. Planets CSV with the header",
+            PlanetsFileReader.HEADER + "[,a_AU];",
+            "stars: a survey catalogue. Without --disk/--zones the star's planet is that of",
+            "a zone where every rock-forming element condensed; with --disk, a_AU places a",
+            "zone (a +- 0.1 a) in that disk.",
+            "Writes into --out (default reports/measured-<yyyyMMdd-HHmmss>/): planets.csv,",
+            "  mass-radius and core-fraction-comparison charts (.png/.svg/.pdf), report.html.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
-            "  nebulith measured --planets presets/demo-planets.csv --catalogue presets/demo-catalogue.csv",
-            "  nebulith measured --planets P.csv --catalogue C.csv --disk steady-viscous-default --draws 100",
+            "  nebulith measured --planets presets/demo-planets.csv \\",
+            "      --catalogue presets/demo-catalogue.csv",
+            "  nebulith measured --planets P.csv --catalogue C.csv \\",
+            "      --disk steady-viscous-default --draws 100",
         })
 public final class MeasuredCommand extends RunCommand {
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
     private static final double ZONE_HALF_WIDTH = 0.1;
 
     @Option(names = "--planets", required = true, paramLabel = "FILE", description = "Planets file (CSV; see above).")
@@ -120,8 +134,7 @@ public final class MeasuredCommand extends RunCommand {
         for (MeasuredPlanet p : planets) {
             check(p, stars, test);
         }
-        String base = planetsFile.getFileName().toString().replaceFirst("\\.csv$", "");
-        try (RunFolder run = context.openRunFolder("measured-" + (base.matches("[A-Za-z0-9._-]+") ? base : "planets"))) {
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             List<PlanetVerdict> verdicts = verdicts(context, planets, stars, test, settings);
             double[] masses = curveMasses(planets);
             List<Curve> curves = curves(masses, core);

@@ -1,17 +1,15 @@
 package org.nebulith.cli;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.Reader;
+import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.ZoneOffset;
-import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.condensation.ElementCondensation;
@@ -62,10 +60,15 @@ import picocli.CommandLine.Option;
             "Integrates what condenses across each zone; core/mantle split; key ratios beside",
             "the host star, bulk Earth and CI chondrite. Without arguments it runs the",
             "built-in demo scenario (the invented star Tessaly, its disk and three planets).",
+            "Writes into --out (default reports/planet-<yyyyMMdd-HHmmss>/):",
+            "  bulk-composition.csv, comparison.csv, zone-phases.csv, radial-profile.csv,",
+            "  radial-map and planet-comparison charts (.png/.svg/.pdf), report.html and",
+            "  summary.md; prints one line per planet.",
         },
         footerHeading = "%nExamples:%n",
         footer = {
-            "  nebulith planet                  demo scenario, report in reports/planet-<time>/",
+            "  nebulith planet              demo scenario (about a minute)",
+            "  nebulith planet --preset tessaly-planets",
             "  nebulith planet --composition protosolar-lodders2003 --disk mmsn-hayashi1981 \\",
             "      --zones feeding-zones/demo-system.csv --out reports/mmsn-demo",
             "  nebulith planet --sulfide-in-mantle --core-Si-wt-pct 5 --variant B88",
@@ -73,6 +76,16 @@ import picocli.CommandLine.Option;
 public final class PlanetCommand extends RunCommand {
     /** The demo zones, shipped on the classpath. */
     static final String DEMO_ZONES = "feeding-zones/demo-system.csv";
+    /** Their name as a named input (working folder's feeding-zones/ first, then built-in). */
+    static final String DEMO_ZONES_NAME = "demo-system";
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     /** Most radii of the radial profile (each is an equilibrium solve). */
     static final int MAX_PROFILE_POINTS = 10_000;
@@ -82,13 +95,14 @@ public final class PlanetCommand extends RunCommand {
 
     @Option(names = "--disk", paramLabel = "NAME|FILE", defaultValue = DiskPresets.STEADY_VISCOUS_DEFAULT,
             description = "Disk model: a preset (mmsn-hayashi1981, hot-early-disk, steady-viscous-default) or a "
-                    + "disk file (parameter,value or r_AU,T_K,P_bar,sigma_gas_g_cm2). Default: ${DEFAULT-VALUE}.")
+                    + "disk file with the header parameter,value or the header "
+                    + "r_AU,T_K,P_bar,sigma_gas_g_cm2 (table). Default: ${DEFAULT-VALUE}.")
     private String disk;
 
     @Option(names = "--zones", paramLabel = "FILE",
-            description = "Feeding zones (zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]). "
-                    + "Default: the demo system " + DEMO_ZONES + ".")
-    private Path zones;
+            description = "Feeding zones: a name in feeding-zones/ or a file with the header "
+                    + "zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]. Default: " + DEMO_ZONES_NAME + ".")
+    private String zones;
 
     @Option(names = "--abundance-errors", paramLabel = "X=dex,...",
             description = "1-sigma errors of the host star's [X/H] [dex], e.g. Fe=0.05,Mg=0.04,Si=0.04: the "
@@ -136,9 +150,7 @@ public final class PlanetCommand extends RunCommand {
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
-        String runName = "planet-" + DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC)
-                .format(context.started());
-        try (RunFolder run = context.openRunFolder(runName)) {
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             return compute(context, run, gas, spec, diskModel, zoneList, errors);
         }
     }
@@ -150,7 +162,10 @@ public final class PlanetCommand extends RunCommand {
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
         List<ZonePlanet> planets = new ArrayList<>();
         LocalCondensation local = formation.localCondensation(gas);
-        try (Progress progress = context.progress("zones", zoneList.size() + 1)) {
+        Path done;
+        String task = "planet (" + zoneList.size() + (zoneList.size() == 1 ? " zone" : " zones")
+                + ", radial profile, report)";
+        try (Progress progress = context.progress(task, zoneList.size() + 2L)) {
             for (FeedingZone z : zoneList) {
                 planets.add(formation.zonePlanet(z, diskModel, local));
                 progress.step();
@@ -165,13 +180,24 @@ public final class PlanetCommand extends RunCommand {
                     : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
                     + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "
                     + "estimate on this disk and these zones and centred on the values shown";
-            return writeOutputs(context, run, gas, diskModel, spec, planets, scan, bands, t50, errorNote);
+            done = writeOutputs(context, run, gas, diskModel, spec, planets, scan, bands, t50, errorNote);
+            progress.step();
         }
+        for (ZonePlanet zp : planets) {
+            context.out().println(PlanetReportWriter.summary(zp));
+        }
+        for (ZonePlanet zp : planets) {
+            org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
+        }
+        context.out().println("report: " + done.resolve("report.html"));
+        context.info("cautions: " + PlanetReportWriter.CAUTIONS.size() + " on model assumptions and data limits, in "
+                + done.resolve("report.html") + " (and summary.md)");
+        return ExitCodes.OK;
     }
 
-    private int writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
-                             SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
-                             Map<String, double[][]> bands, Map<Element, Double> t50, String errorNote) {
+    private Path writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
+                              SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
+                              Map<String, double[][]> bands, Map<Element, Double> t50, String errorNote) {
         List<Report.Setting> settings = new ArrayList<>();
         context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
         List<Report.Citation> extra = new ArrayList<>();
@@ -186,17 +212,7 @@ public final class PlanetCommand extends RunCommand {
                 gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote,
                 t50, chemistry.ciReference());
         PlanetReportWriter.write(run, data);
-        Path done = run.commit();
-        for (ZonePlanet zp : planets) {
-            context.out().println(PlanetReportWriter.summary(zp));
-        }
-        for (ZonePlanet zp : planets) {
-            org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
-        }
-        context.out().println("report: " + done.resolve("report.html"));
-        context.cautions(context.verbosity() == Verbosity.QUIET ? PlanetReportWriter.cautions(planets)
-                : PlanetReportWriter.CAUTIONS, done.resolve("report.html"));
-        return ExitCodes.OK;
+        return run.commit();
     }
 
     /**
@@ -253,26 +269,28 @@ public final class PlanetCommand extends RunCommand {
     }
 
     private DiskModel readDisk(RunContext context) throws IOException {
+        Optional<PresetCatalogue.Entry> named = PresetCatalogue.here().find(PresetCatalogue.Kind.DISK, disk);
+        if (named.isPresent()) {
+            context.namedInput(named.get(), "disk preset");
+            return DiskPresets.read(new StringReader(named.get().text()), named.get().shown());
+        }
         Path p = Path.of(disk);
-        if (!DiskPresets.NAMES.contains(disk) && Files.exists(p)) {
+        if (Files.exists(p)) {
             context.input(p, "disk");
         }
         return DiskPresets.resolve(disk);
     }
 
     private List<FeedingZone> readZones(RunContext context, DiskModel diskModel) throws IOException {
-        if (zones != null) {
-            Path f = context.input(zones, "feeding zones");
-            try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
-                return ZoneFileReader.read(r, zones.toString(), diskModel);
-            }
+        String name = zones != null ? zones : DEMO_ZONES_NAME;
+        Optional<PresetCatalogue.Entry> named = PresetCatalogue.here().find(PresetCatalogue.Kind.ZONES, name);
+        if (named.isPresent()) {
+            context.namedInput(named.get(), "feeding zones");
+            return ZoneFileReader.read(new StringReader(named.get().text()), named.get().shown(), diskModel);
         }
-        InputStream in = PlanetCommand.class.getResourceAsStream("/" + DEMO_ZONES);
-        if (in == null) {
-            throw new IllegalStateException("demo zones missing from the classpath: " + DEMO_ZONES);
-        }
-        try (Reader r = new InputStreamReader(in, StandardCharsets.UTF_8)) {
-            return ZoneFileReader.read(r, DEMO_ZONES, diskModel);
+        Path f = context.input(Path.of(zones), "feeding zones");
+        try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
+            return ZoneFileReader.read(r, zones, diskModel);
         }
     }
 

@@ -36,8 +36,9 @@ import picocli.CommandLine.Option;
 @Command(name = "point",
         description = {
             "Equilibrium of one state: every gas species and condensed phase at one T, P.",
-            "Gibbs free-energy minimisation for a given element inventory; writes CSV",
-            "(species,phase,moles,mole_fraction,state) to --out FILE or standard output.",
+            "Gibbs free-energy minimisation for a given element inventory; writes the CSV",
+            "species,phase,moles,mole_fraction,state,data_id to --out FILE or standard",
+            "output (data_id: the species' id in the thermodynamic data).",
             "Amounts are moles on the basis of the composition as given.",
         },
         footerHeading = "%nExamples:%n",
@@ -46,11 +47,20 @@ import picocli.CommandLine.Option;
             "  nebulith point --elements H=1,He=0.085,O=4.9e-4,Mg=3.4e-5,Si=3.2e-5 \\",
             "      --T-K 1200 --P-bar 1e-3",
             "  nebulith point --data nasa --gases gases.txt --condensed condensed.txt \\",
-            "      --elements H=1,He=0.085,O=4.9e-4,C=2.7e-4,Fe=2.9e-5 --T-K 1300 --P-bar 1e-4",
+            "      --elements H=1,He=0.085,O=4.9e-4,C=2.7e-4,Fe=2.9e-5 \\",
+            "      --T-K 1300 --P-bar 1e-4",
             "  nebulith point --preset NAME --T-K 1500 --out state.csv",
             "      (options on the command line override the preset)",
         })
 public final class PointCommand extends RunCommand {
+
+    @Mixin
+    private FileOutputOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     @Mixin
     private ChemistryOptions chemistry;
@@ -118,7 +128,8 @@ public final class PointCommand extends RunCommand {
         context.info(String.format(Locale.ROOT, "point: T = %s K, P = %s bar; %s", fmt(r.problem().temperatureK()),
                 fmt(r.problem().pressureBar()), spec.describe()));
         context.info("condensed phases present: " + (r.presentPhaseNames().isEmpty() ? "none"
-                : String.join(", ", r.presentPhaseNames())));
+                : r.presentPhaseNames().stream().map(org.nebulith.thermo.PhaseNames::display).distinct()
+                        .collect(java.util.stream.Collectors.joining(", "))));
         context.info(String.format(Locale.ROOT, "checks: element balance %.1e, largest residual %.1e RT, smallest "
                         + "absent affinity %.3g RT per atom%s; %d Newton iterations",
                 d.maxBalanceError(), d.maxPotentialResidual(), d.minAbsentAffinity(),

@@ -6,6 +6,7 @@ import java.util.List;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.PhaseKind;
+import org.nebulith.thermo.PhaseNames;
 
 /**
  * The rows of {@code nebulith point}: every gas species with data at T (trace species included,
@@ -20,7 +21,7 @@ import org.nebulith.equilibrium.PhaseKind;
  * </ul>
  */
 final class PointTable {
-    static final String[] COLUMNS = {"species", "phase", "moles", "mole_fraction", "state"};
+    static final String[] COLUMNS = {"species", "phase", "moles", "mole_fraction", "state", "data_id"};
 
     private PointTable() {
     }
@@ -46,7 +47,8 @@ final class PointTable {
                 continue; // no data at this temperature: not part of the state
             }
             double n = r.memberMoles(p, k);
-            rows.add(List.of(species, p == 0 ? "gas" : r.system().phaseName(p), n, total > 0 ? n / total : 0.0, state));
+            String phase = p == 0 ? "gas" : PhaseNames.display(r.system().phaseName(p));
+            rows.add(List.of(PhaseNames.display(species), phase, n, total > 0 ? n / total : 0.0, state, species));
         }
     }
 }

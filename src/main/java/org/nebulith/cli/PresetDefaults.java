@@ -49,6 +49,10 @@ final class PresetDefaults implements CommandLine.IDefaultValueProvider {
     }
 
     private static PresetDefaults load(final String nameOrPath, final List<Path> folders) {
+        java.util.Optional<PresetCatalogue.Entry> builtIn = PresetLocator.builtIn(nameOrPath, folders);
+        if (builtIn.isPresent()) {
+            return new PresetDefaults(PresetFile.builtIn(builtIn.get()));
+        }
         return new PresetDefaults(PresetFile.read(PresetLocator.resolve(nameOrPath, folders)));
     }
 

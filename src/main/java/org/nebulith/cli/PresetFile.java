@@ -59,10 +59,30 @@ public final class PresetFile {
 
     private final Path file;
     private final Map<String, Entry> entries;
+    private byte[] builtInContent;
 
     private PresetFile(final Path file, final Map<String, Entry> entries) {
         this.file = file;
         this.entries = entries;
+    }
+
+    /**
+     * @param entry a built-in settings preset from the {@link PresetCatalogue}
+     * @return the parsed preset, named by its shown name
+     */
+    static PresetFile builtIn(final PresetCatalogue.Entry entry) {
+        try {
+            PresetFile p = parse(Path.of(entry.shown()), new java.io.StringReader(entry.text()));
+            p.builtInContent = entry.content();
+            return p;
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /** @return the content of a built-in preset, or empty for a file */
+    java.util.Optional<byte[]> builtInContent() {
+        return java.util.Optional.ofNullable(builtInContent);
     }
 
     /**
@@ -160,6 +180,10 @@ public final class PresetFile {
                             + entry.value() + "' command, not '" + command + "'", "nebulith " + entry.value()
                             + " --preset ...");
                 }
+            } else if (RetiredOptions.byKey(entry.key()).isPresent() && !accepted.contains(entry.key())) {
+                RetiredOptions.Renamed r = RetiredOptions.byKey(entry.key()).get();
+                throw InputException.atField(file, entry.line(), entry.key(), "renamed", r.now().substring(2)
+                        + " (" + r.meaning() + ")");
             } else if (!DESCRIPTION.equals(entry.key()) && !accepted.contains(entry.key())) {
                 throw InputException.atField(file, entry.line(), entry.key(), "not a setting of the '" + command
                         + "' command", String.join(", ", accepted));

@@ -15,7 +15,8 @@ import org.nebulith.errors.Messages;
  * Finds run-settings presets. {@code --preset X} means the file X if it exists (or X contains a
  * '/' or ends in {@value #EXTENSION}); otherwise {@code X}{@value #EXTENSION} in the preset
  * folders: those listed in the environment variable {@code NEBULITH_PRESETS} (separated by the
- * platform path separator), then {@code presets/} under the working folder.
+ * platform path separator), then {@code presets/} under the working folder, then the built-in
+ * copies inside the jar.
  */
 public final class PresetLocator {
 
@@ -25,8 +26,15 @@ public final class PresetLocator {
     private PresetLocator() {
     }
 
-    /** @return the preset folders searched by default, in order */
+    /** @return the preset folders searched by default, in order (the built-in copies come after them) */
     public static List<Path> defaultFolders() {
+        List<Path> folders = environmentFolders();
+        folders.add(Path.of("presets"));
+        return folders;
+    }
+
+    /** @return the folders listed in {@code NEBULITH_PRESETS} */
+    public static List<Path> environmentFolders() {
         List<Path> folders = new ArrayList<>();
         String env = System.getenv("NEBULITH_PRESETS");
         if (env != null && !env.isBlank()) {
@@ -36,8 +44,24 @@ public final class PresetLocator {
                 }
             }
         }
-        folders.add(Path.of("presets"));
         return folders;
+    }
+
+    /**
+     * @param nameOrPath the value of --preset
+     * @param folders    the folders searched first
+     * @return the built-in settings preset of that name, if it is a bare name found in none of the folders
+     */
+    public static java.util.Optional<PresetCatalogue.Entry> builtIn(final String nameOrPath, final List<Path> folders) {
+        if (Files.isRegularFile(Path.of(nameOrPath)) || nameOrPath.contains("/") || nameOrPath.endsWith(EXTENSION)) {
+            return java.util.Optional.empty();
+        }
+        for (Path folder : folders) {
+            if (Files.isRegularFile(folder.resolve(nameOrPath + EXTENSION))) {
+                return java.util.Optional.empty();
+            }
+        }
+        return PresetCatalogue.builtIn(PresetCatalogue.Kind.SETTINGS, nameOrPath);
     }
 
     /**
@@ -60,7 +84,9 @@ public final class PresetLocator {
                 return candidate;
             }
         }
-        List<String> names = new ArrayList<>(available(folders).keySet());
+        java.util.TreeSet<String> names = new java.util.TreeSet<>(available(folders).keySet());
+        PresetCatalogue.here().all().stream().filter(e -> e.kind() == PresetCatalogue.Kind.SETTINGS)
+                .forEach(e -> names.add(e.name()));
         throw new InputException(Messages.UNKNOWN_PRESET, null, nameOrPath, folders,
                 names.isEmpty() ? "(none)" : String.join(", ", names));
     }

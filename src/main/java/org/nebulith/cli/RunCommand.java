@@ -17,8 +17,8 @@ import picocli.CommandLine.Spec;
  *     the input registry (checksums, overwrite protection), the effective settings with their
  *     origin, and the output folder ({@link RunContext#openRunFolder(String)}).</li>
  * </ol>
- * It inherits {@code --help}, {@code --version}, {@code --quiet}, {@code --verbose}, {@code --out}, {@code --run-name}, {@code --force}
- * and {@code --preset}. Every option can be set from a preset by its long name without dashes.
+ * It inherits {@code --help}, {@code --version}, {@code --quiet} and {@code --verbose}; output
+ * options come from a mixin (see {@link #outputTarget()}). Every option can be set from a preset by its long name without dashes.
  * Order inside {@code execute}: check the options, register every input file, open the output
  * ({@link RunContext#openRunFolder(String)} or {@link RunContext#reserveOutputFile(String)}: every check
  * of the output path and its lock), and only then compute.
@@ -36,12 +36,20 @@ public abstract class RunCommand implements Callable<Integer> {
     @Mixin
     private OutputLevelOptions outputLevel;
 
-    @Mixin
-    private RunOptions runOptions;
-
     @Override
     public final Integer call() throws Exception {
-        return execute(RunContext.create(spec, outputLevel.verbosity(), runOptions));
+        return execute(RunContext.create(spec, outputLevel.verbosity(), outputTarget()));
+    }
+
+    /**
+     * A command that writes declares its output options as a mixin ({@link RunOptions} for a run
+     * folder, {@link FileOutputOptions} for one table) and returns them here; one that writes
+     * nothing declares at most a {@link PresetOption}.
+     *
+     * @return the command's output options
+     */
+    protected OutputTarget outputTarget() {
+        return OutputTarget.NONE;
     }
 
     /**

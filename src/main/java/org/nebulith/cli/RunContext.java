@@ -45,7 +45,7 @@ public final class RunContext {
 
     private final String command;
     private final Verbosity verbosity;
-    private final RunOptions runOptions;
+    private final OutputTarget runOptions;
     private final PrintStream out;
     private final PrintStream err;
     private final RunInputs inputs = new RunInputs();
@@ -53,7 +53,7 @@ public final class RunContext {
     private final List<Setting> settings;
     private final Optional<PresetFile> preset;
 
-    private RunContext(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions,
+    private RunContext(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions,
                        final Optional<PresetFile> preset) {
         this.command = spec.name();
         this.verbosity = verbosity;
@@ -71,14 +71,20 @@ public final class RunContext {
      * @param runOptions its output options
      * @return the context; the preset (if any) is checked against the command and registered as an input
      */
-    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final RunOptions runOptions) {
+    static RunContext create(final CommandSpec spec, final Verbosity verbosity, final OutputTarget runOptions) {
         Optional<PresetFile> preset = Optional.empty();
         if (spec.defaultValueProvider() instanceof PresetDefaults) {
             preset = ((PresetDefaults) spec.defaultValueProvider()).preset();
         }
         preset.ifPresent(p -> p.checkFor(spec.name(), presetKeys(spec)));
         RunContext context = new RunContext(spec, verbosity, runOptions, preset);
-        preset.ifPresent(p -> context.inputs.add(p.file(), "preset"));
+        preset.ifPresent(p -> {
+            if (p.builtInContent().isPresent()) {
+                context.inputs.addBuiltIn(p.file().toString(), "settings preset", p.builtInContent().get());
+            } else {
+                context.inputs.add(p.file(), "settings preset");
+            }
+        });
         return context;
     }
 
@@ -155,6 +161,23 @@ public final class RunContext {
         return file;
     }
 
+    /**
+     * Registers a named input (preset) found by the {@link PresetCatalogue}: a working-folder file
+     * like any input, a built-in copy under its shown name; both with their SHA-256.
+     *
+     * @param entry the input
+     * @param role  what it is for
+     * @return entry
+     */
+    public PresetCatalogue.Entry namedInput(final PresetCatalogue.Entry entry, final String role) {
+        if (entry.builtIn()) {
+            inputs.addBuiltIn(entry.shown(), role, entry.content());
+        } else {
+            inputs.add(entry.file(), role);
+        }
+        return entry;
+    }
+
     /** @return the registered inputs */
     public RunInputs inputs() {
         return inputs;
@@ -163,6 +186,11 @@ public final class RunContext {
     /** @return whether --force was given */
     public boolean force() {
         return runOptions.force();
+    }
+
+    /** @return whether --run-name was given */
+    public boolean hasRunName() {
+        return runOptions.runName() != null;
     }
 
     /** @return the --out value, if given (commands writing a single file use it as that file) */
@@ -175,7 +203,17 @@ public final class RunContext {
      * @return the output folder: --out, or reports/&lt;run-name&gt;
      */
     public Path outputFolder(final String defaultRunName) {
-        return runOptions.outputFolder(defaultRunName);
+        return RunOptions.outputFolder(runOptions, defaultRunName);
+    }
+
+    /**
+     * The one rule for default run folders: {@code <command>-<yyyyMMdd-HHmmss>} of the start time
+     * (UTC), with {@code -2}, {@code -3}, ... appended if {@code reports/} already holds that name.
+     *
+     * @return the run name used when neither --out nor --run-name is given
+     */
+    public String defaultRunName() {
+        return DefaultRunName.of(command, started, RunOptions.REPORTS);
     }
 
     /**

@@ -7,9 +7,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 
 import org.nebulith.composition.ElementAbundances;
+import org.nebulith.condensation.AllGasStart;
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.PressurePathReader;
@@ -28,8 +30,10 @@ import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
+import org.nebulith.progress.Progress;
 import org.nebulith.report.RunFolder;
 import org.nebulith.thermo.Element;
+import org.nebulith.thermo.PhaseNames;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -37,25 +41,32 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code nebulith sequence}: the condensation sequence of a gas cooling at constant pressure or
- * along a P-T path, in equilibrium (default) or with a fraction of each step's condensates isolated.
- * Writes the four tables and the run notes into the run folder; prints the cautions on stderr.
+ * along a P-T path, in equilibrium (default) or with a fraction of each step's new condensate
+ * withdrawn from further reaction. Writes the four tables, two charts, the run notes and the report
+ * into the run folder; the terminal gets one line pointing to the cautions.
  */
 @Command(name = "sequence",
         description = {
             "Condensation sequence: what condenses, and when, as a gas cools.",
             "At fixed pressure or along a P-T path: phases against T, the fraction of each",
             "element condensed, 50%% condensation temperatures, phase appearance.",
-            "Writes sequence.csv, element-fractions.csv, condensation-temperatures.csv,",
-            "phase-appearance.csv and run-notes.md under --out (default reports/sequence/).",
+            "The start is raised above the first condensate if phases are stable at 2000 K",
+            "(strong dust enrichment); the run notes say so.",
+            "Writes into --out (default reports/sequence-<yyyyMMdd-HHmmss>/):",
+            "  sequence.csv, element-fractions.csv, condensation-temperatures.csv,",
+            "  phase-appearance.csv, condensation-curves and phase-assemblage charts",
+            "  (.png/.svg/.pdf), run-notes.md, report.html and summary.md.",
         },
-        footerHeading = "%nExamples:%n",
+        footerHeading = "%nExamples (each a few seconds to a minute):%n",
         footer = {
             "  nebulith sequence --composition protosolar-lodders2003 --P-bar 1e-4",
             "  nebulith sequence --P-bar 1e-3 --T-max-K 1800 --T-min-K 400 --T-step-K 2",
-            "  nebulith sequence --isolation 1 --out reports/fractional     (fully fractional)",
-            "  nebulith sequence --dust-enrichment 10 --variant B88 --out reports/dusty-B88",
-            "  nebulith sequence --path my-path.csv --out reports/cooling-path",
-            "      (path CSV header: T_K,P_bar; log-linear in P between rows, constant beyond)",
+            "  nebulith sequence --removal-fraction 1 --run-name fractional",
+            "  nebulith sequence --dust-enrichment 10 --variant B88 --run-name dusty-B88",
+            "  nebulith sequence --preset dusty-sequence",
+            "  nebulith sequence --path my-path.csv --run-name cooling-path",
+            "      (path CSV header: T_K,P_bar; log-linear in P between rows,",
+            "      held constant beyond)",
         })
 public final class SequenceCommand extends RunCommand {
 
@@ -64,6 +75,14 @@ public final class SequenceCommand extends RunCommand {
 
     /** Most grid temperatures of one sequence (about a day of work at 10 ms a state). */
     static final int MAX_GRID_POINTS = 1_000_000;
+
+    @Mixin
+    private RunOptions output;
+
+    @Override
+    protected OutputTarget outputTarget() {
+        return output;
+    }
 
     @Mixin
     private ChemistryOptions chemistry;
@@ -88,50 +107,111 @@ public final class SequenceCommand extends RunCommand {
             description = "Grid step [K]; boundaries are bisected to 0.05 K anyway. Default: ${DEFAULT-VALUE}.")
     private double tStepK;
 
-    @Option(names = "--isolation", paramLabel = "PHI", defaultValue = "0",
-            description = "Fraction in [0, 1] of each step's new condensates removed from further reaction: "
-                    + "0 = equilibrium condensation (default), 1 = fully fractional.")
-    private double isolation;
+    @Option(names = "--removal-fraction", paramLabel = "F", defaultValue = "0",
+            description = "Fraction of each step's new condensate withdrawn from further reaction; "
+                    + "0 = equilibrium (default), 1 = fractional.")
+    private double removalFraction;
 
     @Override
     protected int execute(final RunContext context) throws IOException {
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         PressurePath path = pressurePath(context);
-        SequenceSettings settings = settings(path);
+        settings(path);
         Set<Element> elements = ChemistryOptions.elementsOf(comp);
-        Path folder;
-        try (RunFolder run = context.openRunFolder("sequence")) {
-            ChemicalSystem system = spec.build(elements);
-            double[] totals = new double[system.elementCount()];
-            for (int j = 0; j < totals.length; j++) {
-                totals[j] = comp.moles(system.elements().get(j));
-            }
-            List<String> cautions = SequenceCautions.lines(spec.describe(),
-                    SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK));
-            long t0 = System.nanoTime();
-            CondensationSequence seq = run(system, totals, settings);
-            double elapsed = (System.nanoTime() - t0) / 1e9;
-            SequenceTables tables = new SequenceTables(seq);
-            run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
-            run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
-            run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
-            run.writeCsv(SequenceTables.APPEARANCE, tables.phaseAppearance());
-            SequenceCharts.Charts charts = SequenceCharts.write(run, seq, tables, describe(path));
-            String chartsNote = "Charts: " + String.join(", ", charts.files()) + "; report: report.html";
-            run.writeText(SequenceNotes.FILE, SequenceNotes.text(seq, tables, new SequenceNotes.Context(
-                    context.toolVersion(), context.started().toString(), elapsed, settingLines(context),
-                    compositionLines(context), spec.describe(), describe(path), context.inputs(), cautions, chartsNote)));
-            SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
-                    context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
-                    reportSettings(context), cautions, sources(context, spec, elements), context.inputs()));
-            folder = run.commit();
-            printCautions(context, cautions);
-            context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
-                    + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote "
-                    + folder);
+        ChemicalSystem system = spec.build(elements);
+        double[] totals = new double[system.elementCount()];
+        for (int j = 0; j < totals.length; j++) {
+            totals[j] = comp.moles(system.elements().get(j));
         }
+        Path folder;
+        CondensationSequence seq;
+        double elapsed;
+        List<String> cautions = new ArrayList<>();
+        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
+            Optional<String> startNote = allGasStart(context, system, totals, path);
+            SequenceSettings settings = settings(path);
+            startNote.ifPresent(cautions::add);
+            cautions.addAll(SequenceCautions.lines(spec.describe(),
+                    SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK)));
+            long t0 = System.nanoTime();
+            try (Progress progress = context.progress("sequence", SequenceRunner.gridSize(settings) + 2L)) {
+                seq = run(system, totals, settings, progress);
+                elapsed = (System.nanoTime() - t0) / 1e9;
+                folder = write(run, context, spec, path, seq, cautions, elapsed);
+                progress.step();
+            }
+        }
+        context.info(cautionsPointer(cautions.size(), folder));
+        context.info("sequence: " + seq.steps().size() + " states, " + seq.phaseEvents().size()
+                + " phase intervals, " + String.format(java.util.Locale.ROOT, "%.2f", elapsed) + " s; wrote " + folder);
         return ExitCodes.OK;
+    }
+
+    /**
+     * @param count  number of cautions written to the report
+     * @param folder the run folder
+     * @return the one terminal line that points to them
+     */
+    static String cautionsPointer(int count, Path folder) {
+        return "cautions: " + count + " on model assumptions and data limits, in " + folder.resolve("report.html")
+                + " (and summary.md)";
+    }
+
+    private Path write(RunFolder run, RunContext context, SystemSpec spec, PressurePath path, CondensationSequence seq,
+                       List<String> cautions, double elapsed) {
+        SequenceTables tables = new SequenceTables(seq);
+        run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
+        run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
+        run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
+        run.writeCsv(SequenceTables.APPEARANCE, tables.phaseAppearance());
+        SequenceCharts.Charts charts = SequenceCharts.write(run, seq, tables, describe(path));
+        String chartsNote = "Charts: " + String.join(", ", charts.files()) + "; report: report.html";
+        run.writeText(SequenceNotes.FILE, SequenceNotes.text(seq, tables, new SequenceNotes.Context(
+                context.toolVersion(), context.started().toString(), elapsed, settingLines(context),
+                compositionLines(context), spec.describe(), describe(path), context.inputs(), cautions, chartsNote)));
+        SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
+                context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
+                reportSettings(context), cautions, sources(context, spec, java.util.EnumSet.copyOf(seq.system().elements())), context.inputs()));
+        return run.commit();
+    }
+
+    /**
+     * Makes the sequence start with gas only: if phases are stable at the start, a default start is
+     * raised (in steps of {@link AllGasStart#STEP_K}) up to the gas data's limit; a start given on the
+     * command line or in a preset is refused.
+     *
+     * @return the note for the run notes when the start was raised
+     */
+    private Optional<String> allGasStart(RunContext context, ChemicalSystem system, double[] totals, PressurePath path) {
+        AllGasStart.Result r;
+        try {
+            r = AllGasStart.find(new EquilibriumSolver(), system, totals, path, tMaxK);
+        } catch (ConvergenceException e) {
+            throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
+        }
+        if (r.allGasAtStart()) {
+            return Optional.empty();
+        }
+        String stable = r.stableAtStart().stream().map(PhaseNames::display).distinct()
+                .collect(java.util.stream.Collectors.joining(", "));
+        boolean explicit = context.settings().stream()
+                .anyMatch(s -> s.key().equals("T-max-K") && !s.origin().equals("default"));
+        if (explicit || r.startK().isEmpty()) {
+            String accepted = r.startK().isPresent()
+                    ? "a start where the gas is all vapour, e.g. --T-max-K " + Decimal.format(r.startK().get())
+                            + ", or no --T-max-K to raise the start automatically"
+                    : "a composition or pressure with an all-gas state below " + Decimal.format(r.limitK())
+                            + " K (the upper limit of the gas data)";
+            throw InputException.atOption("--T-max-K", Decimal.format(tMaxK), "condensed phases are already stable "
+                    + "there (" + stable + ")", accepted);
+        }
+        String note = "start raised from " + Decimal.format(tMaxK) + " K to " + Decimal.format(r.startK().get())
+                + " K, the first all-gas temperature in " + Decimal.format(AllGasStart.STEP_K) + " K steps: " + stable
+                + " already stable at " + Decimal.format(tMaxK) + " K with this composition";
+        tMaxK = r.startK().get();
+        context.info("sequence: " + note);
+        return Optional.of(note);
     }
 
     private static List<org.nebulith.report.html.Report.Setting> reportSettings(RunContext context) {
@@ -146,9 +226,10 @@ public final class SequenceCommand extends RunCommand {
                 org.nebulith.thermo.SpeciesDatabase.bundled().sources(), List.of());
     }
 
-    private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+    private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                            Progress progress) {
         try {
-            return new SequenceRunner(new EquilibriumSolver()).run(system, totals, settings);
+            return new SequenceRunner(new EquilibriumSolver()).run(system, totals, settings, progress);
         } catch (ConvergenceException e) {
             throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
         }
@@ -197,11 +278,11 @@ public final class SequenceCommand extends RunCommand {
                     + Decimal.format((tMaxK - tMinK) / (MAX_GRID_POINTS - 1)) + " K for this range"
                     + " (boundaries are refined to 0.05 K anyway)");
         }
-        if (!(isolation >= 0 && isolation <= 1)) {
-            throw InputException.atOption("--isolation", isolation, "outside [0, 1]",
+        if (!(removalFraction >= 0 && removalFraction <= 1)) {
+            throw InputException.atOption("--removal-fraction", removalFraction, "outside [0, 1]",
                     "0 (equilibrium) to 1 (fully fractional)");
         }
-        return new SequenceSettings(path, tMaxK, tMinK, tStepK, isolation, 0.05);
+        return new SequenceSettings(path, tMaxK, tMinK, tStepK, removalFraction, 0.05);
     }
 
     private String describe(final PressurePath path) {
@@ -223,15 +304,5 @@ public final class SequenceCommand extends RunCommand {
         List<String> lines = new ArrayList<>();
         context.settings().forEach(s -> lines.add(s.key() + " = " + s.value() + " (" + s.origin() + ")"));
         return lines;
-    }
-
-    private static void printCautions(final RunContext context, final List<String> cautions) {
-        context.info("Cautions (details in run-notes.md):");
-        context.info("  - equilibrium with ideal solutions, no kinetics; silicate liquids not modelled");
-        context.info("  - results depend on the thermodynamic data: try --variant TAG for sensitivity");
-        context.info("  - no phosphide or Mn-silicate data: P and Mn condense late");
-        if (cautions.size() > 4) {
-            context.info("  - some gas species are used below their data range (listed in run-notes.md)");
-        }
     }
 }

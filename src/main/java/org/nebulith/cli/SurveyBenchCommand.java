@@ -2,23 +2,21 @@ package org.nebulith.cli;
 
 import java.io.PrintStream;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 
 import org.nebulith.errors.InputException;
+import org.nebulith.progress.Progress;
 import org.nebulith.survey.SurveyBenchmark;
 import org.nebulith.survey.SurveyRunner;
 
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code nebulith bench-survey}: times the survey on invented benchmark stars with the planet
  * estimate of {@link SurveyCommand#estimator} and the default disk and zone. Target: 100 stars x
  * 100 draws in under 60 s of wall time on 2 cores.
  */
-@Command(name = "bench-survey", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
+@Command(name = "bench-survey",
         description = {
             "Benchmark of the survey: invented stars x draws with the default disk and zone;",
             "prints wall time, draws per second and equilibria per second.",
@@ -26,7 +24,7 @@ import picocli.CommandLine.Spec;
         },
         footerHeading = "%nExamples:%n",
         footer = {"  nebulith bench-survey", "  nebulith bench-survey --stars 20 --draws 50 --threads 1"})
-public final class SurveyBenchCommand implements Callable<Integer> {
+public final class SurveyBenchCommand extends RunCommand {
 
     @Option(names = "--stars", defaultValue = "100", description = "Invented stars (default: ${DEFAULT-VALUE}).")
     private int stars;
@@ -40,18 +38,18 @@ public final class SurveyBenchCommand implements Callable<Integer> {
     @Option(names = "--seed", defaultValue = "1", description = "Seed (default: ${DEFAULT-VALUE}).")
     private long seed;
 
-    @Spec
-    private CommandSpec spec;
-
     @Override
-    public Integer call() throws Exception {
+    protected int execute(final RunContext context) throws Exception {
         if (stars < 1 || draws < 1) {
             throw InputException.atOption(stars < 1 ? "--stars" : "--draws", stars < 1 ? stars : draws,
                     "must be at least 1", "an integer >= 1");
         }
         int workers = threads == null ? SurveyRunner.defaultThreads() : threads;
-        SurveyBenchmark.Figures f = SurveyBenchmark.run(SurveyCommand::estimator, stars, draws, workers, seed);
-        print(((NebulithCommand) spec.root().userObject()).out(), f, "planet estimate of the survey command");
+        SurveyBenchmark.Figures f;
+        try (Progress progress = context.progress("bench-survey", (long) stars * draws)) {
+            f = SurveyBenchmark.run(SurveyCommand::estimator, stars, draws, workers, seed, progress);
+        }
+        print(context.out(), f, "planet estimate of the survey command");
         return ExitCodes.OK;
     }
 

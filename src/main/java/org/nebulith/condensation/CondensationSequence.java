@@ -15,27 +15,27 @@ public final class CondensationSequence {
     private final List<SequenceStep> steps;
     private final List<PhaseEvent> events;
     private final List<ElementCondensation> temperatures;
-    private final double[][] finalIsolated;
+    private final double[][] finalWithdrawn;
     private final double[] finalReactingTotals;
     private final double[] floorAdded;
 
     CondensationSequence(ChemicalSystem system, double[] inputTotals, SequenceSettings settings,
                          List<SequenceStep> steps, List<PhaseEvent> events, List<ElementCondensation> temperatures,
-                         double[][] finalIsolated, double[] finalReactingTotals, double[] floorAdded) {
+                         double[][] finalWithdrawn, double[] finalReactingTotals, double[] floorAdded) {
         this.system = system;
         this.inputTotals = inputTotals.clone();
         this.settings = settings;
         this.steps = List.copyOf(steps);
         this.events = List.copyOf(events);
         this.temperatures = List.copyOf(temperatures);
-        this.finalIsolated = finalIsolated;
+        this.finalWithdrawn = finalWithdrawn;
         this.finalReactingTotals = finalReactingTotals.clone();
         this.floorAdded = floorAdded.clone();
     }
 
     /**
      * @return moles of each element added over the run to keep reacting totals at
-     *         {@link SequenceRunner#REACTING_FLOOR} of the input (isolation mode only; zero otherwise)
+     *         {@link SequenceRunner#REACTING_FLOOR} of the input (withdrawal mode only; zero otherwise)
      */
     public double[] floorAddedMoles() {
         return floorAdded.clone();
@@ -73,10 +73,10 @@ public final class CondensationSequence {
 
     /**
      * @param p phase @param k member
-     * @return moles of the member isolated over the whole run (after the last step's removal)
+     * @return moles of the member withdrawn over the whole run (after the last step's removal)
      */
-    public double finalIsolatedMoles(int p, int k) {
-        return finalIsolated == null ? 0 : finalIsolated[p][k];
+    public double finalWithdrawnMoles(int p, int k) {
+        return finalWithdrawn == null ? 0 : finalWithdrawn[p][k];
     }
 
     /** @return element totals still reacting after the last step [mol] */

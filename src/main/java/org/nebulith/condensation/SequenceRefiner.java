@@ -16,7 +16,7 @@ import org.nebulith.thermo.Element;
 /**
  * Locates phase boundaries and 50% condensation points between grid steps by bisection on
  * temperature, solving the reacting system of the colder step (its composition after the
- * isolation of earlier steps) at intermediate temperatures.
+ * withdrawal of earlier steps) at intermediate temperatures.
  */
 final class SequenceRefiner {
     private final EquilibriumSolver solver;
@@ -94,9 +94,9 @@ final class SequenceRefiner {
         return new ElementCondensation(e, t50, host, onset);
     }
 
-    /** Condensed fraction of e with the reacting system in state r and the solids isolated before the cold step. */
+    /** Condensed fraction of e with the reacting system in state r and the solids withdrawn before the cold step. */
     private static double fraction(EquilibriumResult r, SequenceStep cold, Element e) {
-        return (r.condensedMoles(e) + cold.isolatedElementMoles(e)) / cold.inputTotal(e);
+        return (r.condensedMoles(e) + cold.withdrawnElementMoles(e)) / cold.inputTotal(e);
     }
 
     /** The condensed phase holding most of e in r. */

@@ -8,17 +8,18 @@ import org.nebulith.equilibrium.EquilibriumProblem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.WarmStart;
+import org.nebulith.progress.Progress;
 
 /**
  * Runs a condensation sequence on cooling: equilibrium at each grid temperature, warm-started by
- * extrapolation from the two previous steps. With an isolation fraction phi &gt; 0, after each
+ * extrapolation from the two previous steps. With an removal fraction &gt; 0, after each
  * step a fraction phi of the solids that condensed during that step (the increase of every
- * condensed member over what stayed reacting) is removed from the reacting system; isolated
+ * condensed member over what stayed reacting) is removed from the reacting system; withdrawn
  * solids no longer react. Phase boundaries and 50% points are then bisected
  * ({@link SequenceRefiner}).
  */
 public final class SequenceRunner {
-    /** Smallest reacting total kept in isolation mode, relative to the element's input total. */
+    /** Smallest reacting total kept in withdrawal mode, relative to the element's input total. */
     public static final double REACTING_FLOOR = 1e-14;
 
     private final EquilibriumSolver solver;
@@ -31,14 +32,34 @@ public final class SequenceRunner {
     /**
      * @param system   the chemical system
      * @param totals   input element totals [mol], in the system's element order
-     * @param settings grid, pressure and isolation
+     * @param settings grid, pressure and removal fraction
      * @return the sequence
      */
     public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+        return run(system, totals, settings, Progress.none());
+    }
+
+    /**
+     * @param settings grid settings
+     * @return the number of grid states a run solves before refinement (one progress step each)
+     */
+    public static int gridSize(SequenceSettings settings) {
+        return grid(settings).length;
+    }
+
+    /**
+     * @param system   the chemical system
+     * @param totals   input element totals [mol], in the system's element order
+     * @param settings grid, pressure and removal fraction
+     * @param progress advanced by one per grid state ({@link #gridSize}) and one for the refinement
+     * @return the sequence
+     */
+    public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                    Progress progress) {
         List<SequenceStep> steps = new ArrayList<>();
         double[] b = totals.clone();
         double[][] kept = settings.isFractional() ? zeros(system) : null;
-        double[][] isolated = settings.isFractional() ? zeros(system) : null;
+        double[][] withdrawn = settings.isFractional() ? zeros(system) : null;
         double[] floorAdded = new double[totals.length];
         Stoichiometry stoich = new Stoichiometry(system);
         EquilibriumResult last = null;
@@ -46,18 +67,20 @@ public final class SequenceRunner {
         for (double t : grid(settings)) {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
             EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
-            steps.add(new SequenceStep(r, copy(isolated), totals, stoich));
+            steps.add(new SequenceStep(r, copy(withdrawn), totals, stoich));
             if (settings.isFractional()) {
-                b = isolate(r, stoich, settings.isolation(), kept, isolated);
+                b = withdraw(r, stoich, settings.removalFraction(), kept, withdrawn);
                 floorReacting(b, totals, floorAdded);
             }
             prev = last;
             last = r;
+            progress.step();
         }
         SequenceRefiner refiner = new SequenceRefiner(solver, settings);
         List<PhaseEvent> events = refiner.phaseEvents(steps);
         List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
-        return new CondensationSequence(system, totals, settings, steps, events, temps, isolated, b, floorAdded);
+        progress.step();
+        return new CondensationSequence(system, totals, settings, steps, events, temps, withdrawn, b, floorAdded);
     }
 
     /**
@@ -92,8 +115,8 @@ public final class SequenceRunner {
      * and the solids kept (not as a difference, which would cancel for elements that are almost
      * entirely condensed).
      */
-    private static double[] isolate(EquilibriumResult r, Stoichiometry stoich, double phi, double[][] kept,
-                                    double[][] isolated) {
+    private static double[] withdraw(EquilibriumResult r, Stoichiometry stoich, double phi, double[][] kept,
+                                    double[][] withdrawn) {
         ChemicalSystem sys = r.system();
         double[] nb = new double[sys.elementCount()];
         addMembers(stoich, 0, r, null, nb);
@@ -103,7 +126,7 @@ public final class SequenceRunner {
                 double increase = n - kept[p][k];
                 double removed = increase > 0 ? phi * increase : 0;
                 kept[p][k] = n - removed;
-                isolated[p][k] += removed;
+                withdrawn[p][k] += removed;
             }
             addMembers(stoich, p, r, kept[p], nb);
         }

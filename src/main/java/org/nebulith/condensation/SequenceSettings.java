@@ -7,11 +7,11 @@ package org.nebulith.condensation;
  * @param tMaxK         starting (hottest) temperature [K]
  * @param tMinK         final temperature [K]
  * @param tStepK        grid step [K], > 0
- * @param isolation     fraction phi in [0, 1] of the newly condensed solids removed from further
- *                      reaction at each step (0 = equilibrium condensation, 1 = fractional)
+ * @param removalFraction fraction F in [0, 1] of each step's new condensate withdrawn from further
+ *                      reaction (0 = equilibrium condensation, 1 = fractional)
  * @param refineK       bracket to which phase boundaries and 50% points are bisected [K]
  */
-public record SequenceSettings(PressurePath path, double tMaxK, double tMinK, double tStepK, double isolation,
+public record SequenceSettings(PressurePath path, double tMaxK, double tMinK, double tStepK, double removalFraction,
                                double refineK) {
 
     public SequenceSettings {
@@ -21,8 +21,8 @@ public record SequenceSettings(PressurePath path, double tMaxK, double tMinK, do
         if (!(tStepK > 0) || tStepK > tMaxK - tMinK) {
             throw new IllegalArgumentException("T step must be > 0 K and no larger than the range, got " + tStepK);
         }
-        if (!(isolation >= 0 && isolation <= 1)) {
-            throw new IllegalArgumentException("isolation fraction must lie in [0, 1], got " + isolation);
+        if (!(removalFraction >= 0 && removalFraction <= 1)) {
+            throw new IllegalArgumentException("removal fraction must lie in [0, 1], got " + removalFraction);
         }
         if (!(refineK > 0)) {
             throw new IllegalArgumentException("refinement bracket must be > 0 K");
@@ -37,8 +37,8 @@ public record SequenceSettings(PressurePath path, double tMaxK, double tMinK, do
         return new SequenceSettings(PressurePath.constant(pBar), 2000, 300, 1, 0, 0.05);
     }
 
-    /** @return true when condensates are partly or fully isolated */
+    /** @return true when condensates are partly or fully withdrawn */
     public boolean isFractional() {
-        return isolation > 0;
+        return removalFraction > 0;
     }
 }

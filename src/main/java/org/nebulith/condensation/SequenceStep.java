@@ -5,24 +5,24 @@ import org.nebulith.thermo.Element;
 
 /**
  * One temperature of a condensation sequence: the equilibrium of the still-reacting system and
- * the solids isolated so far (all zero in equilibrium mode).
+ * the solids withdrawn so far (all zero in equilibrium mode).
  */
 public final class SequenceStep {
     private final EquilibriumResult result;
-    private final double[][] isolated;
+    private final double[][] withdrawn;
     private final double[] inputTotals;
-    private final double[] isolatedElements;
+    private final double[] withdrawnElements;
 
     /**
-     * @param isolated    moles isolated per phase and member (null in equilibrium mode); kept, not copied
+     * @param withdrawn    moles withdrawn per phase and member (null in equilibrium mode); kept, not copied
      * @param inputTotals element totals of the input (shared, not modified)
-     * @param stoich      the system's stoichiometry, to sum the isolated element moles once
+     * @param stoich      the system's stoichiometry, to sum the withdrawn element moles once
      */
-    SequenceStep(EquilibriumResult result, double[][] isolated, double[] inputTotals, Stoichiometry stoich) {
+    SequenceStep(EquilibriumResult result, double[][] withdrawn, double[] inputTotals, Stoichiometry stoich) {
         this.result = result;
-        this.isolated = isolated;
+        this.withdrawn = withdrawn;
         this.inputTotals = inputTotals;
-        this.isolatedElements = isolated == null ? null : stoich.condensedElements(isolated);
+        this.withdrawnElements = withdrawn == null ? null : stoich.condensedElements(withdrawn);
     }
 
     /** @return temperature [K] */
@@ -42,21 +42,21 @@ public final class SequenceStep {
 
     /**
      * @param p phase @param k member
-     * @return moles of member k of phase p isolated at or before this step [mol, input basis]
+     * @return moles of member k of phase p withdrawn at or before this step [mol, input basis]
      */
-    public double isolatedMoles(int p, int k) {
-        return isolated == null ? 0 : isolated[p][k];
+    public double withdrawnMoles(int p, int k) {
+        return withdrawn == null ? 0 : withdrawn[p][k];
     }
 
-    /** @param p phase @param k member @return reacting plus isolated moles of the member */
+    /** @param p phase @param k member @return reacting plus withdrawn moles of the member */
     public double totalMoles(int p, int k) {
-        return result.memberMoles(p, k) + isolatedMoles(p, k);
+        return result.memberMoles(p, k) + withdrawnMoles(p, k);
     }
 
-    /** @param e an element @return moles of e in the solids isolated before this step */
-    public double isolatedElementMoles(Element e) {
+    /** @param e an element @return moles of e in the solids withdrawn before this step */
+    public double withdrawnElementMoles(Element e) {
         int j = result.system().elementIndex(e);
-        return j < 0 || isolatedElements == null ? 0 : isolatedElements[j];
+        return j < 0 || withdrawnElements == null ? 0 : withdrawnElements[j];
     }
 
     /** @param e an element @return input amount of e [mol] (0 if not in the system) */
@@ -65,13 +65,13 @@ public final class SequenceStep {
         return j < 0 ? 0 : inputTotals[j];
     }
 
-    /** @param e an element @return fraction of the input amount of e that is condensed (reacting or isolated) */
+    /** @param e an element @return fraction of the input amount of e that is condensed (reacting or withdrawn) */
     public double condensedFraction(Element e) {
         int j = result.system().elementIndex(e);
         if (j < 0) {
             return 0;
         }
-        double f = (result.condensedMoles(e) + isolatedElementMoles(e)) / inputTotals[j];
+        double f = (result.condensedMoles(e) + withdrawnElementMoles(e)) / inputTotals[j];
         return Math.min(1, Math.max(0, f));
     }
 }

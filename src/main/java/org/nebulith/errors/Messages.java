@@ -25,6 +25,8 @@ public enum Messages {
     INPUT_NOT_READABLE(2, "{0}: cannot read input file ({1})"),
     /** A preset name that resolves to no file: name, searched folders, available names. */
     UNKNOWN_PRESET(3, "preset \"{0}\" not found in {1}; available presets: {2}"),
+    /** An option that was renamed: old name, new option with its parameter, what it means. */
+    RENAMED_OPTION(3, "option {0} was renamed: use {1} ({2})"),
     /** An output folder or file exists: path. */
     OUTPUT_EXISTS(1, "{0}: output already exists; use --force to replace it, or choose another --out or --run-name"),
     /** An output would overwrite or replace an input of the same run: output, input. */

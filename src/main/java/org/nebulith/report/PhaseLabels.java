@@ -24,15 +24,6 @@ public final class PhaseLabels {
      * @return the reader's name: a mineral or solution name, or the formula without its state suffix
      */
     public static String display(final String dataId) {
-        String whole = MINERALS.get(dataId);
-        if (whole != null) {
-            return whole;
-        }
-        String base = dataId.replaceFirst("\\((cr|[a-z]|L|l|an)\\)$", "");
-        String mineral = MINERALS.get(base);
-        if (mineral != null) {
-            return mineral;
-        }
-        return base.replace("AL", "Al");
+        return org.nebulith.thermo.PhaseNames.display(dataId);
     }
 }

@@ -42,6 +42,7 @@ public final class RunInputs {
     }
 
     private final List<InputFile> files = new ArrayList<>();
+    private final List<InputFile> builtIn = new ArrayList<>();
 
     /**
      * Registers an input file, reading it once to compute its checksum. Registering the same
@@ -142,6 +143,25 @@ public final class RunInputs {
         return n;
     }
 
+    /**
+     * Registers a copy shipped inside the program (a built-in preset): listed with its checksum,
+     * never a file on disk, so no output can collide with it.
+     *
+     * @param shown   how the copy is named to users, e.g. {@code built-in presets/star-tessaly.csv}
+     * @param role    what it is for
+     * @param content its bytes
+     * @return this
+     */
+    public synchronized RunInputs addBuiltIn(final String shown, final String role, final byte[] content) {
+        Path label = Path.of(shown);
+        if (files.stream().noneMatch(f -> f.path().equals(label))) {
+            InputFile f = new InputFile(label, role, HexFormat.of().formatHex(newDigest().digest(content)), content.length);
+            files.add(f);
+            builtIn.add(f);
+        }
+        return this;
+    }
+
     /** @return the registered files, in registration order */
     public synchronized List<InputFile> files() {
         return List.copyOf(files);
@@ -155,6 +175,9 @@ public final class RunInputs {
      */
     public synchronized void checkNotInput(final Path output) {
         for (InputFile input : files) {
+            if (builtIn.contains(input)) {
+                continue;
+            }
             if (PathIdentity.same(input.path(), output) || PathIdentity.contains(output, input.path())) {
                 throw new InputException(Messages.OUTPUT_IS_INPUT, null, output, input.path());
             }

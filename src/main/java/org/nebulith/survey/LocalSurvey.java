@@ -35,7 +35,7 @@ import org.nebulith.report.RunInputs;
  * <li>{@code failures.csv} ({@link SurveyFailures}): every failed estimate, streamed the same way
  *     into {@code .failures.csv.partial} (a star's failures before its rows);</li>
  * <li>{@code survey-stars.csv} ({@link StarsTable}), {@code survey-notes.txt} (settings, counts,
- *     cautions), {@code survey-chart.png/.svg} ({@link SurveyChart}), {@code report.html} and
+ *     cautions), {@code survey-chart.png/.svg/.pdf} ({@link SurveyChart}), {@code report.html} and
  *     {@code summary.md}, written at the end.</li>
  * </ul>
  * A failed draw does not stop the run; the run stops (a {@link NumericalException}, exit 3, the

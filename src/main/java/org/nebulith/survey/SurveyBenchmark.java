@@ -51,13 +51,27 @@ public final class SurveyBenchmark {
      */
     public static Figures run(Function<SurveySettings, PlanetEstimator> factory, int stars, int draws, int threads,
                               long seed) throws java.io.IOException {
+        return run(factory, stars, draws, threads, seed, Progress.none());
+    }
+
+    /**
+     * @param factory  builds the estimator for the settings (default disk and zone)
+     * @param stars    number of invented stars
+     * @param draws    draws per star
+     * @param threads  worker threads
+     * @param seed     the seed
+     * @param progress advanced by the draws of each finished star (stars x draws in all)
+     * @return the figures
+     */
+    public static Figures run(Function<SurveySettings, PlanetEstimator> factory, int stars, int draws, int threads,
+                              long seed, Progress progress) throws java.io.IOException {
         SurveySettings settings = new SurveySettings(draws, seed, SolarReference.ASPLUND2009, null, null);
         EstimatorCache cache = new EstimatorCache(factory);
         cache.get(settings);
         List<StarRow> rows = inventedStars(stars, seed);
         long before = cache.equilibria();
         long start = System.nanoTime();
-        SurveyRunner.run(rows.iterator(), settings, cache, threads, Progress.none(), star -> {
+        SurveyRunner.run(rows.iterator(), settings, cache, threads, progress, star -> {
             // discarded: the benchmark times the computation
         });
         double seconds = (System.nanoTime() - start) / 1e9;

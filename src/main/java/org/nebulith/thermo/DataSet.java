@@ -113,7 +113,7 @@ public final class DataSet {
 
     /** @return true for NASA Glenn entries under their NASA names */
     public static boolean isNasaEntry(Species s) {
-        return s.source().equals("NASA-Glenn-2002") && !isMineralRow(s);
+        return s.source().equals(org.nebulith.thermo.source.SourceKeys.NASA) && !isMineralRow(s);
     }
 
     private static boolean isNasaForm(Species s) {

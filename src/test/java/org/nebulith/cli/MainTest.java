@@ -39,6 +39,13 @@ class MainTest {
         @Option(names = "--fail")
         String fail = "none";
         RunContext seen;
+        @picocli.CommandLine.Mixin
+        RunOptions output;
+
+        @Override
+        protected OutputTarget outputTarget() {
+            return output;
+        }
 
         @Override
         protected int execute(final RunContext context) {

@@ -20,6 +20,7 @@ import java.util.TreeSet;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.nebulith.thermo.PhaseNames;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -72,7 +73,8 @@ class PointCommandTest {
                 "--elements", c.inlineElements(), "--T-K", Double.toString(c.tK()), "--P-bar", Double.toString(c.pBar()),
                 "--out", csv.toString()), err());
         List<CSVRecord> rows = parse(Files.readString(csv));
-        assertEquals(List.of("species", "phase", "moles", "mole_fraction", "state"), rows.get(0).getParser().getHeaderNames());
+        assertEquals(List.of("species", "phase", "moles", "mole_fraction", "state", "data_id"),
+                rows.get(0).getParser().getHeaderNames());
 
         Map<String, Double> gas = new HashMap<>();
         Map<String, Double> solid = new HashMap<>();
@@ -80,7 +82,8 @@ class PointCommandTest {
             double n = Double.parseDouble(r.get("moles"));
             assertTrue(Double.isFinite(n) && n >= 0, r.toString());
             assertTrue(Double.isFinite(Double.parseDouble(r.get("mole_fraction"))), r.toString());
-            (r.get("phase").equals("gas") ? gas : solid).put(r.get("species"), n);
+            (r.get("phase").equals("gas") ? gas : solid).put(r.get("data_id"), n);
+            assertEquals(PhaseNames.display(r.get("data_id")), r.get("species"));
         }
         assertEquals(c.present(), new TreeSet<>(solid.keySet()), "condensed phases present");
         int compared = 0;

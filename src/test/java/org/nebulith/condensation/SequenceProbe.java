@@ -38,7 +38,7 @@ final class SequenceProbe {
         return true;
     }
 
-    /** @return mass [g] of the named phases at the step (reacting plus isolated) */
+    /** @return mass [g] of the named phases at the step (reacting plus withdrawn) */
     static double mass(SequenceStep s, List<String> phases) {
         ChemicalSystem sys = s.result().system();
         double m = 0;

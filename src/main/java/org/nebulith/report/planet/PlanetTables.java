@@ -17,6 +17,7 @@ import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
 import org.nebulith.report.FormulaText;
 import org.nebulith.report.Table;
+import org.nebulith.thermo.PhaseNames;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;
 
@@ -124,22 +125,56 @@ public final class PlanetTables {
 
     /**
      * @param planets the zone planets
-     * @return {@code zone-phases.csv}: what each zone collected, phase by phase
+     * @return {@code zone-phases.csv}: what each zone collected, phase by phase, under display names
+     *         ({@link PhaseNames}); data pieces of one phase are summed into one row, their ids joined
+     *         by {@code +} in {@code data_id}
      */
     public static Table zonePhases(List<ZonePlanet> planets) {
         Table t = Table.withColumns("zone-phases.csv", "zone", "phase", "member", "species", "moles", "mass_g",
-                "wt_pct_of_solids", "reservoir");
+                "wt_pct_of_solids", "reservoir", "data_id");
         for (ZonePlanet zp : planets) {
             ZoneInventory inv = zp.inventory();
             double total = zp.planet().hasSolids() ? zp.planet().require().bulk().massGrams() : 0;
+            Map<String, PhaseRow> rows = new LinkedHashMap<>();
             for (var p : org.nebulith.planet.PlanetFormation.condensedPhases(inv)) {
                 String[] parts = p.name().split(":", 2);
-                double mass = p.massGrams();
-                t.row(inv.zone().name(), parts[0], parts.length > 1 ? parts[1] : parts[0], FormulaText.conventional(p.formula()),
-                        p.moles(), mass, total > 0 ? 100 * mass / total : null, p.kind().name().toLowerCase(java.util.Locale.ROOT));
+                String phase = PhaseNames.display(parts[0]);
+                String member = parts.length > 1 ? PhaseNames.display(parts[1]) : phase;
+                String kind = p.kind().name().toLowerCase(java.util.Locale.ROOT);
+                String key = phase + "|" + member + "|" + FormulaText.conventional(p.formula()) + "|" + kind;
+                rows.computeIfAbsent(key, k -> new PhaseRow(phase, member, FormulaText.conventional(p.formula()), kind))
+                        .add(parts[0], p.moles(), p.massGrams());
+            }
+            for (PhaseRow r : rows.values()) {
+                t.row(inv.zone().name(), r.phase, r.member, r.species, r.moles, r.mass,
+                        total > 0 ? 100 * r.mass / total : null, r.kind, PhaseNames.dataIdCell(r.ids));
             }
         }
         return t;
+    }
+
+    /** One row of zone-phases.csv while its pieces are summed. */
+    private static final class PhaseRow {
+        private final String phase;
+        private final String member;
+        private final String species;
+        private final String kind;
+        private final java.util.Set<String> ids = new java.util.LinkedHashSet<>();
+        private double moles;
+        private double mass;
+
+        PhaseRow(String phase, String member, String species, String kind) {
+            this.phase = phase;
+            this.member = member;
+            this.species = species;
+            this.kind = kind;
+        }
+
+        void add(String id, double n, double grams) {
+            ids.add(id);
+            moles += n;
+            mass += grams;
+        }
     }
 
     /**
@@ -163,12 +198,14 @@ public final class PlanetTables {
         return Double.isFinite(v) ? v : null;
     }
 
-    /** @param l a local state @return its condensed phases, ';'-separated */
+    /** @param l a local state @return its condensed phases under display names, ';'-separated */
     static String phases(LocalCondensation.Local l) {
-        StringJoiner j = new StringJoiner(";");
+        java.util.Set<String> names = new java.util.LinkedHashSet<>();
         for (String n : l.result().presentPhaseNames()) {
-            j.add(n);
+            names.add(PhaseNames.display(n));
         }
+        StringJoiner j = new StringJoiner(";");
+        names.forEach(j::add);
         if (l.iceMoles() > 0) {
             j.add("water ice");
         }
@@ -183,7 +220,7 @@ public final class PlanetTables {
         Map<String, Double> out = new LinkedHashMap<>();
         for (LocalCondensation.Local l : scan) {
             for (String n : phases(l).split(";")) {
-                String key = n.startsWith("FeS(") ? "troilite" : n;
+                String key = n;
                 if (!key.isEmpty() && (key.equals("metal") || key.equals("olivine") || key.equals("orthopyroxene")
                         || key.equals("troilite") || key.equals("water ice"))) {
                     out.putIfAbsent(key, l.state().rAU());

@@ -76,7 +76,7 @@ public final class SequenceCharts {
         if (pressureNote != null && !pressureNote.isBlank()) {
             n.add(pressureNote);
         }
-        n.add(seq.settings().isFractional() ? "removal fraction " + Decimal.format(seq.settings().isolation())
+        n.add(seq.settings().isFractional() ? "removal fraction " + Decimal.format(seq.settings().removalFraction())
                 : "equilibrium condensation");
         return n;
     }

@@ -64,7 +64,7 @@ public final class SequenceNotes {
         b.append("- Composition: ").append(String.join(" ", c.composition())).append('\n');
         b.append("- Amounts in sequence.csv: moles of formula units (as each species is written) per 1e6 ")
                 .append(tables.normalisingElement().symbol()).append(" atoms of the input")
-                .append(s.isFractional() ? "; isolated_ columns hold the solids removed from reaction so far" : "")
+                .append(s.isFractional() ? "; withdrawn_ columns hold the solids removed from reaction so far" : "")
                 .append('\n');
         appendChecks(b, seq);
         appendTemperatures(b, seq);
@@ -91,10 +91,10 @@ public final class SequenceNotes {
 
     private static String mode(SequenceSettings s) {
         if (!s.isFractional()) {
-            return "equilibrium (isolation 0: all condensates keep reacting with the gas)";
+            return "equilibrium (removal fraction 0: all condensates keep reacting with the gas)";
         }
-        return "isolation " + num(s.isolation()) + " (that fraction of the solids condensed in each step is removed "
-                + "from further reaction" + (s.isolation() == 1 ? "; fully fractional condensation" : "") + ")";
+        return "removal fraction " + num(s.removalFraction()) + " (that fraction of each step's new condensate is withdrawn "
+                + "from further reaction" + (s.removalFraction() == 1 ? "; fully fractional condensation" : "") + ")";
     }
 
     private static void appendChecks(StringBuilder b, CondensationSequence seq) {
@@ -131,7 +131,7 @@ public final class SequenceNotes {
             }
             b.append("| ").append(ec.element().symbol()).append(" | ")
                     .append(ec.t50K().isPresent() ? String.format(Locale.ROOT, "%.1f", ec.t50K().getAsDouble()) : "not reached")
-                    .append(" | ").append(ec.hostPhase().isEmpty() ? "" : ec.hostPhase()).append(" | ")
+                    .append(" | ").append(ec.hostPhase().isEmpty() ? "" : org.nebulith.thermo.PhaseNames.display(ec.hostPhase())).append(" | ")
                     .append(String.format(Locale.ROOT, "%.1f", ec.onsetK().getAsDouble())).append(" |\n");
         }
     }

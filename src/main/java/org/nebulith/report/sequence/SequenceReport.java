@@ -45,7 +45,7 @@ public final class SequenceReport {
                              SequenceCharts.Charts charts, Meta meta) {
         Report report = new Report("Nebulith condensation sequence", "nebulith sequence", meta.version(), meta.started());
         String mode = seq.settings().isFractional()
-                ? "removal fraction " + Decimal.format(seq.settings().isolation()) + " (newly condensed solids removed at each step)"
+                ? "removal fraction " + Decimal.format(seq.settings().removalFraction()) + " (that fraction of each step's new condensate withdrawn from further reaction)"
                 : "equilibrium condensation (all condensates keep reacting)";
         report.section("Scenario")
                 .paragraph("Composition: " + meta.composition() + ".")

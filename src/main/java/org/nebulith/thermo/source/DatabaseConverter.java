@@ -205,7 +205,7 @@ public final class DatabaseConverter {
             }
             String row = NASA_FILE + ":" + e.intervalLines().get(i) + (via == null ? "" : " " + e.name() + " via " + via)
                     + note;
-            w.row(id, state, f.notation(), "NASA-Glenn-2002", row, role, variant, "nasa9",
+            w.row(id, state, f.notation(), SourceKeys.NASA, row, role, variant, "nasa9",
                     Double.toString(iv.tLowK()), Double.toString(iv.tHighK()), p.toString());
         }
     }

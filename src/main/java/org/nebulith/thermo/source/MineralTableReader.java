@@ -25,15 +25,15 @@ import org.nebulith.thermo.mineral.MineralForm;
 final class MineralTableReader {
     /** Source column prefix to (source key, variant tag). */
     private static final String[][] SOURCES = {
-        {"Holland & Powell 2011", "HP2011-ds62", "ds62"},
+        {"Holland & Powell 2011", "HollandPowell2011", "ds62"},
         {"Berman 1988", "Berman1988", "B88"},
-        {"Hallstedt 1990", "Hallstedt1990-ds62", "Hallstedt1990"},
+        {"Hallstedt 1990", "Hallstedt1990", "Hallstedt1990"},
         {"Geiger", "Geiger1988", "Geiger1988"},
-        {"Cemdata18", "Cemdata18", "Cemdata18"},
-        {"MELTS", "MELTS-GS1995", "MELTS"},
-        {"Zhu & Sverjensky 1992", "ZS92", "ZS92"},
-        {"Robie & Hemingway 1995", "RH95", "RH95"},
-        {"NASA Glenn", "NASA-Glenn-2002", "NASA"},
+        {"Cemdata18", "Lothenbach2019", "Cemdata18"},
+        {"MELTS", "GhiorsoSack1995", "GS1995"},
+        {"Zhu & Sverjensky 1992", "ZhuSverjensky1992", "ZS92"},
+        {"Robie & Hemingway 1995", "RobieHemingway1995", "RH95"},
+        {"NASA Glenn", SourceKeys.NASA, "NASA"},
     };
 
     /** Names that the table spells differently for the same mineral (B88 K-feldspar is the sanidine alternative). */

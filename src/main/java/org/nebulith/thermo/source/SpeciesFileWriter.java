@@ -40,22 +40,21 @@ final class SpeciesFileWriter {
         }
         comment("");
         String[][] sources = {
-            {"NASA-Glenn-2002", "McBride B.J., Zehe M.J. & Gordon S. (2002) NASA Glenn Coefficients for Calculating"
-                + " Thermodynamic Properties of Individual Species, NASA TP-2002-211556 (file thermo.inp of the Debian"
-                + " package rocketcea 1.1.18+dfsg-3)"},
-            {"HP2011-ds62", "Holland T.J.B. & Powell R. (2011) J. Metamorphic Geol. 29, 333-383, data set tc-ds62 of"
-                + " 6 Feb 2012 (Perple_X transcription hp62ver.dat); Bragg-Williams terms after Holland & Powell (1996)"
-                + " Am. Mineral. 81, 1413"},
-            {"Berman1988", "Berman R.G. (1988) J. Petrol. 29, 445-522 (as tabulated in CHNOSZ Ber88_1988.csv)"},
-            {"ZS92", "Zhu C. & Sverjensky D.A. (1992) Geochim. Cosmochim. Acta 56, 3435-3467 (Berman form, CHNOSZ ZS92_1992.csv)"},
-            {"RH95", "Robie R.A. & Hemingway B.S. (1995) USGS Bulletin 2131, doi:10.3133/b2131 (CHNOSZ OBIGT inorganic_cr.csv)"},
-            {"Cemdata18", "Lothenbach B. et al. (2019) Cem. Concr. Res. 115, 472-506, Cemdata18 (ThermoFun JSON)"},
-            {"Hallstedt1990-ds62", "Hallstedt B. (1990) J. Am. Ceram. Soc. 73, 15-23, doi:10.1111/j.1151-2916.1990.tb05083.x,"
-                + " Gibbs energy of formation from CaO and Al2O3 added to the ds62 lime and corundum (HP2011-ds62)"},
+            {SourceKeys.NASA, "McBride B.J., Zehe M.J. & Gordon S. (2002) NASA Glenn Coefficients for Calculating"
+                + " Thermodynamic Properties of Individual Species, NASA TP-2002-211556"},
+            {"HollandPowell2011", "Holland T.J.B. & Powell R. (2011) J. Metamorphic Geol. 29, 333-383, data set ds62"
+                + " (tc-ds62 of 6 Feb 2012); Bragg-Williams terms after Holland & Powell (1996) Am. Mineral. 81, 1413"},
+            {"Berman1988", "Berman R.G. (1988) J. Petrol. 29, 445-522"},
+            {"ZhuSverjensky1992", "Zhu C. & Sverjensky D.A. (1992) Geochim. Cosmochim. Acta 56, 3435-3467 (Berman form)"},
+            {"RobieHemingway1995", "Robie R.A. & Hemingway B.S. (1995) USGS Bulletin 2131, doi:10.3133/b2131"},
+            {"Lothenbach2019", "Lothenbach B. et al. (2019) Cem. Concr. Res. 115, 472-506 (data set Cemdata18)"},
+            {"Hallstedt1990", "Hallstedt B. (1990) J. Am. Ceram. Soc. 73, 15-23, doi:10.1111/j.1151-2916.1990.tb05083.x,"
+                + " Gibbs energy of formation from CaO and Al2O3 added to the ds62 lime and corundum (HollandPowell2011)"},
             {"Geiger1988", "Geiger C.A., Kleppa O.J., Mysen B.O., Lattimer J.M. & Grossman L. (1988) Geochim. Cosmochim."
                 + " Acta 52, 1729 (enthalpy of formation; heat capacity and entropy estimated as ds62 oxide sums)"},
-            {"MELTS-GS1995", "MELTS solid standard-state table, Ghiorso M.S. & Sack R.O. (1995) Contrib. Mineral. Petrol."
-                + " 119, 197 (values quoting Robie et al. 1978 USGS Bull. 1452, Zhu & Sverjensky 1992, Southard & Milner 1935)"},
+            {"GhiorsoSack1995", "Ghiorso M.S. & Sack R.O. (1995) Contrib. Mineral. Petrol. 119, 197, solid"
+                + " standard-state table (values quoting Robie et al. 1978 USGS Bull. 1452, Zhu & Sverjensky 1992,"
+                + " Southard & Milner 1935)"},
         };
         for (String[] s : sources) {
             out.append(SpeciesFileFormat.SOURCE_DECLARATION).append(s[0]).append(": ").append(s[1]).append('\n');

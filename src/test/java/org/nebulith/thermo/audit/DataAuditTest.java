@@ -38,7 +38,7 @@ class DataAuditTest {
     private static SpeciesDatabase uncorrectedFeCl3() throws IOException {
         String text = new String(SpeciesDatabase.class.getResourceAsStream("species.csv").readAllBytes(),
                 StandardCharsets.UTF_8);
-        StringBuilder b = new StringBuilder("# source NASA-Glenn-2002: NASA Glenn\n"
+        StringBuilder b = new StringBuilder("# source McBride2002: NASA Glenn\n"
                 + "id,state,formula,source,source_row,role,variant,form,T_min_K,T_max_K,params\n");
         double shift = (-1059104.288 - -253131.0) / ThermoModel.R;
         for (String line : text.split("\n")) {

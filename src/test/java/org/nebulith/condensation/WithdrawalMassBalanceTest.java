@@ -6,11 +6,11 @@ import org.junit.jupiter.api.Test;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumResult;
 
-/** Exact identity: with phi = 1 every solid is isolated, so isolated solids plus the last gas are the input. */
-class IsolationMassBalanceTest {
+/** Exact identity: with phi = 1 every solid is withdrawn, so withdrawn solids plus the last gas are the input. */
+class WithdrawalMassBalanceTest {
 
     @Test
-    void isolatedSolidsPlusRemainingGasEqualTheInput() {
+    void withdrawnSolidsPlusRemainingGasEqualTheInput() {
         // the whole default range, 2000 to 300 K
         CondensationSequence seq = SequenceRuns.run(SequenceRuns.defaultData(), SequenceRuns.protosolar(), 1e-4,
                 2000, 300, 1);
@@ -23,7 +23,7 @@ class IsolationMassBalanceTest {
             for (int k = 0; k < sys.memberNames(p).size(); k++) {
                 double[] a = sys.memberStoichiometry(p, k);
                 for (int j = 0; j < in.length; j++) {
-                    sum[j] += seq.finalIsolatedMoles(p, k) * a[j];
+                    sum[j] += seq.finalWithdrawnMoles(p, k) * a[j];
                 }
             }
         }
@@ -42,6 +42,6 @@ class IsolationMassBalanceTest {
             assertTrue(rel < 1e-10, el + ": relative imbalance " + rel);
             assertTrue(floor[j] / in[j] < 1e-10, el + ": floor added " + floor[j] / in[j]);
         }
-        assertTrue(seq.finalIsolatedMoles(sys.phaseIndex("corundum"), 0) > 0, "corundum was isolated");
+        assertTrue(seq.finalWithdrawnMoles(sys.phaseIndex("corundum"), 0) > 0, "corundum was withdrawn");
     }
 }
