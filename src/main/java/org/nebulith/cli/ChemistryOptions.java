@@ -136,6 +136,14 @@ public final class ChemistryOptions {
 
     /** @param context the run @return the composition as given, with its provenance */
     public AbundanceSet baseComposition(RunContext context) {
+        resolvedBase = resolveBase(context);
+        return resolvedBase;
+    }
+
+    /** The composition last resolved by {@link #baseComposition}, kept so that citing it registers nothing again. */
+    private AbundanceSet resolvedBase;
+
+    private AbundanceSet resolveBase(RunContext context) {
         try {
             if (elements != null) {
                 return AbundancePresets.resolve(elements);
@@ -161,7 +169,7 @@ public final class ChemistryOptions {
      * @return the composition's reference for a report: its name and the provenance of its file
      */
     public String citeComposition(RunContext context) {
-        AbundanceSet set = baseComposition(context);
+        AbundanceSet set = resolvedBase != null ? resolvedBase : baseComposition(context);
         String text = String.join(" ", set.provenance()).strip();
         return set.name() + (text.isEmpty() ? "" : ": " + text);
     }

@@ -244,8 +244,8 @@ class BadInputTest {
                 files = s.map(p -> p.getFileName().toString()).sorted().toList();
             }
         }
-        assertEquals(List.of(".nebulith-run", "failures.csv", "report.html", "summary.md", "survey-chart.png",
-                "survey-chart.svg", "survey-notes.txt", "survey-stars.csv", "survey.csv"), files);
+        assertEquals(List.of(".nebulith-run", "failures.csv", "report.html", "summary.md", "survey-chart.pdf",
+                "survey-chart.png", "survey-chart.svg", "survey-notes.txt", "survey-stars.csv", "survey.csv"), files);
         assertTrue(Files.readString(x.resolve("survey-notes.txt")).contains("seed: 8"));
         assertEquals(List.of("again"), Arrays.stream(dir.toFile().list()).filter(n -> n.contains("again")).toList(),
                 "no temporary, aside or lock file left");

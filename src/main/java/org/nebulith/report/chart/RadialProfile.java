@@ -100,9 +100,10 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         Drawing d = new Drawing(widthPt, heightPt);
         double[] r = range();
         Axis x = Axis.log(r[0], r[1], "Distance from the star r [AU]");
-        Axis t = Axis.linear(0, Math.ceil(max(visible(temperatureK, r)) * 1.05 / 100) * 100, "T [K]").ticks(4);
-        Axis p = Axis.log(decadeBelow(min(visible(pressureBar, r))), decadeAbove(max(visible(pressureBar, r))),
-                "P [bar]");
+        double[] tShown = shownOrAll(visible(temperatureK, r), temperatureK);
+        double[] pShown = shownOrAll(visible(pressureBar, r), pressureBar);
+        Axis t = Axis.linear(0, Math.max(100, Math.ceil(max(tShown) * 1.05 / 100) * 100), "T [K]").ticks(4);
+        Axis p = Axis.log(decadeBelow(min(pShown)), decadeAbove(max(pShown)), "P [bar]");
         Axis ratio = Axis.linear(0, ratioTop(), "Molar ratio in solids").ticks(4);
         Axis cond = Axis.linear(0, 1, "Heavy elements condensed").ticks(4);
         Axis weight = Axis.linear(0, 1.5, "Zone weight").ticks(2).labels(v -> v == 0 ? "0" : v == 1 ? "1" : "");
@@ -260,6 +261,11 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
             return new double[] {first, last};
         }
         return new double[] {Math.max(first, lo / 1.3), Math.min(last, hi * 1.3)};
+    }
+
+    /** @return the visible values if any is positive, else all values (a range without grid points) */
+    private static double[] shownOrAll(final double[] shown, final double[] all) {
+        return max(shown) > 0 ? shown : all;
     }
 
     /** @return the values at radii within [r0, r1], NaN elsewhere */
