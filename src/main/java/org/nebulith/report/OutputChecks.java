@@ -78,16 +78,16 @@ final class OutputChecks {
     }
 
     private static void common(final Path target, final RunInputs inputs) {
+        protectedFolder(target).ifPresent(what -> {
+            throw new InputException(Messages.OUTPUT_NOT_REPLACEABLE, null, target, "it is " + what
+                    + ", which a run never replaces", "a new folder for --out, e.g. reports/NAME");
+        });
         inputs.checkNotInput(target);
         if (Files.isSymbolicLink(target)) {
             throw new InputException(Messages.OUTPUT_UNUSABLE, null, target, Files.exists(target)
                     ? "it is a symbolic link" : "it is a dangling symbolic link",
                     "a path that is not a symbolic link (give the real path)");
         }
-        protectedFolder(target).ifPresent(what -> {
-            throw new InputException(Messages.OUTPUT_NOT_REPLACEABLE, null, target, "it is " + what
-                    + ", which a run never replaces", "a new folder for --out, e.g. reports/NAME");
-        });
     }
 
     /** @return what the path is, if it is the working folder, above it, the home folder or the root */

@@ -79,7 +79,7 @@ class SeparateProcessRunsTest {
             String refused = first.code() == 2 ? first.err() : second.err();
             assertTrue(refused.contains("another nebulith run is writing this output")
                     || refused.contains("output already exists"), refused);
-            assertTrue(Files.readString(file).startsWith("species,phase,moles,mole_fraction,state\n"));
+            assertTrue(Files.readString(file).startsWith("species,phase,moles,mole_fraction,state"));
         }
     }
 
