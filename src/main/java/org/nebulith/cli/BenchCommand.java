@@ -44,7 +44,7 @@ import picocli.CommandLine.Option;
             "  nebulith bench --warmup 1 --repeats 3 --T-min-K 1000   (quicker, less steady)",
         })
 public final class BenchCommand extends RunCommand {
-    /** Target of the engine benchmark [us per state] (issue: one core of this machine). */
+    /** Target of the engine benchmark [us per state] (on one core of this machine). */
     static final double TARGET_US_PER_STATE = 200;
     /** Target of the engine benchmark [Newton iterations per state]. */
     static final double TARGET_ITERATIONS = 3;
@@ -77,7 +77,7 @@ public final class BenchCommand extends RunCommand {
     protected int execute(final RunContext context) {
         check();
         ElementAbundances comp = AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances().perH();
-        ChemicalSystem system = SystemSpec.defaults().build(ChemistryOptions.elementsOf(comp));
+        ChemicalSystem system = SystemSpec.defaults().build(comp.elements());
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {
             totals[j] = comp.moles(system.elements().get(j));

@@ -1,37 +1,26 @@
 package org.nebulith.cli;
 
 import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.EnumSet;
-import java.util.List;
-import java.util.Optional;
-import java.util.Set;
 
+import java.util.Optional;
 import org.nebulith.composition.AbundanceFileReader;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.AbundanceSet;
 import org.nebulith.composition.CarbonToOxygen;
 import org.nebulith.composition.DustEnrichment;
 import org.nebulith.composition.ElementAbundances;
-import org.nebulith.equilibrium.SolutionModel;
-import org.nebulith.equilibrium.SolutionModels;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.thermo.DataSet;
-import org.nebulith.thermo.Element;
-import org.nebulith.thermo.SpeciesDatabase;
-import org.nebulith.thermo.SpeciesListReader;
 
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
  * The options shared by every command that builds a gas composition and a chemical system:
- * composition (preset, file or inline), dust enrichment, C/O, data set, alternative mineral rows,
- * user species, species restrictions and solutions.
+ * composition (preset, file or inline), dust enrichment, C/O, and the {@link SystemOptions} (data
+ * set, alternative mineral rows, user species, species restrictions and solutions).
  */
 public final class ChemistryOptions {
 
@@ -67,40 +56,14 @@ public final class ChemistryOptions {
             description = "Set the C/O atom ratio by changing C only.")
     private Double carbonToOxygen;
 
-    @Option(names = "--data", paramLabel = "SET", defaultValue = DataSet.DEFAULT,
-            description = "Thermodynamic data set: default, nasa, reference-pure. Default: ${DEFAULT-VALUE}.")
-    private String dataSet;
-
-    @Option(names = "--variant", paramLabel = "TAG",
-            description = "Use alternative mineral rows (B88, ds62, Cemdata18, Geiger1988, RH95) or a documented "
-                    + "alternative (troilite-ds62: ds62 troilite instead of the NASA FeS entries; AlOH-JANAF: AlOH "
-                    + "gas at the JANAF-quoted -180 kJ/mol, from memory) for a sensitivity run; repeatable.")
-    private List<String> variants = new ArrayList<>();
-
-    @Option(names = "--species-file", paramLabel = "FILE",
-            description = "Add species from a file in the project's species format.")
-    private Path speciesFile;
-
-    @Option(names = "--gases", paramLabel = "FILE", description = "Use only the gas ids listed in FILE, one per line.")
-    private Path gasList;
-
-    @Option(names = "--condensed", paramLabel = "FILE",
-            description = "Use only the condensed ids listed in FILE, one per line.")
-    private Path condensedList;
+    @Mixin
+    private SystemOptions system = new SystemOptions();
 
     @Option(names = "--ci-reference", paramLabel = "NAME",
             description = "CI-chondrite composition of the dust (--dust-enrichment) and of the comparisons: "
                     + "lodders-palme-gail2009 (Lodders, Palme & Gail 2009; the only CI table here with C, N, O, Cl) "
                     + "or palme-oneill2014 (Palme & O'Neill 2014; no C, N, Cl). Default: ${DEFAULT-VALUE}.")
     private String ciReference = org.nebulith.composition.CiReference.DEFAULT.optionName();
-
-    @Option(names = "--solutions", paramLabel = "LIST",
-            description = "Ideal solutions: 'all' (metal, olivine, orthopyroxene, melilite, plagioclase, spinel), "
-                    + "'none' (pure phases) or a comma list of those and of the alternative forms olivine-fe-mg "
-                    + "(without tephroite), orthopyroxene-mn (with Mn2Si2O6), plagioclase (anorthite-albite, "
-                    + "sanidine pure), spinel-hercynite (without chromite). Default: all for the default "
-                    + "data set, none otherwise.")
-    private String solutions;
 
     /**
      * @param context the run (inputs are registered with it)
@@ -161,6 +124,11 @@ public final class ChemistryOptions {
         } catch (IOException e) {
             throw InputException.atOption("--composition", compositionArg(), "cannot be read (" + e.getMessage() + ")",
                     "a preset name, a readable abundance file, or Element=amount pairs");
+        } catch (IllegalArgumentException e) {
+            throw InputException.atOption(elements != null ? "--elements" : "--composition",
+                    elements != null ? elements : compositionArg(), e.getMessage(),
+                    "a preset (" + String.join(", ", AbundancePresets.NAMES) + "), an abundance file, or "
+                            + "Element=amount pairs such as H=1,O=4.9e-4");
         }
     }
 
@@ -209,63 +177,10 @@ public final class ChemistryOptions {
     /**
      * @param context the run (list and species files are registered as inputs)
      * @return the system specification
+     * @throws IOException if a list or species file cannot be read
      */
     public SystemSpec systemSpec(RunContext context) throws IOException {
-        if (!DataSet.NAMES.contains(dataSet)) {
-            throw InputException.atOption("--data", dataSet, "unknown data set", String.join(", ", DataSet.NAMES));
-        }
-        DataSet ds = DataSet.named(dataSet);
-        Optional<SpeciesDatabase> user = Optional.empty();
-        if (speciesFile != null) {
-            Path f = context.input(speciesFile, "species file");
-            user = Optional.of(SpeciesDatabase.load(f.toString(), () -> Files.newInputStream(f)));
-            ds = ds.plus(user.get());
-        }
-        Optional<Set<String>> gases = readList(context, gasList, ds, true);
-        Optional<Set<String>> condensed = readList(context, condensedList, ds, false);
-        return new SystemSpec(dataSet, variants, user, gases, condensed, solutionModels());
-    }
-
-    private static Optional<Set<String>> readList(RunContext context, Path file, DataSet ds, boolean gas)
-            throws IOException {
-        if (file == null) {
-            return Optional.empty();
-        }
-        Path f = context.input(file, gas ? "gas list" : "condensed list");
-        try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
-            return Optional.of(SpeciesListReader.read(r, file.toString(), ds, gas));
-        }
-    }
-
-    private List<SolutionModel> solutionModels() {
-        String s = solutions != null ? solutions : (DataSet.DEFAULT.equals(dataSet) ? "all" : "none");
-        if (s.equalsIgnoreCase("all")) {
-            return SolutionModels.all();
-        }
-        if (s.equalsIgnoreCase("none")) {
-            return List.of();
-        }
-        List<SolutionModel> out = new ArrayList<>();
-        Set<String> members = new java.util.HashSet<>();
-        for (String name : s.split(",")) {
-            SolutionModel m;
-            try {
-                m = SolutionModels.byName(name.trim());
-            } catch (IllegalArgumentException e) {
-                throw InputException.atOption("--solutions", s, "unknown solution '" + name.trim() + "'",
-                        "all, none, or a comma list of " + SolutionModels.offeredNames());
-            }
-            for (SolutionModel.EndMember em : m.endMembers()) {
-                for (String id : em.speciesIds()) {
-                    if (!members.add(id)) {
-                        throw InputException.atOption("--solutions", s, "species '" + id + "' would be in two solutions",
-                                "at most one of the forms of each solution (e.g. olivine or olivine-fe-mg)");
-                    }
-                }
-            }
-            out.add(m);
-        }
-        return out;
+        return system.systemSpec(context);
     }
 
     /**
@@ -279,16 +194,5 @@ public final class ChemistryOptions {
             throw InputException.atOption("--ci-reference", ciReference, "unknown CI reference",
                     org.nebulith.composition.CiReference.accepted());
         }
-    }
-
-    /** @param comp a composition @return its elements with positive amounts that Nebulith tracks */
-    public static Set<Element> elementsOf(ElementAbundances comp) {
-        Set<Element> e = EnumSet.noneOf(Element.class);
-        for (Element el : comp.elements()) {
-            if (comp.moles(el) > 0) {
-                e.add(el);
-            }
-        }
-        return e;
     }
 }

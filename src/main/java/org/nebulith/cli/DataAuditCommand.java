@@ -4,7 +4,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.nebulith.errors.InputException;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.thermo.audit.AuditCommandSupport;
 import org.nebulith.thermo.audit.AuditReport;

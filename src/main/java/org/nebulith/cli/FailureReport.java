@@ -12,31 +12,26 @@ import org.nebulith.errors.Messages;
 import org.nebulith.errors.InternalException;
 import org.nebulith.errors.NebulithException;
 import org.nebulith.errors.NumericalException;
-import org.nebulith.report.OutputWriteException;
+import org.nebulith.files.OutputWriteException;
 
 import picocli.CommandLine;
 
 /**
  * Maps a failure to an exit code and one line of text. The mapping, in order:
  * <ol>
- * <li>an {@link InputException} anywhere in the cause chain: 2; a {@link NumericalException}: 3;
+ * <li>an {@link InputException} anywhere in the cause chain: 2 (bad input); a
+ *     {@link NumericalException} (the solver's {@code ConvergenceException} among them): 3;
  *     an {@link InternalException}: 1;</li>
  * <li>a picocli {@link CommandLine.ParameterException} (unknown option, bad value): 2;</li>
- * <li>an exception whose class, or a superclass, is named in {@link #INPUT_ERROR_CLASSES}
- *     (by name, so that data-reader exceptions added later map without a change here): 2;</li>
- * <li>any other {@link IllegalArgumentException} (until every reader throws
- *     {@link InputException}, readers report malformed files this way): 2;</li>
  * <li>a missing or unreadable file ({@link NoSuchFileException}, {@link AccessDeniedException},
  *     {@link FileNotFoundException}) in the cause chain: 2;</li>
- * <li>other I/O failures: 1; anything else: 1, reported as an internal error.</li>
+ * <li>other I/O failures: 1; anything else (an {@link IllegalArgumentException} from a library
+ *     precondition among them: the command line should have checked its input first): 1, reported
+ *     as an internal error with the hint to report it.</li>
  * </ol>
  * The stack trace is printed only with {@code --verbose}.
  */
 final class FailureReport {
-
-    /** Exception classes (by fully qualified name) that mean a malformed data file. */
-    static final java.util.Set<String> INPUT_ERROR_CLASSES = java.util.Set.of(
-            "org.nebulith.thermo.DataFormatException");
 
     /**
      * @param exitCode the exit code
@@ -101,14 +96,6 @@ final class FailureReport {
             return new Outcome(ExitCodes.BAD_INPUT, failure.getMessage());
         }
         for (Throwable t = failure; t != null; t = t.getCause()) {
-            if (t instanceof org.nebulith.equilibrium.ConvergenceException) {
-                return new Outcome(ExitCodes.NUMERICAL, t.getMessage());
-            }
-        }
-        for (Throwable t = failure; t != null; t = t.getCause()) {
-            if (isNamedInputError(t.getClass()) || t instanceof IllegalArgumentException) {
-                return new Outcome(ExitCodes.BAD_INPUT, t.getMessage());
-            }
             if (t instanceof NoSuchFileException || t instanceof AccessDeniedException
                     || t instanceof FileNotFoundException) {
                 return new Outcome(ExitCodes.BAD_INPUT, "cannot read " + t.getMessage());
@@ -147,14 +134,5 @@ final class FailureReport {
             return ExitCodes.NUMERICAL;
         }
         return ExitCodes.FAILURE;
-    }
-
-    private static boolean isNamedInputError(final Class<?> type) {
-        for (Class<?> c = type; c != null; c = c.getSuperclass()) {
-            if (INPUT_ERROR_CLASSES.contains(c.getName())) {
-                return true;
-            }
-        }
-        return false;
     }
 }

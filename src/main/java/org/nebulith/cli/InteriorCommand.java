@@ -19,7 +19,7 @@ import org.nebulith.planet.interior.MantleComposition;
 import org.nebulith.planet.interior.Structure;
 import org.nebulith.planet.interior.StructureException;
 import org.nebulith.planet.interior.StructureSolver;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.interior.InteriorReportWriter;
 
@@ -179,7 +179,7 @@ public final class InteriorCommand extends RunCommand {
                 String[] f = text.split(",", -1);
                 if (line == 1) {
                     if (!text.startsWith("zone,quantity,value,unit")) {
-                        throw InputException.atField(bulk, 1, "(header)", "not a bulk-composition.csv",
+                        throw InputException.atField(bulk, 1, "(header)", text, "not a bulk-composition.csv",
                                 "zone,quantity,value,unit");
                     }
                     continue;
@@ -188,7 +188,7 @@ public final class InteriorCommand extends RunCommand {
                     try {
                         values.put(f[1], Double.parseDouble(f[2]));
                     } catch (NumberFormatException e) {
-                        throw InputException.atField(bulk, line, "value", "not a number", "a number");
+                        throw InputException.atField(bulk, line, "value", f[2], "not a number", "a number");
                     }
                 }
             }

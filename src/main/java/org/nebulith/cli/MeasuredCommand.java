@@ -26,7 +26,7 @@ import org.nebulith.planet.interior.InteriorModel;
 import org.nebulith.planet.interior.MantleComposition;
 import org.nebulith.planet.interior.StructureException;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.Curve;
 import org.nebulith.report.interior.InteriorReportWriter;
 import org.nebulith.survey.CatalogueProblem;
@@ -198,12 +198,12 @@ public final class MeasuredCommand extends RunCommand {
             while ((row = reader.next()) != null) {
                 if (!row.problems().isEmpty()) {
                     CatalogueProblem q = row.problems().get(0);
-                    throw InputException.atField(catalogue, q.line(), q.column(),
+                    throw InputException.atField(catalogue, q.line(), q.column(), q.value(),
                             q.star().isEmpty() ? q.problem() : "star '" + q.star() + "': " + q.problem(), q.accepted());
                 }
                 if (stars.put(row.row().star(), row.row()) != null) {
-                    throw InputException.atField(catalogue, row.line(), "star", "star '" + row.star()
-                            + "' appears twice", "one row per star");
+                    throw InputException.atField(catalogue, row.line(), "star", row.star(),
+                            "appears twice", "one row per star");
                 }
             }
         }
@@ -212,7 +212,7 @@ public final class MeasuredCommand extends RunCommand {
 
     private void check(final MeasuredPlanet p, final Map<String, StarRow> stars, final HostStarTest test) {
         if (!stars.containsKey(p.star())) {
-            throw InputException.atField(planetsFile, p.line(), "star", "unknown star '" + p.star() + "'",
+            throw InputException.atField(planetsFile, p.line(), "star", p.star(), "unknown star",
                     "a star of " + catalogue);
         }
         double largest;
@@ -222,8 +222,8 @@ public final class MeasuredCommand extends RunCommand {
             throw new NumericalException(Messages.STRUCTURE_FAILURE, e, e.getMessage());
         }
         if (p.radius() > largest) {
-            throw InputException.atField(planetsFile, p.line(), "radius_Rearth", String.format(Locale.ROOT,
-                    "radius %s R_earth is larger than any rocky body of %s M_earth allows (%.3f R_earth for 75 %% water"
+            throw InputException.atField(planetsFile, p.line(), "radius_Rearth", p.radius(),
+                    String.format(Locale.ROOT, "radius %s R_earth is larger than any rocky body of %s M_earth allows (%.3f R_earth for 75 %% water"
                             + " on rock); such a planet needs a gas envelope", p.radius(), p.mass(), largest),
                     String.format(Locale.ROOT, "a radius up to %.3f R_earth", largest));
         }

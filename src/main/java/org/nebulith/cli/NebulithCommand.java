@@ -30,6 +30,7 @@ import picocli.CommandLine.Spec;
             MeasuredCommand.class,
             SurveyBenchCommand.class,
             BenchCommand.class,
+            BenchRobustCommand.class,
             PresetsCommand.class,
             DataAuditCommand.class,
             CompletionCommand.class,

@@ -31,18 +31,16 @@ import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.planet.CoreOptions;
 import org.nebulith.planet.FormationSettings;
 import org.nebulith.planet.PlanetFormation;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.html.Report;
 import org.nebulith.report.planet.PlanetReportWriter;
 import org.nebulith.thermo.SpeciesDatabase;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
-import org.nebulith.zones.RadialScan;
 import org.nebulith.zones.ZoneCondensation;
 import org.nebulith.zones.ZoneFileReader;
 
@@ -117,21 +115,8 @@ public final class PlanetCommand extends RunCommand {
             description = "Seed of the --abundance-errors Monte Carlo. Default: ${DEFAULT-VALUE}.")
     private long seed;
 
-    @Option(names = "--sulfide-in-mantle", description = "Keep sulfides in the mantle (default: in the core).")
-    private boolean sulfideInMantle;
-
-    @Option(names = "--core-Si-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "Si in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreSi;
-
-    @Option(names = "--core-O-wt-pct", paramLabel = "X", defaultValue = "0",
-            description = "O in the core [wt%% of the core], taken from the mantle. Default: ${DEFAULT-VALUE}.")
-    private double coreO;
-
-    @Option(names = "--floor-K", paramLabel = "T", defaultValue = "300",
-            description = "Lowest equilibrium temperature [K]; colder gas keeps its rock and adds water ice. "
-                    + "Default: ${DEFAULT-VALUE}.")
-    private double floorK;
+    @Mixin
+    private PlanetOptions planet = new PlanetOptions();
 
     @Option(names = "--profile-points", paramLabel = "N", defaultValue = "160",
             description = "Radii of the radial profile. Default: ${DEFAULT-VALUE}.")
@@ -140,6 +125,7 @@ public final class PlanetCommand extends RunCommand {
     @Override
     protected int execute(final RunContext context) throws IOException {
         chemistry.defaultComposition(AbundancePresets.DEMO_STAR);
+        planet.check();
         if (profilePoints < 2 || profilePoints > MAX_PROFILE_POINTS) {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
@@ -150,6 +136,9 @@ public final class PlanetCommand extends RunCommand {
         DiskModel diskModel = readDisk(context);
         List<FeedingZone> zoneList = readZones(context, diskModel);
         ZoneFileReader.overlaps(zoneList).forEach(line -> context.info("notice: " + line));
+        DomainChecks.temperature("--floor-K", planet.floorK(), spec.species());
+        DomainChecks.disk("--disk", disk, diskModel, PlanetFormation.profileMinAU(diskModel, zoneList),
+                PlanetFormation.profileMaxAU(diskModel, zoneList), planet.floorK(), spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
             return compute(context, run, gas, spec, diskModel, zoneList, errors);
         }
@@ -157,22 +146,15 @@ public final class PlanetCommand extends RunCommand {
 
     private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
                         List<FeedingZone> zoneList, Map<Element, Double> errors) {
-        FormationSettings settings = new FormationSettings(spec, ZoneCondensation.defaults(), floorK,
-                new CoreOptions(!sulfideInMantle, coreSi, coreO));
+        FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
-        List<ZonePlanet> planets = new ArrayList<>();
-        LocalCondensation local = formation.localCondensation(gas);
+        List<ZonePlanet> planets;
         Path done;
         String task = "planet (" + zoneList.size() + (zoneList.size() == 1 ? " zone" : " zones")
                 + ", radial profile, report)";
-        try (Progress progress = context.progress(task, zoneList.size() + 2L)) {
-            for (FeedingZone z : zoneList) {
-                planets.add(formation.zonePlanet(z, diskModel, local));
-                progress.step();
-            }
-            List<LocalCondensation.Local> scan = RadialScan.scan(diskModel, local, scanMin(diskModel, zoneList),
-                    scanMax(diskModel, zoneList), profilePoints);
-            progress.step();
+        try (Progress progress = context.progress(task, PlanetFormation.steps(zoneList, profilePoints) + 1L)) {
+            PlanetFormation.Formation result = formation.run(gas, diskModel, zoneList, profilePoints, progress);
+            planets = result.planets();
             Map<String, double[][]> bands = errors == null ? null : HostMonteCarlo.offsets(gas, errors, diskModel,
                     zoneList, PlanetCharts.quantityNames(), errorDraws, seed);
             Map<Element, Double> t50 = hostT50(spec, gas);
@@ -180,7 +162,7 @@ public final class PlanetCommand extends RunCommand {
                     : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
                     + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "
                     + "estimate on this disk and these zones and centred on the values shown";
-            done = writeOutputs(context, run, gas, diskModel, spec, planets, scan, bands, t50, errorNote);
+            done = writeOutputs(context, run, gas, diskModel, spec, planets, result.profile(), bands, t50, errorNote);
             progress.step();
         }
         for (ZonePlanet zp : planets) {
@@ -190,7 +172,8 @@ public final class PlanetCommand extends RunCommand {
             org.nebulith.planet.ZoneNotices.of(zp).forEach(n -> context.warn("notice: " + n));
         }
         context.out().println("report: " + done.resolve("report.html"));
-        context.info("cautions: " + PlanetReportWriter.CAUTIONS.size() + " on model assumptions and data limits, in "
+        context.info("cautions: " + PlanetReportWriter.cautions(spec.describe()).size()
+                + " on model assumptions and data limits, in "
                 + done.resolve("report.html") + " (and summary.md)");
         return ExitCodes.OK;
     }
@@ -206,7 +189,7 @@ public final class PlanetCommand extends RunCommand {
         extra.add(new Report.Citation("Zeng2016", "Zeng L., Sasselov D.D. & Jacobsen S.B. (2016) ApJ 819, 127: "
                 + "mass-radius relation of rocky planets (radius_Rearth_Zeng2016 in bulk-composition.csv)"));
         List<Report.Citation> sources = SourceList.of(chemistry.citeComposition(context), spec.species(),
-                ChemistryOptions.elementsOf(gas), SpeciesDatabase.bundled().sources(), extra);
+                gas.elements(), SpeciesDatabase.bundled().sources(), extra);
         PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                 "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
                 gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote,
@@ -220,7 +203,7 @@ public final class PlanetCommand extends RunCommand {
      * condensation on a 5 K grid bisected to 0.5 K, for the devolatilisation pattern.
      */
     private static Map<Element, Double> hostT50(SystemSpec spec, ElementAbundances gas) {
-        ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(gas));
+        ChemicalSystem system = spec.build(gas.elements());
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {
             totals[j] = gas.moles(system.elements().get(j));
@@ -278,6 +261,10 @@ public final class PlanetCommand extends RunCommand {
         if (Files.exists(p)) {
             context.input(p, "disk");
         }
+        if (!DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(p)) {
+            throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
+                    String.join(", ", DiskPresets.NAMES) + ", or a disk file");
+        }
         return DiskPresets.resolve(disk);
     }
 
@@ -292,21 +279,5 @@ public final class PlanetCommand extends RunCommand {
         try (Reader r = Files.newBufferedReader(f, StandardCharsets.UTF_8)) {
             return ZoneFileReader.read(r, zones, diskModel);
         }
-    }
-
-    private static double scanMin(DiskModel d, List<FeedingZone> zs) {
-        double lo = Double.POSITIVE_INFINITY;
-        for (FeedingZone z : zs) {
-            lo = Math.min(lo, z.rInnerAU());
-        }
-        return Math.max(d.rMinAU(), lo / 2);
-    }
-
-    private static double scanMax(DiskModel d, List<FeedingZone> zs) {
-        double hi = 0;
-        for (FeedingZone z : zs) {
-            hi = Math.max(hi, z.rOuterAU());
-        }
-        return Math.min(d.rMaxAU(), hi * 2);
     }
 }

@@ -11,17 +11,15 @@ import java.util.Optional;
 
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.equilibrium.ChemicalSystem;
-import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.equilibrium.EquilibriumProblem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.PhaseKind;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.errors.InputException;
-import org.nebulith.errors.Messages;
-import org.nebulith.errors.NumericalException;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.report.Cautions;
+import org.nebulith.files.CsvTableWriter;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -76,11 +74,13 @@ public final class PointCommand extends RunCommand {
         checkState();
         ElementAbundances comp = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
+        DomainChecks.temperature("--T-K", temperatureK, spec.species());
+        DomainChecks.pressure("--P-bar", pressureBar);
         Optional<Path> out = context.outOption();
         try (AtomicOutput.OutputFile file = context.reserveOutputFile(String.join(",", PointTable.COLUMNS)).orElse(null)) {
-            ChemicalSystem system = spec.build(ChemistryOptions.elementsOf(comp));
+            ChemicalSystem system = spec.build(comp.elements());
             EquilibriumProblem problem = EquilibriumProblem.of(system, temperatureK, pressureBar, comp.asMap());
-            EquilibriumResult result = solve(problem, comp);
+            EquilibriumResult result = solve(problem);
             String csv = csv(result);
             if (file != null) {
                 file.write(o -> o.write(csv.getBytes(StandardCharsets.UTF_8)));
@@ -103,15 +103,8 @@ public final class PointCommand extends RunCommand {
         }
     }
 
-    private static EquilibriumResult solve(final EquilibriumProblem problem, final ElementAbundances comp) {
-        try {
-            return new EquilibriumSolver().solve(problem);
-        } catch (ConvergenceException e) {
-            String prefix = "no converged equilibrium at " + problem.describe() + ": ";
-            String what = e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length()) : e.getMessage();
-            throw new NumericalException(Messages.NUMERICAL_FAILURE, e, "no converged equilibrium (" + what + ")",
-                    problem.temperatureK(), problem.pressureBar(), comp.toInline());
-        }
+    private static EquilibriumResult solve(final EquilibriumProblem problem) {
+        return new EquilibriumSolver().solve(problem);
     }
 
     private static String csv(final EquilibriumResult result) {
@@ -139,7 +132,7 @@ public final class PointCommand extends RunCommand {
             solutions += r.system().phaseKind(p) == PhaseKind.SOLUTION ? 1 : 0;
         }
         if (solutions > 0) {
-            context.info("caution: solutions are ideal (no excess Gibbs energy); silicate liquids are not modelled");
+            context.info(Cautions.point());
         }
         out.ifPresent(f -> context.info("wrote " + f));
     }

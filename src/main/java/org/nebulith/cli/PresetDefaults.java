@@ -94,7 +94,7 @@ final class PresetDefaults implements CommandLine.IDefaultValueProvider {
                 || ex.getValue() == null && ex.getMessage() != null && ex.getMessage().contains(entry.get().value()))) {
             return ex;
         }
-        return InputException.atField(preset.file(), entry.get().line(), key, ex.getMessage(),
+        return InputException.atField(preset.file(), entry.get().line(), key, entry.get().value(), ex.getMessage(),
                 "see 'nebulith " + ex.getCommandLine().getCommandName() + " --help'");
     }
 }

@@ -117,7 +117,7 @@ public final class PresetFile {
             Entry entry = parseLine(file, number, text);
             Entry earlier = entries.putIfAbsent(entry.key(), entry);
             if (earlier != null) {
-                throw InputException.atField(file, number, entry.key(), "repeated (first given on line "
+                throw InputException.atField(file, number, entry.key(), entry.value(), "repeated (first given on line "
                         + earlier.line() + ")", "each key once");
             }
         }
@@ -127,16 +127,16 @@ public final class PresetFile {
     private static Entry parseLine(final Path file, final int number, final String text) {
         int eq = text.indexOf('=');
         if (eq < 0) {
-            throw InputException.atField(file, number, text, "no '=' on the line", "key = value, or # comment");
+            throw InputException.atField(file, number, "line", text, "no '=' on the line", "key = value, or # comment");
         }
         String key = text.substring(0, eq).strip();
         String value = text.substring(eq + 1).strip();
         if (!KEY.matcher(key).matches()) {
-            throw InputException.atField(file, number, key, "not a valid key",
+            throw InputException.atField(file, number, "key", key, "not a valid key",
                     "an option name without the leading --, e.g. T-max-K");
         }
         if (value.isEmpty()) {
-            throw InputException.atField(file, number, key, "empty value", "a value after '='");
+            throw InputException.atField(file, number, key, value, "empty value", "a value after '='");
         }
         return new Entry(key, value, number);
     }
@@ -176,16 +176,16 @@ public final class PresetFile {
         for (Entry entry : entries.values()) {
             if (COMMAND.equals(entry.key())) {
                 if (!entry.value().equals(command)) {
-                    throw InputException.atField(file, entry.line(), COMMAND, "this preset is for the '"
-                            + entry.value() + "' command, not '" + command + "'", "nebulith " + entry.value()
+                    throw InputException.atField(file, entry.line(), COMMAND, entry.value(), "this preset is for the '" + entry.value()
+                            + "' command, not '" + command + "'", "nebulith " + entry.value()
                             + " --preset ...");
                 }
             } else if (RetiredOptions.byKey(entry.key()).isPresent() && !accepted.contains(entry.key())) {
                 RetiredOptions.Renamed r = RetiredOptions.byKey(entry.key()).get();
-                throw InputException.atField(file, entry.line(), entry.key(), "renamed", r.now().substring(2)
+                throw InputException.atField(file, entry.line(), entry.key(), entry.value(), "renamed", r.now().substring(2)
                         + " (" + r.meaning() + ")");
             } else if (!DESCRIPTION.equals(entry.key()) && !accepted.contains(entry.key())) {
-                throw InputException.atField(file, entry.line(), entry.key(), "not a setting of the '" + command
+                throw InputException.atField(file, entry.line(), entry.key(), entry.value(), "not a setting of the '" + command
                         + "' command", String.join(", ", accepted));
             }
         }

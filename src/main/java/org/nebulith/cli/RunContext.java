@@ -14,10 +14,11 @@ import java.util.stream.Collectors;
 
 import org.nebulith.progress.Progress;
 import org.nebulith.progress.ProgressMode;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.RunMarker;
+import org.nebulith.progress.terminal.ProgressDisplays;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.RunMarker;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Model.CommandSpec;
@@ -123,20 +124,16 @@ public final class RunContext {
     }
 
     /**
-     * The standing cautions of a run: every one as a warning, or with --quiet one line pointing to
-     * where they are written.
+     * The standing cautions of a run are written in its report; the terminal gets one line pointing
+     * to them (nothing with --quiet).
      *
      * @param cautions the cautions
      * @param where    the report that lists them
      */
     public void cautions(final List<String> cautions, final Path where) {
-        if (verbosity == Verbosity.QUIET) {
-            if (!cautions.isEmpty()) {
-                err.println("warning: " + cautions.size() + " cautions apply to these results; see " + where);
-            }
-            return;
+        if (!cautions.isEmpty()) {
+            info("cautions: " + cautions.size() + " on model assumptions and data limits, in " + where);
         }
-        cautions.forEach(this::warn);
     }
 
     /**
@@ -145,7 +142,7 @@ public final class RunContext {
      * @return a bar on a terminal, plain lines otherwise, nothing with --quiet
      */
     public Progress progress(final String task, final long total) {
-        return Progress.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
+        return ProgressDisplays.open(ProgressMode.choose(verbosity == Verbosity.QUIET, System.console() != null),
                 task, total, err);
     }
 

@@ -4,7 +4,7 @@ import java.nio.file.Path;
 
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
-import org.nebulith.report.AtomicOutput;
+import org.nebulith.files.AtomicOutput;
 
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;

@@ -31,7 +31,7 @@ import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.format.Decimal;
 import org.nebulith.progress.Progress;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.PhaseNames;
 
@@ -118,7 +118,8 @@ public final class SequenceCommand extends RunCommand {
         SystemSpec spec = chemistry.systemSpec(context);
         PressurePath path = pressurePath(context);
         settings(path);
-        Set<Element> elements = ChemistryOptions.elementsOf(comp);
+        checkDomain(spec, path);
+        Set<Element> elements = comp.elements();
         ChemicalSystem system = spec.build(elements);
         double[] totals = new double[system.elementCount()];
         for (int j = 0; j < totals.length; j++) {
@@ -283,6 +284,21 @@ public final class SequenceCommand extends RunCommand {
                     "0 (equilibrium) to 1 (fully fractional)");
         }
         return new SequenceSettings(path, tMaxK, tMinK, tStepK, removalFraction, 0.05);
+    }
+
+    /** The grid's temperatures and the path's pressures over the grid lie inside what the data cover. */
+    private void checkDomain(final SystemSpec spec, final PressurePath path) {
+        List<org.nebulith.thermo.Species> species = spec.species();
+        DomainChecks.temperature("--T-max-K", tMaxK, species);
+        DomainChecks.temperature("--T-min-K", tMinK, species);
+        int n = 2000;
+        for (int i = 0; i <= n; i++) {
+            double t = tMaxK - (tMaxK - tMinK) * i / n;
+            double p = path.pressureBar(t);
+            if (!org.nebulith.equilibrium.StateDomain.coversPressure(p)) {
+                DomainChecks.pressure(pathFile == null ? "--P-bar" : "--path", p);
+            }
+        }
     }
 
     private String describe(final PressurePath path) {

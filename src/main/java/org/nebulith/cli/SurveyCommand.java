@@ -5,10 +5,11 @@ import java.nio.file.Path;
 import java.util.Locale;
 
 import org.nebulith.composition.SolarReference;
+import org.nebulith.disk.DiskPresets;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.survey.EstimatorCache;
-import org.nebulith.survey.LocalSurvey;
+import org.nebulith.report.survey.LocalSurvey;
 import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.SurveyRunner;
 import org.nebulith.survey.SurveySettings;
@@ -83,6 +84,12 @@ public class SurveyCommand extends RunCommand {
             description = "Solar reference of the catalogue's [X/H]: asplund2009 (default) or lodders2003.")
     private String solarReference;
 
+    @Mixin
+    private SystemOptions system = new SystemOptions();
+
+    @Mixin
+    private PlanetOptions planet = new PlanetOptions();
+
     @Option(names = "--skip-bad", description = "Skip bad catalogue rows (listed in survey-stars.csv) instead of stopping.")
     private boolean skipBad;
 
@@ -142,9 +149,16 @@ public class SurveyCommand extends RunCommand {
                     "a number from 0 to 1");
         }
         context.input(catalogue, "catalogue");
+        disk = workingCopy(PresetCatalogue.Kind.DISK, disk);
+        zones = workingCopy(PresetCatalogue.Kind.ZONES, zones);
+        if (disk != null && !DiskPresets.NAMES.contains(disk) && !Files.isRegularFile(Path.of(disk))) {
+            throw InputException.atOption("--disk", disk, "neither a disk preset nor a file",
+                    String.join(", ", DiskPresets.NAMES) + ", or a disk file");
+        }
         registerIfFile(context, disk, "disk");
         registerIfFile(context, zones, "feeding zones");
-        SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones);
+        SurveySettings settings = new SurveySettings(draws, seed, solar(), disk, zones,
+                planet.formationOptions(system, context));
         if (resume && context.outOption().isEmpty() && !context.hasRunName()) {
             throw InputException.atOption("--resume", "", "needs the folder of the earlier run",
                     "--resume together with --out DIR or --run-name NAME of that run");
@@ -190,5 +204,19 @@ public class SurveyCommand extends RunCommand {
         if (value != null && Files.isRegularFile(Path.of(value))) {
             context.input(Path.of(value), role);
         }
+    }
+
+    /**
+     * @param kind the kind of named input
+     * @param name a preset name, a file or null
+     * @return the working folder's copy of a named preset as a file path (it wins over the built-in
+     *         copy, as for the other commands), else the value unchanged
+     */
+    private static String workingCopy(final PresetCatalogue.Kind kind, final String name) {
+        if (name == null) {
+            return null;
+        }
+        return PresetCatalogue.here().find(kind, name).filter(e -> !e.builtIn()).map(e -> e.file().toString())
+                .orElse(name);
     }
 }

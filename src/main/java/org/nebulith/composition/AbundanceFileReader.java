@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 
+import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
 import org.nebulith.format.HeaderedLines;
 import org.nebulith.thermo.Element;
@@ -33,23 +34,21 @@ public final class AbundanceFileReader {
      * @param name file or preset name for messages
      * @return the composition with its provenance
      * @throws IOException on read failure
-     * @throws AbundanceFormatException on malformed content
+     * @throws InputException on malformed content
      */
     public static AbundanceSet read(Reader in, String name) throws IOException {
         List<String> provenance = new ArrayList<>();
         EnumMap<Element, Double> amounts = new EnumMap<>(Element.class);
         AbundanceUnit[] unit = new AbundanceUnit[1];
         boolean headerSeen = HeaderedLines.read(in, HEADER, provenance,
-                (line, lineNo) -> new AbundanceFormatException(name, lineNo, "header",
-                        "expected exactly '" + HEADER + "', found '" + Messages.echo(line) + "'"),
+                (line, lineNo) -> InputException.atField(name, lineNo, "header", line, "not the header", "exactly " + HEADER),
                 (line, lineNo) -> unit[0] = readRow(line, lineNo, name, unit[0], amounts));
         if (!headerSeen || amounts.isEmpty()) {
-            throw new AbundanceFormatException(name, 0, "element",
-                    "no data rows; expected header '" + HEADER + "' and one row per element");
+            throw InputException.atField(name, 0, "element", "", "no data rows", "header " + HEADER + " and one row per element");
         }
         if (amounts.values().stream().allMatch(v -> v == 0)) {
-            throw new AbundanceFormatException(name, 0, "value", "every amount is zero; at least one element"
-                    + " needs an amount > 0");
+            throw InputException.atField(name, 0, "value", "", "every amount is zero",
+                    "at least one element with an amount > 0");
         }
         return new AbundanceSet(name, provenance, ElementAbundances.of(amounts));
     }
@@ -58,26 +57,24 @@ public final class AbundanceFileReader {
                                          EnumMap<Element, Double> amounts) {
         String[] f = line.split(",", -1);
         if (f.length != 3) {
-            throw new AbundanceFormatException(name, lineNo, "row",
-                    "expected 3 fields (element,value,unit), found " + f.length);
+            throw InputException.atField(name, lineNo, "row", line, f.length + " fields", "3 fields: element,value,unit");
         }
         Element el = Element.fromSymbol(f[0]);
         if (el == null) {
-            throw new AbundanceFormatException(name, lineNo, "element",
-                    "unknown element '" + Messages.echo(f[0].strip()) + "'; accepted: " + java.util.Arrays.toString(Element.values()));
+            throw InputException.atField(name, lineNo, "element", f[0], "unknown element",
+                    java.util.Arrays.toString(Element.values()));
         }
         AbundanceUnit u = AbundanceUnit.fromToken(f[2]);
         if (u == null) {
-            throw new AbundanceFormatException(name, lineNo, "unit",
-                    "unknown unit '" + Messages.echo(f[2].strip()) + "'; accepted: " + AbundanceUnit.accepted());
+            throw InputException.atField(name, lineNo, "unit", f[2], "unknown unit", AbundanceUnit.accepted());
         }
         if (unit != null && u != unit) {
-            throw new AbundanceFormatException(name, lineNo, "unit",
-                    "unit '" + u.token() + "' differs from earlier rows ('" + unit.token() + "'); use one unit per file");
+            throw InputException.atField(name, lineNo, "unit", u.token(), "differs from earlier rows",
+                    "one unit per file (" + unit.token() + " here)");
         }
         double v = parseValue(f[1], u, name, lineNo);
         if (amounts.put(el, u.toRelativeMoles(v, el)) != null) {
-            throw new AbundanceFormatException(name, lineNo, "element", "element " + el + " appears twice");
+            throw InputException.atField(name, lineNo, "element", el, "appears twice", "each element once");
         }
         return u;
     }
@@ -87,16 +84,16 @@ public final class AbundanceFileReader {
         try {
             v = Double.parseDouble(s.strip());
         } catch (NumberFormatException ex) {
-            throw new AbundanceFormatException(name, lineNo, "value", "'" + Messages.echo(s.strip()) + "' is not a number");
+            throw InputException.atField(name, lineNo, "value", s, "not a number", "a finite number");
         }
         boolean ok = Double.isFinite(v) && (u == AbundanceUnit.LOG_EPS || v >= 0);
         if (!ok) {
-            throw new AbundanceFormatException(name, lineNo, "value", "'" + Messages.echo(s.strip())
-                    + "' must be finite" + (u == AbundanceUnit.LOG_EPS ? "" : " and >= 0"));
+            throw InputException.atField(name, lineNo, "value", s, "out of range",
+                    u == AbundanceUnit.LOG_EPS ? "a finite number" : "a finite number >= 0");
         }
         if (u == AbundanceUnit.LOG_EPS && (v > MAX_LOG_EPS || v < MIN_LOG_EPS)) {
-            throw new AbundanceFormatException(name, lineNo, "value", "log eps " + Messages.echo(s.strip())
-                    + " is outside " + (int) MIN_LOG_EPS + " to " + (int) MAX_LOG_EPS + " (log eps(H) = 12 by definition)");
+            throw InputException.atField(name, lineNo, "value", s, "log eps outside its range",
+                    (int) MIN_LOG_EPS + " to " + (int) MAX_LOG_EPS + " (log eps(H) = 12 by definition)");
         }
         return v;
     }

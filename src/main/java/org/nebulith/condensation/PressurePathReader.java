@@ -44,7 +44,7 @@ public final class PressurePathReader {
                 }
                 if (!header) {
                     if (!line.equals(HEADER)) {
-                        throw InputException.atField(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER);
+                        throw InputException.atField(name, lineNo, "header", line, "not the header", "exactly " + HEADER);
                     }
                     header = true;
                     continue;
@@ -55,7 +55,7 @@ public final class PressurePathReader {
             }
         }
         if (rows.isEmpty()) {
-            throw InputException.atField(name, Math.max(lineNo, 1), header ? "T_K" : "header",
+            throw InputException.atField(name, Math.max(lineNo, 1), header ? "T_K" : "header", "",
                     header ? "no data rows" : "no header", "the header " + HEADER + " and at least one row");
         }
         double[] t = new double[rows.size()];
@@ -75,7 +75,7 @@ public final class PressurePathReader {
         double step = row[0] - rows.get(n - 1)[0];
         boolean ok = step != 0 && (n < 2 || Math.signum(step) == Math.signum(rows.get(n - 1)[0] - rows.get(n - 2)[0]));
         if (!ok) {
-            throw InputException.atField(name, lineNo, "T_K", "temperature " + row[0] + " K breaks the order of the rows above",
+            throw InputException.atField(name, lineNo, "T_K", row[0], "breaks the order of the rows above",
                     "T_K strictly increasing or strictly decreasing");
         }
     }
@@ -83,7 +83,7 @@ public final class PressurePathReader {
     private static double[] parseRow(String line, int lineNo, String name) {
         String[] f = line.split(",", -1);
         if (f.length != FIELDS.length) {
-            throw InputException.atField(name, lineNo, "row", f.length + " fields", FIELDS.length + " fields: " + HEADER);
+            throw InputException.atField(name, lineNo, "row", line, f.length + " fields", FIELDS.length + " fields: " + HEADER);
         }
         double[] v = new double[f.length];
         for (int i = 0; i < f.length; i++) {
@@ -91,10 +91,10 @@ public final class PressurePathReader {
             try {
                 v[i] = Double.parseDouble(cell);
             } catch (NumberFormatException ex) {
-                throw InputException.atField(name, lineNo, FIELDS[i], "'" + cell + "' is not a number", POSITIVE);
+                throw InputException.atField(name, lineNo, FIELDS[i], cell, "not a number", POSITIVE);
             }
             if (!(v[i] > 0) || Double.isInfinite(v[i])) {
-                throw InputException.atField(name, lineNo, FIELDS[i], "value " + cell, POSITIVE);
+                throw InputException.atField(name, lineNo, FIELDS[i], cell, "out of range", POSITIVE);
             }
         }
         return v;

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
+import org.nebulith.errors.InputException;
 import org.nebulith.format.HeaderedLines;
 
 /**
@@ -20,7 +21,7 @@ import org.nebulith.format.HeaderedLines;
  * kappa0_cm2_g, kappa_T_exponent, r_min_AU, r_max_AU}, optionally {@code T_irr_ref_K,
  * L_irr_ref_Lsun, M_irr_ref_Msun} (default: Chiang &amp; Goldreich 1997, see {@link FlaringIrradiation}).
  * <br>Optional in both: {@code label}. Unknown or repeated keys, missing keys and bad numbers are
- * {@link DiskFormatException}s naming file, line and key.
+ * {@link InputException}s naming file, line and key.
  */
 public final class DiskParameterReader {
     /** The exact header. */
@@ -47,7 +48,7 @@ public final class DiskParameterReader {
      * @param name the file or preset name for messages
      * @return the disk
      * @throws IOException on read failure
-     * @throws DiskFormatException on bad content
+     * @throws InputException on bad content
      */
     public static DiskModel read(Reader in, String name) throws IOException {
         DiskParameterReader r = new DiskParameterReader(name);
@@ -57,21 +58,21 @@ public final class DiskParameterReader {
 
     private void load(Reader in) throws IOException {
         boolean header = HeaderedLines.read(in, HEADER, comments,
-                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER),
+                (line, lineNo) -> InputException.atField(name, lineNo, "header", line, "not the header", "exactly " + HEADER),
                 this::addEntry);
         if (!header) {
-            throw new DiskFormatException(name, 0, "header", "no header line", HEADER + " then key,value rows");
+            throw InputException.atField(name, 0, "header", "", "no header line", HEADER + " then key,value rows");
         }
     }
 
     private void addEntry(String line, int lineNo) {
         int comma = line.indexOf(',');
         if (comma <= 0) {
-            throw new DiskFormatException(name, lineNo, "parameter", "row '" + line + "'", "key,value");
+            throw InputException.atField(name, lineNo, "parameter", line, "no key before a comma", "key,value");
         }
         String key = line.substring(0, comma).strip();
         if (entries.put(key, new Entry(line.substring(comma + 1).strip(), lineNo)) != null) {
-            throw new DiskFormatException(name, lineNo, key, "given twice", "each parameter once");
+            throw InputException.atField(name, lineNo, key, line.substring(comma + 1).strip(), "given twice", "each parameter once");
         }
     }
 
@@ -86,7 +87,7 @@ public final class DiskParameterReader {
             checkKeys(VISCOUS);
             return viscous(label);
         }
-        throw new DiskFormatException(name, entries.get("model").line(), "model", "unknown model '" + model + "'",
+        throw InputException.atField(name, entries.get("model").line(), "model", model, "unknown model",
                 "power-law, viscous-irradiated");
     }
 
@@ -100,8 +101,8 @@ public final class DiskParameterReader {
         return guard(() -> {
             if (entries.containsKey("pressure")) {
                 if (!text("pressure").equals("hydrostatic")) {
-                    throw new DiskFormatException(name, entries.get("pressure").line(), "pressure",
-                            "'" + text("pressure") + "'", "hydrostatic (or give P1_bar and p instead)");
+                    throw InputException.atField(name, entries.get("pressure").line(), "pressure",
+                            text("pressure"), "unknown pressure law", "hydrostatic (or give P1_bar and p instead)");
                 }
                 return PowerLawDisk.hydrostatic(t1, q, sigma1, s, number("M_star_Msun"), number("mu"), rMin, rMax, label);
             }
@@ -123,18 +124,16 @@ public final class DiskParameterReader {
     private DiskModel guard(java.util.function.Supplier<DiskModel> make) {
         try {
             return make.get();
-        } catch (DiskFormatException e) {
-            throw e;
         } catch (IllegalArgumentException e) {
-            throw new DiskFormatException(name, 0, "parameters", e.getMessage(), "physically meaningful values");
+            throw InputException.atField(name, 0, "parameters", "", e.getMessage(), "physically meaningful values");
         }
     }
 
     private void checkKeys(Set<String> allowed) {
         for (Map.Entry<String, Entry> e : entries.entrySet()) {
             if (!allowed.contains(e.getKey())) {
-                throw new DiskFormatException(name, e.getValue().line(), e.getKey(), "unknown parameter for model '"
-                        + text("model") + "'", String.join(", ", new java.util.TreeSet<>(allowed)));
+                throw InputException.atField(name, e.getValue().line(), e.getKey(), e.getValue().value(),
+                        "unknown parameter for model '" + text("model") + "'", String.join(", ", new java.util.TreeSet<>(allowed)));
             }
         }
     }
@@ -142,7 +141,7 @@ public final class DiskParameterReader {
     private String text(String key) {
         Entry e = entries.get(key);
         if (e == null) {
-            throw new DiskFormatException(name, 0, key, "missing", "a row '" + key + ",<value>'");
+            throw InputException.atField(name, 0, key, "", "missing", "a row '" + key + ",<value>'");
         }
         return e.value();
     }
@@ -157,7 +156,7 @@ public final class DiskParameterReader {
         } catch (NumberFormatException ignored) {
             // reported below
         }
-        throw new DiskFormatException(name, entries.get(key).line(), key, "'" + v + "' is not a finite number",
+        throw InputException.atField(name, entries.get(key).line(), key, v, "not a finite number",
                 "a finite number");
     }
 }

@@ -13,6 +13,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Collectors;
 
+import org.nebulith.errors.InputException;
+
 /**
  * Resolves a disk argument: a preset name (files in the repository folder {@code presets/},
  * shipped on the classpath under {@code presets/}) or a file, either a parameter file
@@ -88,8 +90,7 @@ public final class DiskPresets {
         if (header.equals(DiskParameterReader.HEADER)) {
             return DiskParameterReader.read(new StringReader(text), name);
         }
-        throw new DiskFormatException(name, headerLine + 1, "header",
-                "found '" + org.nebulith.errors.Messages.echo(header) + "'",
+        throw InputException.atField(name, headerLine + 1, "header", header, "not a disk header",
                 TabulatedDiskReader.HEADER + " (table) or " + DiskParameterReader.HEADER + " (parameters)");
     }
 }

@@ -5,12 +5,13 @@ import java.io.Reader;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.nebulith.errors.InputException;
 import org.nebulith.format.HeaderedLines;
 
 /**
  * Reads a tabulated disk: optional {@code #} comment lines, the header
  * {@code r_AU,T_K,P_bar,sigma_gas_g_cm2} exactly, then rows in strictly increasing r with every
- * value finite and &gt; 0 (at least two rows). Any fault is a {@link DiskFormatException} naming
+ * value finite and &gt; 0 (at least two rows). Any fault is a {@link InputException} naming
  * file, line and field.
  */
 public final class TabulatedDiskReader {
@@ -31,17 +32,17 @@ public final class TabulatedDiskReader {
         List<double[]> rows = new ArrayList<>();
         List<String> comments = new ArrayList<>();
         HeaderedLines.read(in, HEADER, comments,
-                (line, lineNo) -> new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'", "exactly " + HEADER),
+                (line, lineNo) -> InputException.atField(name, lineNo, "header", line, "not the header", "exactly " + HEADER),
                 (line, lineNo) -> {
                     double[] row = parseRow(line, lineNo, name);
                     if (!rows.isEmpty() && !(row[0] > rows.get(rows.size() - 1)[0])) {
-                        throw new DiskFormatException(name, lineNo, "r_AU", "radius " + row[0]
-                                + " AU does not increase on the previous row", "rows in strictly increasing r_AU");
+                        throw InputException.atField(name, lineNo, "r_AU", row[0],
+                                "does not increase on the previous row", "rows in strictly increasing r_AU");
                     }
                     rows.add(row);
                 });
         if (rows.size() < 2) {
-            throw new DiskFormatException(name, 0, "r_AU", rows.size() + " data rows", "header " + HEADER
+            throw InputException.atField(name, 0, "r_AU", "", rows.size() + " data rows", "header " + HEADER
                     + " and at least 2 rows");
         }
         return build(rows, name + (comments.isEmpty() ? "" : " (" + comments.get(0) + ")"));
@@ -50,18 +51,18 @@ public final class TabulatedDiskReader {
     private static double[] parseRow(String line, int lineNo, String name) {
         String[] f = line.split(",", -1);
         if (f.length != FIELDS.length) {
-            throw new DiskFormatException(name, lineNo, "row", f.length + " fields", FIELDS.length + " fields: " + HEADER);
+            throw InputException.atField(name, lineNo, "row", line, f.length + " fields", FIELDS.length + " fields: " + HEADER);
         }
         double[] v = new double[f.length];
         for (int i = 0; i < f.length; i++) {
             try {
                 v[i] = Double.parseDouble(f[i].strip());
             } catch (NumberFormatException ex) {
-                throw new DiskFormatException(name, lineNo, FIELDS[i], "'" + org.nebulith.errors.Messages.echo(f[i].strip()) + "' is not a number",
+                throw InputException.atField(name, lineNo, FIELDS[i], f[i], "not a number",
                         "a finite number > 0");
             }
             if (!(v[i] > 0) || Double.isInfinite(v[i])) {
-                throw new DiskFormatException(name, lineNo, FIELDS[i], "value " + f[i].strip(), "a finite number > 0");
+                throw InputException.atField(name, lineNo, FIELDS[i], f[i], "out of range", "a finite number > 0");
             }
         }
         return v;

@@ -158,7 +158,12 @@ final class PhaseSelection {
     /**
      * A phase whose addition made the Newton system fail is often nearly dependent on a present
      * phase (a solution taking over from its pure end-member at a polymorph change): tries to
-     * replace each of the most similar present phases by it, keeping the first state that converges.
+     * replace each of the most similar present phases by it. The swap that the reaction really makes
+     * removes the phase it exhausts, so the first swap that converges with every pure amount
+     * non-negative is kept; failing that, the first that converges (the next steps then drop the
+     * negative phase). Taking the most similar phase regardless can remove a phase that stays
+     * stable (diopside when titanite replaces rutile beside orthopyroxene), and the assemblage
+     * left after the negative one is dropped may have no Newton solution.
      *
      * @return true if a swap succeeded (it then holds the new state)
      */
@@ -171,7 +176,8 @@ final class PhaseSelection {
             sim[q] = cosine(target, dominantStoichiometry(backup.active[q], backup.lambda));
         }
         Arrays.sort(order, (a, b) -> Double.compare(sim[b], sim[a]));
-        for (int i = 0; i < Math.min(3, order.length); i++) {
+        Iterate fallback = null;
+        for (int i = 0; i < Math.min(SWAP_TRIALS, order.length); i++) {
             if (sim[order[i]] <= 0) {
                 break;
             }
@@ -179,12 +185,24 @@ final class PhaseSelection {
             trial.remove(order[i]);
             trial.add(cand, sys.phaseKind(cand) == PhaseKind.SOLUTION ? NewtonKernel.START_LN : 0.0);
             if (kernel.converge(trial) && kernel.vanishing(trial) < 0) {
-                restore(trial, it);
-                return true;
+                if (mostNegative(trial) < 0) {
+                    restore(trial, it);
+                    return true;
+                }
+                if (fallback == null) {
+                    fallback = trial;
+                }
             }
+        }
+        if (fallback != null) {
+            restore(fallback, it);
+            return true;
         }
         return false;
     }
+
+    /** How many of the most similar present phases {@link #swapIn} tries to replace. */
+    private static final int SWAP_TRIALS = 3;
 
     private double[] dominantStoichiometry(int p, double[] lambda) {
         PhaseDef ph = sys.phase(p);
@@ -214,7 +232,12 @@ final class PhaseSelection {
         return ab / Math.sqrt(aa * bb);
     }
 
-    /** @return the active index of the solution with the smallest scaled amount, or -1 */
+    /**
+     * @return the active index of the solution with the smallest scaled amount if that amount is
+     *         really small (below {@link #SMALL_SOLUTION_LN} of its largest amount), or -1: dropping a
+     *         substantial solution because Newton failed loses its elements' carrier and leads the
+     *         search astray
+     */
     private int smallestSolution(Iterate it) {
         int best = -1;
         for (int q = 0; q < it.active.length; q++) {
@@ -222,8 +245,11 @@ final class PhaseSelection {
                 best = q;
             }
         }
-        return best;
+        return best >= 0 && it.u[best] < SMALL_SOLUTION_LN ? best : -1;
     }
+
+    /** ln of the scaled amount below which a solution may be dropped after a Newton failure. */
+    static final double SMALL_SOLUTION_LN = Math.log(1e-4);
 
     /** Driving force per atom of absent phase p [RT]; positive means supersaturated. */
     double drivingForce(int p, double[] lambda) {

@@ -44,7 +44,7 @@ public final class SolutionModels {
 
     /**
      * Orthopyroxene enstatite-ferrosilite, the standard form. The form with the Mn end-member
-     * ({@link #ORTHOPYROXENE_MN}) is offered but not standard: with it the fractional (isolation)
+     * ({@link #ORTHOPYROXENE_MN}) is offered but not standard: with it the fractional (removal fraction 1)
      * sequence of the proto-solar gas at 1e-4 bar fails near 1057 K (Mn-rich residual gas, orthopyroxene
      * supersaturated after the continuation stalls), a phase-selection limit of the solver.
      */

@@ -18,19 +18,34 @@ public final class InputException extends NebulithException {
         super(key, cause, parts);
     }
 
+    /** Longest value shown in a message ({@link Messages#ECHO_LIMIT}); longer values are cut. */
+    public static final int VALUE_SHOWN = Messages.ECHO_LIMIT;
+
     /**
-     * A bad field of an input file.
+     * A bad field of an input file, in the one shape every reader uses:
+     * {@code file: line N: field "F": value "V": what is wrong; accepted: what would be accepted}.
      *
      * @param file     the file as the user named it
-     * @param line     1-based line number
+     * @param line     1-based line number (0 if the field is missing from the file altogether)
      * @param field    the column or key
+     * @param value    the value found (cut to {@value #VALUE_SHOWN} characters; empty if missing)
      * @param problem  what is wrong
      * @param accepted what would be accepted
      * @return the exception
      */
-    public static InputException atField(final Object file, final long line, final String field,
+    public static InputException atField(final Object file, final long line, final String field, final Object value,
                                          final String problem, final String accepted) {
-        return new InputException(Messages.BAD_INPUT_FIELD, null, file, line, field, problem, accepted);
+        Object shown = value instanceof Number ? value : shown(value);
+        return new InputException(Messages.BAD_INPUT_FIELD, null, file, line, field, shown, problem, accepted);
+    }
+
+    /**
+     * @param value any value
+     * @return its text on one line, stripped and cut to {@value #VALUE_SHOWN} characters, the full
+     *         length noted after the cut ({@link Messages#echo})
+     */
+    public static String shown(final Object value) {
+        return Messages.echo(String.valueOf(value).replaceAll("[\\r\\n\\t]+", " ").strip());
     }
 
     /**
@@ -56,7 +71,7 @@ public final class InputException extends NebulithException {
      */
     public static InputException atOption(final String option, final Object value, final String problem,
                                           final String accepted) {
-        Object shown = value instanceof CharSequence ? Messages.echo(value) : value;
+        Object shown = value instanceof Number ? value : shown(value);
         return new InputException(Messages.BAD_OPTION_VALUE, null, option, shown, problem, accepted);
     }
 }

@@ -15,8 +15,8 @@ import org.nebulith.format.Decimal;
  */
 public enum Messages {
 
-    /** A bad value in an input file: file, line, field, what is wrong, what is accepted. */
-    BAD_INPUT_FIELD(5, "{0}: line {1}: field \"{2}\": {3}; accepted: {4}"),
+    /** A bad value in an input file: file, line, field, value (cut to 80 characters), what is wrong, what is accepted. */
+    BAD_INPUT_FIELD(6, "{0}: line {1}: field \"{2}\": value \"{3}\": {4}; accepted: {5}"),
     /** A bad input file as a whole (no line): file, what is wrong, what is accepted. */
     BAD_INPUT_FILE(3, "{0}: {1}; accepted: {2}"),
     /** A bad command-line value: option, value, what is wrong, what is accepted. */
@@ -46,6 +46,8 @@ public enum Messages {
     /** The equilibrium iteration did not converge: T [K], P [bar], composition, iterations, residual. */
     NO_CONVERGENCE(5, "equilibrium did not converge at T = {0} K, P = {1} bar, composition {2} after {3} iterations"
             + " (residual {4})"),
+    /** The equilibrium solver found no state that passes its checks: what failed (naming T, P and composition). */
+    NO_EQUILIBRIUM(1, "{0}"),
     /** A numerical result is unusable: what, T [K], P [bar], composition. */
     NUMERICAL_FAILURE(4, "{0} at T = {1} K, P = {2} bar, composition {3}"),
     /** A numerical failure inside a feeding zone: zone, r [AU], T [K], P [bar], what failed. */

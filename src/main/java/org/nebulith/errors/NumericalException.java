@@ -5,7 +5,7 @@ package org.nebulith.errors;
  * (temperature [K], pressure [bar], composition) so that the case can be reproduced. The command
  * line maps it to exit code 3.
  */
-public final class NumericalException extends NebulithException {
+public class NumericalException extends NebulithException {
 
     private static final long serialVersionUID = 1L;
 

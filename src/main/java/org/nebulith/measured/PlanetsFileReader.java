@@ -52,7 +52,7 @@ public final class PlanetsFileReader {
                 if (t.equals(HEADER + "," + DISTANCE)) {
                     withDistance = true;
                 } else if (!t.equals(HEADER)) {
-                    throw InputException.atField(name, line, "(header)", "unexpected header \"" + t + "\"",
+                    throw InputException.atField(name, line, "(header)", t, "unexpected header",
                             HEADER + " with an optional ," + DISTANCE);
                 }
                 header = true;
@@ -60,7 +60,7 @@ public final class PlanetsFileReader {
             }
             MeasuredPlanet p = row(t.split(",", -1), withDistance, name, line);
             if (!seen.add(p.planet())) {
-                throw InputException.atField(name, line, "planet", "planet '" + p.planet() + "' appears twice",
+                throw InputException.atField(name, line, "planet", p.planet(), "appears twice",
                         "one row per planet");
             }
             out.add(p);
@@ -77,20 +77,19 @@ public final class PlanetsFileReader {
     private static MeasuredPlanet row(final String[] f, final boolean withDistance, final String name, final long line) {
         int n = withDistance ? 7 : 6;
         if (f.length != n) {
-            throw InputException.atField(name, line, "(row)", f.length + " fields", n + " fields as in the header");
+            throw InputException.atField(name, line, "(row)", String.join(",", f), f.length + " fields", n + " fields as in the header");
         }
         String planet = f[0].strip();
         String star = f[1].strip();
         if (planet.isEmpty()) {
-            throw InputException.atField(name, line, "planet", "empty name", "a non-empty name");
+            throw InputException.atField(name, line, "planet", f[0], "empty name", "a non-empty name");
         }
         if (star.isEmpty()) {
-            throw InputException.atField(name, line, "star", "empty name", "a star of the catalogue");
+            throw InputException.atField(name, line, "star", star, "empty name", "a star of the catalogue");
         }
         double mass = positive(f[2], "mass_Mearth", name, line);
         if (mass < InteriorModel.MASS_MIN || mass > InteriorModel.MASS_MAX) {
-            throw InputException.atField(name, line, "mass_Mearth", "mass " + f[2].strip() + " is outside the interior"
-                    + " model's range", InteriorModel.MASS_MIN + " to " + InteriorModel.MASS_MAX + " M_earth");
+            throw InputException.atField(name, line, "mass_Mearth", f[2], "outside the interior model's range", InteriorModel.MASS_MIN + " to " + InteriorModel.MASS_MAX + " M_earth");
         }
         double massErr = positive(f[3], "mass_err_Mearth", name, line);
         double radius = positive(f[4], "radius_Rearth", name, line);
@@ -105,11 +104,11 @@ public final class PlanetsFileReader {
         try {
             v = Double.parseDouble(cell.strip());
         } catch (NumberFormatException e) {
-            throw InputException.atField(name, line, field, "\"" + cell.strip() + "\" is not a number",
+            throw InputException.atField(name, line, field, cell, "not a number",
                     "a finite number > 0");
         }
         if (!Double.isFinite(v) || !(v > 0)) {
-            throw InputException.atField(name, line, field, String.format(Locale.ROOT, "%s must be > 0", cell.strip()),
+            throw InputException.atField(name, line, field, cell, "not > 0",
                     "a finite number > 0");
         }
         return v;

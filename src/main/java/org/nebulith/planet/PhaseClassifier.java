@@ -6,6 +6,7 @@ import java.util.Set;
 
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
+import org.nebulith.zones.WaterIce;
 
 /**
  * Assigns a condensed phase to a planetary reservoir from its composition (common practice for
@@ -18,7 +19,6 @@ import org.nebulith.thermo.Formula;
 public final class PhaseClassifier {
     private static final Set<Element> METALS = EnumSet.of(Element.Fe, Element.Ni, Element.Co, Element.Cr, Element.Mn);
     private static final Set<Element> SULFIDE_METALS = EnumSet.of(Element.Fe, Element.Ni, Element.Co, Element.S);
-    private static final Formula WATER = Formula.parse("H:2 O:1");
 
     private PhaseClassifier() {
     }
@@ -33,7 +33,7 @@ public final class PhaseClassifier {
         if ("metal".equals(phaseName) || (c.size() == 1 && METALS.containsAll(c.keySet()))) {
             return PhaseKind.METAL;
         }
-        if (formula.equals(WATER)) {
+        if (formula.equals(WaterIce.FORMULA)) {
             return PhaseKind.ICE;
         }
         if (c.containsKey(Element.S) && !c.containsKey(Element.O) && SULFIDE_METALS.containsAll(c.keySet())) {

@@ -10,12 +10,15 @@ import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.progress.Progress;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.PieceJumps;
 import org.nebulith.thermo.Species;
 import org.nebulith.zones.FeedingZone;
 import org.nebulith.zones.LocalCondensation;
+import org.nebulith.zones.RadialScan;
+import org.nebulith.zones.WaterIce;
 import org.nebulith.zones.ZoneInventory;
 
 /**
@@ -51,12 +54,64 @@ public final class PlanetFormation {
      * @return the planets, in zone order, and the local condensation used (for radial profiles)
      */
     public Formation run(ElementAbundances gas, DiskModel disk, List<FeedingZone> zones) {
+        return run(gas, disk, zones, 0, Progress.none());
+    }
+
+    /**
+     * The planets and, if asked, the radial profile of the local solids across the zones (from half
+     * the innermost zone's inner edge to twice the outermost zone's outer edge, inside the disk's range).
+     *
+     * @param gas           the gas composition (any normalisation)
+     * @param disk          the disk
+     * @param zones         feeding zones inside the disk's range
+     * @param profilePoints radii of the profile (0 for none, else &gt;= 2)
+     * @param progress      advanced once per zone and once for the profile ({@link #steps} in all)
+     * @return the planets, in zone order, the profile and the local condensation used
+     */
+    public Formation run(ElementAbundances gas, DiskModel disk, List<FeedingZone> zones, int profilePoints,
+                         Progress progress) {
+        if (profilePoints == 1 || profilePoints < 0) {
+            throw new IllegalArgumentException("profile points must be 0 or >= 2, got " + profilePoints);
+        }
         LocalCondensation local = localCondensation(gas);
         List<ZonePlanet> planets = new ArrayList<>();
         for (FeedingZone z : zones) {
             planets.add(zonePlanet(z, disk, local));
+            progress.step();
         }
-        return new Formation(gas, planets, local);
+        List<LocalCondensation.Local> profile = List.of();
+        if (profilePoints > 0) {
+            profile = RadialScan.scan(disk, local, profileMinAU(disk, zones), profileMaxAU(disk, zones), profilePoints);
+            progress.step();
+        }
+        return new Formation(gas, planets, profile, local);
+    }
+
+    /**
+     * @param zones         the zones
+     * @param profilePoints radii of the profile (0 for none)
+     * @return the progress steps of {@link #run(ElementAbundances, DiskModel, List, int, Progress)}
+     */
+    public static int steps(List<FeedingZone> zones, int profilePoints) {
+        return zones.size() + (profilePoints > 0 ? 1 : 0);
+    }
+
+    /** @return inner end of the profile [AU]: half the innermost inner edge, inside the disk */
+    public static double profileMinAU(DiskModel d, List<FeedingZone> zones) {
+        double lo = Double.POSITIVE_INFINITY;
+        for (FeedingZone z : zones) {
+            lo = Math.min(lo, z.rInnerAU());
+        }
+        return Math.max(d.rMinAU(), lo / 2);
+    }
+
+    /** @return outer end of the profile [AU]: twice the outermost outer edge, inside the disk */
+    public static double profileMaxAU(DiskModel d, List<FeedingZone> zones) {
+        double hi = 0;
+        for (FeedingZone z : zones) {
+            hi = Math.max(hi, z.rOuterAU());
+        }
+        return Math.min(d.rMaxAU(), hi * 2);
     }
 
     /**
@@ -104,11 +159,7 @@ public final class PlanetFormation {
     public LocalCondensation localCondensation(ElementAbundances gas,
                                                java.util.NavigableMap<Double, LocalCondensation.Local> reference) {
         Set<Element> els = EnumSet.noneOf(Element.class);
-        for (Element e : gas.elements()) {
-            if (gas.moles(e) > 0) {
-                els.add(e);
-            }
-        }
+        els.addAll(gas.elements());
         ChemicalSystem sys = systems.computeIfAbsent(els, k -> settings.system().build(k));
         double mass = gas.massGrams();
         double[] b = new double[sys.elementCount()];
@@ -136,7 +187,7 @@ public final class PlanetFormation {
             }
         }
         if (inv.iceMoles() > 0) {
-            out.add(new CondensedPhase("water ice", Formula.parse("H:2 O:1"), inv.iceMoles(), PhaseKind.ICE));
+            out.add(new CondensedPhase("water ice", WaterIce.FORMULA, inv.iceMoles(), PhaseKind.ICE));
         }
         return out;
     }
@@ -157,8 +208,10 @@ public final class PlanetFormation {
      *
      * @param gas     the gas composition used
      * @param planets one planet per zone
+     * @param profile the local states across the zones, inner first (empty if none was asked)
      * @param local   the local condensation (its cache holds every radius solved)
      */
-    public record Formation(ElementAbundances gas, List<ZonePlanet> planets, LocalCondensation local) {
+    public record Formation(ElementAbundances gas, List<ZonePlanet> planets, List<LocalCondensation.Local> profile,
+                            LocalCondensation local) {
     }
 }

@@ -6,7 +6,7 @@ import java.util.Map;
 
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.thermo.Element;
-import org.nebulith.thermo.Formula;
+import org.nebulith.zones.WaterIce;
 
 /**
  * Builds a planet from the condensed inventory of its zone.
@@ -20,7 +20,6 @@ import org.nebulith.thermo.Formula;
  * (no FeO reduction or oxidation of metal, no partitioning of Ni, Co, Cr between core and mantle).
  */
 public final class PlanetModel {
-    private static final Formula WATER = Formula.parse("H:2 O:1");
 
     private PlanetModel() {
     }
@@ -47,7 +46,7 @@ public final class PlanetModel {
         ElementAbundances ice = sum(phases, k -> k == PhaseKind.ICE);
         double water = 0;
         for (CondensedPhase p : phases) {
-            if (p.kind() == PhaseKind.ICE && p.formula().equals(WATER)) {
+            if (p.kind() == PhaseKind.ICE && p.formula().equals(WaterIce.FORMULA)) {
                 water += p.massGrams();
             }
         }

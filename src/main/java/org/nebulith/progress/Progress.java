@@ -31,23 +31,14 @@ public interface Progress extends AutoCloseable {
     }
 
     /**
-     * Opens a progress display.
+     * Plain lines at every tenth of the work (for pipes and logs: no carriage returns, no colour).
      *
-     * @param mode  how to show it
      * @param task  short task name shown in front of the figures
      * @param total total number of steps (&gt; 0)
      * @param sink  where to write (normally standard error, never the stream carrying results)
      * @return the progress
      */
-    static Progress open(final ProgressMode mode, final String task, final long total, final PrintStream sink) {
-        switch (mode) {
-            case TERMINAL_BAR:
-                return new TerminalBarProgress(task, total, sink);
-            case LINES:
-                return new LineProgress(task, total, sink, System::nanoTime);
-            case SILENT:
-            default:
-                return none();
-        }
+    static Progress lines(final String task, final long total, final PrintStream sink) {
+        return new LineProgress(task, total, sink, System::nanoTime);
     }
 }

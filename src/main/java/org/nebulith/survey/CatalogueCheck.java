@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.TreeMap;
 
 import org.nebulith.errors.InputException;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.RunInputs;
 
 /**
  * The validating first pass over a catalogue: every row is parsed, duplicates are found, and each

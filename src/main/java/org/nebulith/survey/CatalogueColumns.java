@@ -52,7 +52,7 @@ final class CatalogueColumns {
         for (int i = 0; i < names.size(); i++) {
             String name = names.get(i).trim();
             if (!seen.add(name.toLowerCase(Locale.ROOT))) {
-                c.problems.add(new CatalogueProblem(line, name, "", "column given twice", "each column once"));
+                c.problems.add(new CatalogueProblem(line, name, "", name, "column given twice", "each column once"));
                 continue;
             }
             c.assign(name, i, line);
@@ -88,7 +88,7 @@ final class CatalogueColumns {
         boolean error = lower.endsWith("_h_err");
         boolean value = !error && lower.endsWith("_h");
         if (!error && !value) {
-            problems.add(new CatalogueProblem(line, name, "", "unknown column", ACCEPTED));
+            problems.add(new CatalogueProblem(line, name, "", name, "unknown column", ACCEPTED));
             return;
         }
         String symbol = name.substring(0, name.length() - (error ? 6 : 2));
@@ -96,7 +96,7 @@ final class CatalogueColumns {
         if (el == null || el == Element.H || el == Element.He) {
             String why = el == null ? "unknown element '" + org.nebulith.errors.Messages.echo(symbol) + "'"
                     : "[" + el + "/H] is not accepted (H is the reference, He stays solar)";
-            problems.add(new CatalogueProblem(line, name, "", why, ACCEPTED));
+            problems.add(new CatalogueProblem(line, name, "", name, why, ACCEPTED));
             return;
         }
         elements.computeIfAbsent(el, k -> new int[] {-1, -1})[error ? 1 : 0] = index;

@@ -117,7 +117,7 @@ public final class CatalogueReader implements Closeable {
         List<CatalogueProblem> problems = new ArrayList<>();
         String star = cells.size() > columns.star ? cells.get(columns.star) : "";
         if (cells.size() != columns.names.size()) {
-            problems.add(new CatalogueProblem(line, "(row)", star, cells.size() + " cells for " + columns.names.size()
+            problems.add(new CatalogueProblem(line, "(row)", star, String.join(",", cells), cells.size() + " cells for " + columns.names.size()
                     + " columns", "one cell per header column (empty cells allowed)"));
             return new Parsed(line, star, null, problems);
         }
@@ -179,12 +179,12 @@ public final class CatalogueReader implements Closeable {
         try {
             v = Double.parseDouble(text);
         } catch (NumberFormatException e) {
-            problems.add(new CatalogueProblem(line, column, star, "'" + Messages.echo(text) + "' is not a number", accepted));
+            problems.add(new CatalogueProblem(line, column, star, text, "not a number", accepted));
             return null;
         }
         if (!Double.isFinite(v) || v < min || v > max) {
-            problems.add(new CatalogueProblem(line, column, star, (v < 0 && min == 0 ? "negative value " : "value ")
-                    + Messages.echo(text) + " is out of range", accepted));
+            problems.add(new CatalogueProblem(line, column, star, text,
+                    v < 0 && min == 0 ? "negative value" : "out of range", accepted));
             return null;
         }
         return v;

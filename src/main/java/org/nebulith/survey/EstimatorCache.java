@@ -34,6 +34,24 @@ public final class EstimatorCache {
         return e;
     }
 
+    /** @return the estimate time of every estimator built so far [ns] ({@link PlanetEstimator#estimateNanos}) */
+    public long estimateNanos() {
+        long n = 0;
+        for (PlanetEstimator e : built.values()) {
+            n += e.estimateNanos();
+        }
+        return n;
+    }
+
+    /** @return the first-equilibrium time of every estimator built so far [ns] */
+    public long firstEquilibriumNanos() {
+        long n = 0;
+        for (PlanetEstimator e : built.values()) {
+            n += e.firstEquilibriumNanos();
+        }
+        return n;
+    }
+
     /** @return the equilibria counted by every estimator built so far */
     public long equilibria() {
         long n = 0;

@@ -48,4 +48,24 @@ public interface PlanetEstimator {
     default long equilibria() {
         return 0;
     }
+
+    /**
+     * Optional timing hook for the benchmark.
+     *
+     * @return wall time spent in {@link #estimate} since the estimator was made, summed over all
+     *         threads [ns], or 0 if it does not time itself
+     */
+    default long estimateNanos() {
+        return 0;
+    }
+
+    /**
+     * Optional timing hook for the benchmark.
+     *
+     * @return the part of {@link #estimateNanos()} spent in the first equilibrium of each estimate
+     *         (the composition jump from the warm-start reference) [ns], or 0 if not timed
+     */
+    default long firstEquilibriumNanos() {
+        return 0;
+    }
 }

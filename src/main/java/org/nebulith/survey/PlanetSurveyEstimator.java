@@ -57,20 +57,27 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
     private final DiskModel disk;
     private final List<FeedingZone> zones;
     private final NavigableMap<Double, LocalCondensation.Local> reference;
-    private final AtomicLong equilibria;
+    private final Counters counters;
+
+    /** Benchmark counters shared by the estimator and the per-star estimators made from it. */
+    private static final class Counters {
+        final AtomicLong equilibria = new AtomicLong();
+        final AtomicLong estimateNanos = new AtomicLong();
+        final AtomicLong firstNanos = new AtomicLong();
+    }
 
     private PlanetSurveyEstimator(PlanetFormation formation, DiskModel disk, List<FeedingZone> zones,
                                   ElementAbundances nominal, NavigableMap<Double, LocalCondensation.Local> start,
-                                  AtomicLong equilibria) {
+                                  Counters counters) {
         this.formation = formation;
         this.disk = disk;
         this.zones = zones;
-        this.equilibria = equilibria;
+        this.counters = counters;
         LocalCondensation ref = formation.localCondensation(nominal, start);
         for (FeedingZone z : zones) {
             formation.zonePlanet(z, disk, ref);
         }
-        equilibria.addAndGet(ref.equilibriaSolved());
+        counters.equilibria.addAndGet(ref.equilibriaSolved());
         this.reference = ref.snapshot();
     }
 
@@ -80,21 +87,45 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
      */
     @Override
     public PlanetEstimator near(ElementAbundances nominal) {
-        return new PlanetSurveyEstimator(formation, disk, zones, nominal, reference, equilibria);
+        return new PlanetSurveyEstimator(formation, disk, zones, nominal, reference, counters);
     }
 
     /**
-     * @param settings the survey settings (disk and zones, null for the defaults; solar reference)
+     * @param settings the survey settings (disk and zones, null for the defaults; solar reference; planet
+     *                 options: data set, variants, species, solutions, floor temperature, core)
      * @return the estimator
      * @throws IOException if a disk or zone file cannot be read
      */
     public static PlanetSurveyEstimator create(SurveySettings settings) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
         List<FeedingZone> z = readZones(settings.zones(), d);
-        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
-                new EquilibriumSolver());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
+        checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, z, fs);
+        PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, z, settings.solar().abundances(),
-                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+                java.util.Collections.emptyNavigableMap(), new Counters());
+    }
+
+    /** The disk must stay inside the data's temperatures and the model's pressures where equilibria are computed. */
+    private static void checkDomain(String diskName, DiskModel d, List<FeedingZone> zones, FormationSettings fs) {
+        if (zones.isEmpty()) {
+            return;
+        }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (FeedingZone zone : zones) {
+            lo = Math.min(lo, zone.rInnerAU());
+            hi = Math.max(hi, zone.rOuterAU());
+        }
+        List<org.nebulith.thermo.Species> species = fs.system().species();
+        String problem = org.nebulith.zones.DiskDomain.problem(d, lo, hi, fs.floorK(), species);
+        if (problem != null) {
+            throw org.nebulith.errors.InputException.atOption("--disk", diskName, problem, "a disk whose T stays within "
+                    + org.nebulith.equilibrium.StateDomain.temperatureRange(
+                            org.nebulith.equilibrium.StateDomain.minTemperatureK(species),
+                            org.nebulith.equilibrium.StateDomain.maxTemperatureK(species))
+                    + " and P within " + org.nebulith.equilibrium.StateDomain.pressureRange() + " above the floor temperature");
+        }
     }
 
     /**
@@ -107,20 +138,22 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
         PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
                 new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, disk, List.copyOf(zones), solar.abundances(),
-                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+                java.util.Collections.emptyNavigableMap(), new Counters());
     }
 
     /**
-     * @param settings the survey settings (disk, null for the default; solar reference; its zones are not read)
+     * @param settings the survey settings (disk, null for the default; solar reference; planet options; its
+     *                 zones are not read)
      * @param zones    the zones to estimate
      * @return the estimator
      */
     public static PlanetSurveyEstimator create(SurveySettings settings, List<FeedingZone> zones) throws IOException {
         DiskModel d = DiskPresets.resolve(settings.disk() == null ? DEFAULT_DISK : settings.disk());
-        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
-                new EquilibriumSolver());
+        FormationSettings fs = settings.planet().settings(ZoneCondensation.fast());
+        checkDomain(settings.disk() == null ? DEFAULT_DISK : settings.disk(), d, zones, fs);
+        PlanetFormation f = new PlanetFormation(fs, new EquilibriumSolver());
         return new PlanetSurveyEstimator(f, d, List.copyOf(zones), settings.solar().abundances(),
-                java.util.Collections.emptyNavigableMap(), new AtomicLong());
+                java.util.Collections.emptyNavigableMap(), new Counters());
     }
 
     private static List<FeedingZone> readZones(String file, DiskModel d) throws IOException {
@@ -140,12 +173,15 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
 
     @Override
     public LinkedHashMap<String, List<Quantity>> estimate(ElementAbundances gas) {
+        long start = System.nanoTime();
         LocalCondensation local = formation.localCondensation(gas, reference);
         LinkedHashMap<String, List<Quantity>> out = new LinkedHashMap<>();
         for (FeedingZone z : zones) {
             out.put(z.name(), quantities(formation.zonePlanet(z, disk, local)));
         }
-        equilibria.addAndGet(local.equilibriaSolved());
+        counters.equilibria.addAndGet(local.equilibriaSolved());
+        counters.firstNanos.addAndGet(local.firstSolveNanos());
+        counters.estimateNanos.addAndGet(System.nanoTime() - start);
         return out;
     }
 
@@ -193,7 +229,17 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
 
     @Override
     public long equilibria() {
-        return equilibria.get();
+        return counters.equilibria.get();
+    }
+
+    @Override
+    public long estimateNanos() {
+        return counters.estimateNanos.get();
+    }
+
+    @Override
+    public long firstEquilibriumNanos() {
+        return counters.firstNanos.get();
     }
 
     /** @return the zones */

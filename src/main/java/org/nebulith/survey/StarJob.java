@@ -55,6 +55,16 @@ public final class StarJob {
     private StarJob() {
     }
 
+    /** Receives the wall time of each draw; called on the worker threads, so implementations are thread-safe. */
+    @FunctionalInterface
+    public interface DrawClock {
+        /** Ignores the times. */
+        DrawClock NONE = nanos -> { };
+
+        /** @param nanos wall time of one draw's estimate, converged or failed [ns] */
+        void draw(long nanos);
+    }
+
     /** One output quantity: zone, name, unit. */
     private record Key(String zone, String name, String unit) {
     }
@@ -88,6 +98,20 @@ public final class StarJob {
      *                          name (a defect of the estimator, not a numerical failure)
      */
     public static StarResult survey(StarRow row, SurveySettings settings, PlanetEstimator general) {
+        return survey(row, settings, general, DrawClock.NONE);
+    }
+
+    /**
+     * {@link #survey(StarRow, SurveySettings, PlanetEstimator)} that also reports the wall time of
+     * every draw (benchmarks); the result is the same.
+     *
+     * @param row      the star
+     * @param settings the run settings
+     * @param general  the planet estimate for {@code settings.forStar(row)}
+     * @param clock    receives the wall time of each draw's estimate [ns]
+     * @return the star's rows and failures
+     */
+    public static StarResult survey(StarRow row, SurveySettings settings, PlanetEstimator general, DrawClock clock) {
         ElementAbundances solar = SOLAR.get(settings.solar());
         Map<Element, Double> nominalDex = new EnumMap<>(Element.class);
         row.abundances().forEach((el, m) -> nominalDex.put(el, m.dex()));
@@ -121,13 +145,17 @@ public final class StarJob {
                 dex.put(e.getKey(), m.dex() + m.error() * (common * z0 + own * z));
             }
             double[] v;
+            ElementAbundances gas = compose(solar, dex);
+            long start = System.nanoTime();
             try {
-                v = evaluate(row, d, compose(solar, dex), estimator, keys);
+                v = evaluate(row, d, gas, estimator, keys);
             } catch (StarJobException e) {
                 throw e;
             } catch (RuntimeException e) {
                 failures.add(DrawFailure.of(row.star(), d, e));
                 continue;
+            } finally {
+                clock.draw(System.nanoTime() - start);
             }
             converged[d] = true;
             for (int k = 0; k < v.length; k++) {

@@ -3,8 +3,8 @@ package org.nebulith.survey;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.nebulith.report.CellText;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CellText;
+import org.nebulith.files.CsvTableWriter;
 
 /**
  * The text of {@code survey.csv}: the header, and each star's block of rows (numbers by

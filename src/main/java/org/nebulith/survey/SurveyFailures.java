@@ -7,8 +7,8 @@ import java.util.List;
 
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.report.CellText;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CellText;
+import org.nebulith.files.CsvTableWriter;
 
 /**
  * The text of {@code failures.csv}: one row per failed estimate, stars in catalogue order, a star's
@@ -63,7 +63,7 @@ public final class SurveyFailures {
      * @param draws draws per star
      * @return draws lost: all of them for a nominal failure, else one per line
      */
-    static long failedDraws(String block, int draws) {
+    public static long failedDraws(String block, int draws) {
         long n = 0;
         try (CSVParser p = CSVParser.parse(block, CsvTableWriter.FORMAT)) {
             for (CSVRecord r : p) {
@@ -82,7 +82,7 @@ public final class SurveyFailures {
      * @param block one star's lines of failures.csv (at least one)
      * @return its first failure as one readable line: star, stage, zone, state, reason
      */
-    static String describeFirst(String block) {
+    public static String describeFirst(String block) {
         try (CSVParser p = CSVParser.parse(block, CsvTableWriter.FORMAT)) {
             CSVRecord r = p.getRecords().get(0);
             StringBuilder b = new StringBuilder("star '").append(r.get(0)).append("', ")

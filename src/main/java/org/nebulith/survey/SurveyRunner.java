@@ -86,6 +86,25 @@ public final class SurveyRunner {
      */
     public static Summary run(Iterator<StarRow> stars, SurveySettings settings, EstimatorCache estimators, int threads,
                               Progress progress, Sink sink) throws IOException {
+        return run(stars, settings, estimators, threads, progress, sink, StarJob.DrawClock.NONE);
+    }
+
+    /**
+     * {@link #run(Iterator, SurveySettings, EstimatorCache, int, Progress, Sink)} that also reports the
+     * wall time of every draw to {@code clock} (benchmarks).
+     *
+     * @param stars      the stars, in catalogue order (read lazily)
+     * @param settings   the run settings
+     * @param estimators estimators per effective settings
+     * @param threads    worker threads, &gt;= 1
+     * @param progress   advanced by the draws of each finished star
+     * @param sink       receives the outcomes in order
+     * @param clock      receives each draw's wall time, from the worker threads
+     * @return what was done
+     * @throws IOException if the sink fails
+     */
+    public static Summary run(Iterator<StarRow> stars, SurveySettings settings, EstimatorCache estimators, int threads,
+                              Progress progress, Sink sink, StarJob.DrawClock clock) throws IOException {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be >= 1, got " + threads);
         }
@@ -98,7 +117,7 @@ public final class SurveyRunner {
                 while (stars.hasNext() && window.size() < threads * WINDOW_PER_THREAD) {
                     StarRow row = stars.next();
                     PlanetEstimator estimator = estimators.get(settings.forStar(row));
-                    window.add(pool.submit(() -> compute(row, settings, estimator, progress)));
+                    window.add(pool.submit(() -> compute(row, settings, estimator, progress, clock)));
                 }
                 StarOutput o = take(window.removeFirst());
                 sink.completed(o);
@@ -115,9 +134,9 @@ public final class SurveyRunner {
     }
 
     private static StarOutput compute(StarRow row, SurveySettings settings, PlanetEstimator estimator,
-                                      Progress progress) {
+                                      Progress progress, StarJob.DrawClock clock) {
         try {
-            return StarOutput.of(row, StarJob.survey(row, settings, estimator));
+            return StarOutput.of(row, StarJob.survey(row, settings, estimator, clock));
         } finally {
             progress.advance(settings.draws());
         }

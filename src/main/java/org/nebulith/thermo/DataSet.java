@@ -10,6 +10,8 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.function.Predicate;
 
+import org.nebulith.errors.InputException;
+
 /**
  * A named selection of species from a {@link SpeciesDatabase}, the input of an equilibrium
  * calculation. Selections (the reasons are in {@code DATASETS.md} beside the bundled database):
@@ -225,7 +227,7 @@ public final class DataSet {
     /**
      * @param user species read from a user file (same format as the bundled file)
      * @return this selection plus every species of the user file
-     * @throws DataFormatException if a user id is already in the database
+     * @throws InputException if a user id is already in the database
      */
     public DataSet plus(SpeciesDatabase user) {
         SpeciesDatabase merged = database.plus(user);

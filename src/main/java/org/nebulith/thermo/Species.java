@@ -8,7 +8,8 @@ import java.util.Objects;
  * <p>Validity policy ({@link #isValidAt(double)}):
  * <ul>
  * <li>A NASA condensed entry exists only inside its data range, {@code tMin < T <= tMax} (as NASA
- *     CEA treats polymorph entries), and is simply absent outside.</li>
+ *     CEA treats polymorph entries), and is simply absent outside; at the floor of the data,
+ *     {@link #CONDENSED_FLOOR_K}, an entry beginning there is included.</li>
  * <li>A gas may be evaluated down to {@link #GAS_EXTRAPOLATION_BELOW_K} below its lowest data
  *     temperature (its polynomials are smooth there and trace gases at such temperatures carry
  *     no mass) and up to its highest data temperature.</li>
@@ -34,6 +35,14 @@ public record Species(String id, State state, Formula formula, String source, St
 
     /** How far below its data a gas may be evaluated [K]. */
     public static final double GAS_EXTRAPOLATION_BELOW_K = 150.0;
+
+    /**
+     * The floor of the condensed data [K]: NASA condensed entries and mineral rows begin here at the
+     * lowest. An entry whose usable range begins at this floor is included at the floor itself (no
+     * polymorph lies below it to take over), so that the documented lower limit of the tool is a
+     * valid state.
+     */
+    public static final double CONDENSED_FLOOR_K = 200.0;
 
     /** Aggregate state. */
     public enum State { GAS, SOLID, LIQUID }
@@ -75,7 +84,8 @@ public record Species(String id, State state, Formula formula, String source, St
         if (isGas()) {
             return tK >= thermo.tMinK() - GAS_EXTRAPOLATION_BELOW_K && tK <= thermo.tMaxK();
         }
-        return tK > thermo.usableMinK() && tK <= thermo.usableMaxK();
+        double lo = thermo.usableMinK();
+        return (tK > lo || (tK == lo && lo == CONDENSED_FLOOR_K)) && tK <= thermo.usableMaxK();
     }
 
     /**

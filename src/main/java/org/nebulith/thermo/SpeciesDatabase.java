@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import org.nebulith.errors.InputException;
+
 /**
  * An immutable collection of species read from one or more species files (format:
  * {@link SpeciesFileFormat}). The bundled database ({@link #bundled()}) is generated from the NASA
@@ -46,7 +48,7 @@ public final class SpeciesDatabase {
 
     /**
      * @return the database shipped with Nebulith (read once, then shared)
-     * @throws DataFormatException if the bundled file is damaged
+     * @throws InputException if the bundled file is damaged
      */
     public static SpeciesDatabase bundled() {
         SpeciesDatabase db = bundled;
@@ -74,7 +76,7 @@ public final class SpeciesDatabase {
      * @param name   the file name as the user knows it (used in messages)
      * @param opener supplies the bytes
      * @return the database
-     * @throws DataFormatException  on any malformed content (nothing is loaded)
+     * @throws InputException  on any malformed content (nothing is loaded)
      * @throws UncheckedIOException if the bytes cannot be read
      */
     public static SpeciesDatabase load(String name, StreamOpener opener) {
@@ -91,14 +93,13 @@ public final class SpeciesDatabase {
     /**
      * @param other species to add (e.g. a user file)
      * @return a database with the species of both
-     * @throws DataFormatException naming the other file if one of its ids is already present
+     * @throws InputException naming the other file if one of its ids is already present
      */
     public SpeciesDatabase plus(SpeciesDatabase other) {
         List<Species> all = new ArrayList<>(species);
         for (Species s : other.species) {
             if (byId.containsKey(s.id())) {
-                throw new DataFormatException(other.name, 0, "id", "species '" + s.id() + "' is already defined in "
-                        + name, "ids that are new (rename the species, e.g. '" + s.id() + "/mine')");
+                throw InputException.atField(other.name, 0, "id", s.id(), "already defined in " + name, "ids that are new (rename the species, e.g. '" + s.id() + "/mine')");
             }
             all.add(s);
         }
@@ -106,8 +107,8 @@ public final class SpeciesDatabase {
         for (Map.Entry<String, String> e : other.sources.entrySet()) {
             String old = src.putIfAbsent(e.getKey(), e.getValue());
             if (old != null && !old.equals(e.getValue())) {
-                throw new DataFormatException(other.name, 0, "source declaration", "source key '" + e.getKey()
-                        + "' is already declared in " + name + " with another citation", "a new source key");
+                throw InputException.atField(other.name, 0, "source declaration", e.getKey(),
+                        "already declared in " + name + " with another citation", "a new source key");
             }
         }
         return new SpeciesDatabase(name + " + " + other.name, all, src);

@@ -11,12 +11,13 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.nebulith.errors.InputException;
 import org.nebulith.thermo.mineral.MineralForm;
 import org.nebulith.thermo.mineral.MineralParameters;
 
 /**
  * Parses a species file (see {@link SpeciesFileFormat}). Any fault raises one
- * {@link DataFormatException}; nothing is returned from a file that failed.
+ * {@link InputException}; nothing is returned from a file that failed.
  */
 final class SpeciesFileReader {
     private final String file;
@@ -54,13 +55,13 @@ final class SpeciesFileReader {
             for (CSVRecord rec : p) {
                 long line = body.headerLine() + rec.getRecordNumber();
                 if (!rec.isConsistent()) {
-                    throw new DataFormatException(file, line, "", "row has " + rec.size() + " fields",
+                    throw InputException.atField(file, line, "row", String.join(",", rec.toList()), rec.size() + " fields",
                             SpeciesFileFormat.COLUMNS.size() + " comma-separated fields (quote fields containing commas)");
                 }
                 rows.add(new Row(line, rec));
             }
         } catch (IOException | java.io.UncheckedIOException | IllegalStateException ex) {
-            throw new DataFormatException(file, 0, "", "not readable as RFC-4180 CSV (" + ex.getMessage() + ")",
+            throw InputException.atField(file, 0, "row", "", "not readable as RFC-4180 CSV (" + ex.getMessage() + ")",
                     "comma-separated fields, double quotes around fields with commas or quotes");
         }
         int i = 0;
@@ -94,7 +95,7 @@ final class SpeciesFileReader {
                 String decl = l.substring(SpeciesFileFormat.SOURCE_DECLARATION.length());
                 int colon = decl.indexOf(':');
                 if (colon <= 0 || decl.substring(0, colon).isBlank() || decl.substring(0, colon).contains(" ")) {
-                    throw new DataFormatException(file, k + 1, "source declaration", "'" + l + "' has no KEY: before the citation",
+                    throw InputException.atField(file, k + 1, "source declaration", l, "no KEY: before the citation",
                             "# source KEY: citation (KEY without spaces)");
                 }
                 sources.put(decl.substring(0, colon), decl.substring(colon + 1).trim());
@@ -102,7 +103,7 @@ final class SpeciesFileReader {
             k++;
         }
         if (k == all.length) {
-            throw new DataFormatException(file, 0, "header", "no header line found",
+            throw InputException.atField(file, 0, "header", "", "no header line found",
                     String.join(",", SpeciesFileFormat.COLUMNS));
         }
         StringBuilder b = new StringBuilder();
@@ -114,7 +115,7 @@ final class SpeciesFileReader {
 
     private void checkHeader(List<String> header, long line) {
         if (!header.equals(SpeciesFileFormat.COLUMNS)) {
-            throw new DataFormatException(file, line, "header", "columns are " + header,
+            throw InputException.atField(file, line, "header", String.join(",", header), "not the header",
                     "exactly " + String.join(",", SpeciesFileFormat.COLUMNS));
         }
     }
@@ -123,26 +124,26 @@ final class SpeciesFileReader {
         Row first = group.get(0);
         String id = first.get("id");
         if (id.isEmpty() || !id.equals(id.trim())) {
-            throw fault(first, "id", "'" + id + "' is empty or has surrounding spaces", "a non-empty name");
+            throw fault(first, "id", "empty or has surrounding spaces", "a non-empty name");
         }
         if (lines.containsKey(id)) {
-            throw fault(first, "id", "'" + id + "' already defined on line " + lines.get(id),
+            throw fault(first, "id", "already defined on line " + lines.get(id),
                     "unique ids (interval rows of one nasa9 species must be consecutive)");
         }
         Species.State state = state(first);
         Formula formula = formula(first);
         String source = first.get("source");
         if (!sources.containsKey(source)) {
-            throw fault(first, "source", "'" + source + "' is not declared in the header",
+            throw fault(first, "source", "not declared in the header",
                     "a key declared by a '# source KEY: citation' line, one of " + sources.keySet());
         }
         String role = first.get("role");
         if (!SpeciesFileFormat.ROLES.contains(role)) {
-            throw fault(first, "role", "'" + role + "' is not a role", String.join("|", SpeciesFileFormat.ROLES));
+            throw fault(first, "role", "not a role", String.join("|", SpeciesFileFormat.ROLES));
         }
         String variant = first.get("variant");
         if (role.equals("primary") && !variant.isEmpty()) {
-            throw fault(first, "variant", "a primary row has variant '" + variant + "'", "empty variant for role primary");
+            throw fault(first, "variant", "a primary row has a variant", "empty variant for role primary");
         }
         String form = first.get("form");
         ThermoModel model;
@@ -170,7 +171,7 @@ final class SpeciesFileReader {
             case "liquid":
                 return Species.State.LIQUID;
             default:
-                throw fault(r, "state", "'" + r.get("state") + "' is not a state", "gas|solid|liquid");
+                throw fault(r, "state", "not a state", "gas|solid|liquid");
         }
     }
 
@@ -217,10 +218,10 @@ final class SpeciesFileReader {
     private ThermoModel mineral(Row r, String form, Species.State state) {
         MineralForm mf = MineralForm.fromCode(form);
         if (mf == null) {
-            throw fault(r, "form", "'" + form + "' is not a form", "nasa9|hp|berman|rh95|maier-kelley");
+            throw fault(r, "form", "not a form", "nasa9|hp|berman|rh95|maier-kelley");
         }
         if (state == Species.State.GAS) {
-            throw fault(r, "form", "mineral form '" + form + "' for a gas", "nasa9 for gases");
+            throw fault(r, "form", "a mineral form for a gas", "nasa9 for gases");
         }
         double lo = temperature(r, "T_min_K", false);
         double hi = temperature(r, "T_max_K", true);
@@ -242,7 +243,7 @@ final class SpeciesFileReader {
         String accepted = "a temperature > 0 in K" + (mayBeEmpty ? ", or empty" : "");
         double t = number(r, column, v, accepted);
         if (!(t > 0)) {
-            throw fault(r, column, "'" + v + "' is not positive", accepted);
+            throw fault(r, column, "not positive", accepted);
         }
         return t;
     }
@@ -255,11 +256,11 @@ final class SpeciesFileReader {
             }
             return d;
         } catch (NumberFormatException ex) {
-            throw fault(r, column, "'" + v + "' is not a finite number", accepted);
+            throw fault(r, column, "not a finite number", accepted);
         }
     }
 
-    private DataFormatException fault(Row r, String field, String problem, String accepted) {
-        return new DataFormatException(file, r.line(), field, problem, accepted);
+    private InputException fault(Row r, String field, String problem, String accepted) {
+        return InputException.atField(file, r.line(), field, r.get(field), problem, accepted);
     }
 }

@@ -6,6 +6,8 @@ import java.io.Reader;
 import java.util.LinkedHashSet;
 import java.util.Set;
 
+import org.nebulith.errors.InputException;
+
 /**
  * Reads a list of species ids, one per line; blank lines and lines starting with {@code #} are
  * ignored. Every id must name a species of the expected kind in the data set.
@@ -20,7 +22,7 @@ public final class SpeciesListReader {
      * @param dataSet  the data set the ids must belong to
      * @param gas      true for a list of gases, false for condensed species
      * @return the ids, in file order
-     * @throws DataFormatException naming file and line for an unknown id or one of the wrong kind
+     * @throws InputException naming file and line for an unknown id or one of the wrong kind
      * @throws IOException on read failure
      */
     public static Set<String> read(Reader in, String name, DataSet dataSet, boolean gas) throws IOException {
@@ -38,15 +40,14 @@ public final class SpeciesListReader {
                     continue;
                 }
                 if (!known.contains(id)) {
-                    throw new DataFormatException(name, lineNo, "species id",
-                            "'" + org.nebulith.errors.Messages.echo(id) + "' is not a " + (gas ? "gas" : "condensed") + " species of data set "
-                                    + dataSet.name(), "ids as spelled in the data set, one per line, # for comments");
+                    throw InputException.atField(name, lineNo, "species id", id,
+                            "not a " + (gas ? "gas" : "condensed") + " species of data set " + dataSet.name(), "ids as spelled in the data set, one per line, # for comments");
                 }
                 ids.add(id);
             }
         }
         if (ids.isEmpty()) {
-            throw new DataFormatException(name, 0, "species id", "the list is empty",
+            throw InputException.atField(name, 0, "species id", "", "the list is empty",
                     "at least one species id, one per line");
         }
         return ids;

@@ -29,6 +29,7 @@ public final class LocalCondensation {
     private final TreeMap<Double, Local> cache = new TreeMap<>();
     private final NavigableMap<Double, Local> reference;
     private int solved;
+    private long firstSolveNanos;
 
     /**
      * The local state at one radius.
@@ -85,18 +86,31 @@ public final class LocalCondensation {
         return solved;
     }
 
+    /** @return wall time of the first equilibrium this instance solved [ns] (0 before it) */
+    public long firstSolveNanos() {
+        return firstSolveNanos;
+    }
+
     /**
      * @param s the disk state at r
-     * @return the local condensation (cached by r)
+     * @return the local condensation (cached by r for one disk: a state of another disk at a cached
+     *         radius, with another temperature or pressure, starts a new cache)
      */
     public Local at(DiskState s) {
         Local hit = cache.get(s.rAU());
         if (hit != null) {
-            return hit;
+            if (sameConditions(hit.state(), s)) {
+                return hit;
+            }
+            cache.clear();
         }
         double tEq = Math.max(s.temperatureK(), floorK);
         EquilibriumProblem pr = new EquilibriumProblem(system, tEq, s.pressureBar(), totalsPerGram);
+        long start = solved == 0 ? System.nanoTime() : 0;
         EquilibriumResult r = solver.solve(pr, warmStart(s.rAU(), tEq));
+        if (solved == 0) {
+            firstSolveNanos = System.nanoTime() - start;
+        }
         solved++;
         double ice = 0;
         if (s.temperatureK() < floorK && waterIndex >= 0) {
@@ -105,6 +119,10 @@ public final class LocalCondensation {
         Local l = new Local(s, tEq, r, ice);
         cache.put(s.rAU(), l);
         return l;
+    }
+
+    private static boolean sameConditions(DiskState a, DiskState b) {
+        return a.temperatureK() == b.temperatureK() && a.pressureBar() == b.pressureBar();
     }
 
     /** @return an unmodifiable copy of the states solved so far, by radius (a warm-start reference) */

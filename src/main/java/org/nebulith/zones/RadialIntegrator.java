@@ -34,8 +34,8 @@ import org.nebulith.errors.NumericalException;
  * {@link NumericalException} naming the zone and the radius, T and P of the worst panel.
  */
 public final class RadialIntegrator {
-    /** Default relative tolerance. */
-    public static final double DEFAULT_REL_TOL = 1e-9;
+    /** Default relative tolerance (report grade; the one default of the zone integration). */
+    public static final double DEFAULT_REL_TOL = 1e-7;
     /** Default Gauss-Legendre points per panel. */
     public static final int DEFAULT_POINTS = 8;
     /**
@@ -89,9 +89,20 @@ public final class RadialIntegrator {
         }
     }
 
-    /** @return an integrator with the defaults (1e-9, 8 points, 2 initial panels, 200000 evaluations) */
+    /** Default evaluation budget of one adaptive integration. */
+    public static final int DEFAULT_MAX_EVALUATIONS = 200_000;
+
+    /** @return an integrator with the defaults (1e-7, 8 points, 2 initial panels, 200000 evaluations) */
     public static RadialIntegrator defaults() {
-        return new RadialIntegrator(DEFAULT_REL_TOL, DEFAULT_POINTS, 2, 200_000);
+        return new RadialIntegrator(DEFAULT_REL_TOL, DEFAULT_POINTS, 2, DEFAULT_MAX_EVALUATIONS);
+    }
+
+    /**
+     * @param points Gauss-Legendre points per panel
+     * @return an integrator for {@link #integrateFixed} (its adaptive settings are the defaults)
+     */
+    public static RadialIntegrator gaussRule(int points) {
+        return new RadialIntegrator(DEFAULT_REL_TOL, points, 2, DEFAULT_MAX_EVALUATIONS);
     }
 
     /**

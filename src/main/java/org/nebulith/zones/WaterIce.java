@@ -1,5 +1,7 @@
 package org.nebulith.zones;
 
+import org.nebulith.thermo.Formula;
+
 /**
  * Water ice in equilibrium with the gas below the floor temperature of the condensation
  * calculation: vapour in excess of the saturation pressure of hexagonal ice condenses.
@@ -9,6 +11,9 @@ package org.nebulith.zones;
  * Caution: only water ice is modelled; CO, CO2, CH4 and NH3 ices and clathrates are not.
  */
 public final class WaterIce {
+    /** The formula of water, H2O (parsed once, shared by every user). */
+    public static final Formula FORMULA = Formula.parse("H:2 O:1");
+
     /** Lowest temperature of the saturation formula [K]. */
     public static final double T_MIN_K = 110.0;
 

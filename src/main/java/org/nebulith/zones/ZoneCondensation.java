@@ -8,7 +8,6 @@ import java.util.Map;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskState;
 import org.nebulith.equilibrium.ChemicalSystem;
-import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.errors.NumericalException;
 
 /**
@@ -41,15 +40,25 @@ public final class ZoneCondensation {
     /**
      * @param panels number of equal panels
      * @param points Gauss-Legendre points per panel
-     * @return a fixed composite rule without front search ({@link RadialIntegrator#integrateFixed})
+     * @return a fixed composite rule without front search ({@link RadialIntegrator#integrateFixed}); the
+     *         front-search settings do not apply
      */
     public static ZoneCondensation fixed(int panels, int points) {
-        return new ZoneCondensation(new RadialIntegrator(1e-3, points, 1, 1_000_000), 2, 1e-3, panels);
+        if (panels < 1) {
+            throw new IllegalArgumentException("need at least one panel, got " + panels);
+        }
+        return new ZoneCondensation(RadialIntegrator.gaussRule(points), 0, Double.NaN, panels);
     }
 
-    /** @return settings for reports: 1e-7 relative, 8-point panels, 48 front samples */
+    /** Grid points per zone of the front search of {@link #defaults()}. */
+    public static final int DEFAULT_FRONT_SAMPLES = 48;
+
+    /**
+     * @return settings for reports: {@link RadialIntegrator#defaults()} (1e-7 relative, 8-point panels),
+     *         48 front samples, fronts bisected to the same 1e-7 of the zone width
+     */
     public static ZoneCondensation defaults() {
-        return new ZoneCondensation(new RadialIntegrator(1e-7, 8, 2, 200_000), 48, 1e-7);
+        return new ZoneCondensation(RadialIntegrator.defaults(), DEFAULT_FRONT_SAMPLES, RadialIntegrator.DEFAULT_REL_TOL);
     }
 
     /**
@@ -136,7 +145,7 @@ public final class ZoneCondensation {
     private static LocalCondensation.Local solve(FeedingZone zone, LocalCondensation local, DiskState s) {
         try {
             return local.at(s);
-        } catch (ConvergenceException | NumericalException e) {
+        } catch (NumericalException e) {
             throw NumericalException.inZone(zone.name(), s.rAU(), s.temperatureK(), s.pressureBar(), e.getMessage(), e);
         }
     }

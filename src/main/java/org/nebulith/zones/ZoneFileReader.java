@@ -9,8 +9,8 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.Set;
 
-import org.nebulith.disk.DiskFormatException;
 import org.nebulith.disk.DiskModel;
+import org.nebulith.errors.InputException;
 
 /**
  * Reads a feeding-zone file: {@code #} comment lines, then a header starting exactly
@@ -35,7 +35,7 @@ public final class ZoneFileReader {
      * @param disk the disk the zones must lie in
      * @return the zones in file order
      * @throws IOException on read failure
-     * @throws DiskFormatException on bad content
+     * @throws InputException on bad content
      */
     public static List<FeedingZone> read(Reader in, String name, DiskModel disk) throws IOException {
         List<FeedingZone> zones = new ArrayList<>();
@@ -60,7 +60,7 @@ public final class ZoneFileReader {
             }
         }
         if (zones.isEmpty()) {
-            throw new DiskFormatException(name, 0, "zone", "no zones", "header " + HEADER + " and one row per planet");
+            throw InputException.atField(name, 0, "zone", "", "no zones", "header " + HEADER + " and one row per planet");
         }
         return List.copyOf(zones);
     }
@@ -72,28 +72,28 @@ public final class ZoneFileReader {
         if (line.equals(HEADER + "," + PLANET_MASS)) {
             return 5;
         }
-        throw new DiskFormatException(name, lineNo, "header", "found '" + org.nebulith.errors.Messages.echo(line) + "'",
+        throw InputException.atField(name, lineNo, "header", line, "not the header",
                 HEADER + " optionally followed by ," + PLANET_MASS);
     }
 
     private static FeedingZone parseRow(String[] f, int columns, String name, int lineNo) {
         if (f.length != columns) {
-            throw new DiskFormatException(name, lineNo, "row", f.length + " fields", columns + " fields as in the header");
+            throw InputException.atField(name, lineNo, "row", String.join(",", f), f.length + " fields", columns + " fields as in the header");
         }
         String zone = f[0].strip();
         if (zone.isEmpty()) {
-            throw new DiskFormatException(name, lineNo, "zone", "empty name", "a zone (planet) name");
+            throw InputException.atField(name, lineNo, "zone", f[0], "empty name", "a zone (planet) name");
         }
         KernelShape shape = KernelShape.fromToken(f[1]);
         if (shape == null) {
-            throw new DiskFormatException(name, lineNo, "shape", "unknown shape '" + org.nebulith.errors.Messages.echo(f[1].strip()) + "'", "tophat, gaussian");
+            throw InputException.atField(name, lineNo, "shape", f[1], "unknown shape", "tophat, gaussian");
         }
         double rc = positive(f[2], "r_center_AU", name, lineNo);
         double hw = positive(f[3], "half_width_AU", name, lineNo);
         OptionalDouble mass = columns == 5 && !f[4].isBlank()
                 ? OptionalDouble.of(positive(f[4], PLANET_MASS, name, lineNo)) : OptionalDouble.empty();
         if (rc - shape.supportInHalfWidths() * hw <= 0) {
-            throw new DiskFormatException(name, lineNo, "half_width_AU", "kernel reaches r <= 0",
+            throw InputException.atField(name, lineNo, "half_width_AU", hw, "kernel reaches r <= 0",
                     "half_width_AU < r_center_AU / " + shape.supportInHalfWidths());
         }
         return new FeedingZone(zone, shape, rc, hw, mass);
@@ -104,10 +104,10 @@ public final class ZoneFileReader {
         try {
             v = Double.parseDouble(s.strip());
         } catch (NumberFormatException e) {
-            throw new DiskFormatException(name, lineNo, field, "'" + org.nebulith.errors.Messages.echo(s.strip()) + "' is not a number", "a finite number > 0");
+            throw InputException.atField(name, lineNo, field, s, "not a number", "a finite number > 0");
         }
         if (!(v > 0) || Double.isInfinite(v)) {
-            throw new DiskFormatException(name, lineNo, field, "value " + s.strip(), "a finite number > 0");
+            throw InputException.atField(name, lineNo, field, s, "out of range", "a finite number > 0");
         }
         return v;
     }
@@ -115,14 +115,14 @@ public final class ZoneFileReader {
     private static void check(FeedingZone z, List<FeedingZone> previous, Set<String> names, DiskModel disk,
                               String name, int lineNo) {
         if (names.contains(z.name())) {
-            throw new DiskFormatException(name, lineNo, "zone", "name '" + z.name() + "' repeated", "unique zone names");
+            throw InputException.atField(name, lineNo, "zone", z.name(), "name repeated", "unique zone names");
         }
         if (!previous.isEmpty() && !(z.rCenterAU() > previous.get(previous.size() - 1).rCenterAU())) {
-            throw new DiskFormatException(name, lineNo, "r_center_AU", z.rCenterAU() + " AU does not increase on the previous row",
+            throw InputException.atField(name, lineNo, "r_center_AU", z.rCenterAU(), "does not increase on the previous row",
                     "one row per planet, r_center_AU increasing");
         }
         if (z.rInnerAU() < disk.rMinAU() || z.rOuterAU() > disk.rMaxAU()) {
-            throw new DiskFormatException(name, lineNo, "r_center_AU", "zone spans " + z.rInnerAU() + "-" + z.rOuterAU()
+            throw InputException.atField(name, lineNo, "r_center_AU", z.rCenterAU(), "zone spans " + z.rInnerAU() + "-" + z.rOuterAU()
                     + " AU (" + z.shape().token() + ")", "zones inside the disk's range " + disk.rMinAU() + "-"
                     + disk.rMaxAU() + " AU");
         }

@@ -4,9 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,7 +20,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.StandInEstimators;
 import org.nebulith.survey.SurveySettings;
@@ -39,8 +37,7 @@ class BadInputTest {
     @TempDir
     Path dir;
 
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = commandLine();
 
     /** A survey whose estimate waits for a signal at its first draw (to hold a run open). */
     @Command(name = "survey-held")
@@ -63,19 +60,16 @@ class BadInputTest {
         }
     }
 
-    private int run(final String... args) {
-        out.reset();
-        err.reset();
-        return runInto(out, err, args);
+    private static CliRun commandLine() {
+        return new CliRun(() -> List.of(new SurveyCommandTest.StandInSurvey(), new HeldSurvey()));
     }
 
-    private static int runInto(final ByteArrayOutputStream o, final ByteArrayOutputStream e, final String... args) {
-        return Main.run(args, new PrintStream(o, true, StandardCharsets.UTF_8), new PrintStream(e, true,
-                StandardCharsets.UTF_8), List.of(new SurveyCommandTest.StandInSurvey(), new HeldSurvey()));
+    private int run(final String... args) {
+        return cli.run(args);
     }
 
     private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+        return cli.err();
     }
 
     private List<String> listing() throws IOException {
@@ -138,11 +132,11 @@ class BadInputTest {
         "planet --disk {d}/ff-disk.csv --out {d}/o | {d}/ff-disk.csv: line 3: byte 0xFF is not UTF-8 text",
         "survey --catalogue {d}/ff-catalogue.csv --out {d}/o | {d}/ff-catalogue.csv: line 5: byte 0xFF",
         "point --composition {d}/ff-composition.csv --T-K 1500 --P-bar 1e-4 | {d}/ff-composition.csv: line 4: byte 0xFF",
-        "point --composition {d}/zero.csv --T-K 1500 --P-bar 1e-4 | {d}/zero.csv: field 'value': every amount is zero",
+        "point --composition {d}/zero.csv --T-K 1500 --P-bar 1e-4 | {d}/zero.csv: line 0: field \"value\": value \"\": every amount is zero",
         "point --elements H=0,Mg=0 --T-K 1500 --P-bar 1e-4 | option --elements: value \"H=0,Mg=0\": every amount is zero",
-        "point --composition {d}/eps400.csv --T-K 1500 --P-bar 1e-4 | {d}/eps400.csv:3: field 'value': log eps 400 is outside",
+        "point --composition {d}/eps400.csv --T-K 1500 --P-bar 1e-4 | {d}/eps400.csv: line 3: field \"value\": value \"400\": log eps outside",
         "point --dust-enrichment 1e308 --T-K 1500 --P-bar 1e-4 | option --dust-enrichment: value \"1.0E308\"",
-        "point --composition {d}/huge.csv --T-K 1500 --P-bar 1e-4 | ... (20000000 characters)' is not a number",
+        "point --composition {d}/huge.csv --T-K 1500 --P-bar 1e-4 | ... (20000000 characters)\": not a number",
         "point --T-K 1500 --P-bar 1e-4 --out {d}/existing --force | {d}/existing: cannot write the output here: it is a folder",
         "point --T-K 1500 --P-bar 1e-4 --out {d}/dangling | {d}/dangling: cannot write the output here: it is a dangling",
         "sequence --out {d}/dangling | {d}/dangling: cannot write the output here: it is a dangling symbolic link",
@@ -194,7 +188,7 @@ class BadInputTest {
     @Test
     void aSurveyPartialThatIsNotUtf8IsNamed() throws IOException {
         Path outDir = dir.resolve("s");
-        Path partial = org.nebulith.survey.LocalSurvey.partialTable(outDir);
+        Path partial = org.nebulith.report.survey.LocalSurvey.partialTable(outDir);
         Files.createDirectories(partial.getParent());
         Files.write(partial, ("star,zone,quantity,median,p16,p84,unit,nominal,draws\nNDC Alder,host,Mg_Si_molar,1"
                 + "\n").getBytes(StandardCharsets.UTF_8));
@@ -210,9 +204,9 @@ class BadInputTest {
         HeldSurvey.started = new CountDownLatch(1);
         HeldSurvey.release = new CountDownLatch(1);
         Path x = dir.resolve("X");
-        ByteArrayOutputStream firstErr = new ByteArrayOutputStream();
+        CliRun firstRun = commandLine();
         int[] firstCode = {-1};
-        Thread first = new Thread(() -> firstCode[0] = runInto(new ByteArrayOutputStream(), firstErr, "survey-held",
+        Thread first = new Thread(() -> firstCode[0] = firstRun.run("survey-held",
                 "--catalogue", "presets/demo-catalogue.csv", "--draws", "20", "--threads", "1", "--seed", "7",
                 "--out", x.toString(), "--force"));
         first.start();
@@ -227,7 +221,7 @@ class BadInputTest {
             HeldSurvey.release.countDown();
             first.join(120_000);
         }
-        assertEquals(0, firstCode[0], firstErr.toString(StandardCharsets.UTF_8));
+        assertEquals(0, firstCode[0], firstRun.err());
         assertTrue(Files.readString(x.resolve("survey-notes.txt")).contains("seed: 7"));
         assertTrue(Files.readString(x.resolve(".nebulith-run")).contains("command = survey"));
         assertFalse(Files.exists(RunFolder.unfinished(x)));
@@ -291,8 +285,9 @@ class BadInputTest {
         Path cat = Files.writeString(dir.resolve("huge-cat.csv"), "star,Fe_H,Fe_H_err\n" + "S".repeat(5_000_000) + ","
                 + "9".repeat(5_000_000) + ",0.05\n");
         assertEquals(2, run("survey-standin", "--catalogue", cat.toString(), "--out", dir.resolve("o").toString()));
-        assertTrue(err().contains("star '" + "S".repeat(80) + "... (5000000 characters)': value " + "9".repeat(80)
-                + "... (5000000 characters) is out of range"), err().substring(0, Math.min(2000, err().length())));
+        assertTrue(err().contains("field \"Fe_H\": value \"" + "9".repeat(80) + "... (5000000 characters)\": star '"
+                + "S".repeat(80) + "... (5000000 characters)': out of range"), err().substring(0, Math.min(2000,
+                err().length())));
         assertTrue(err().length() < 1500, err().length() + " characters");
     }
 

@@ -4,9 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -18,21 +15,17 @@ import org.nebulith.thermo.audit.AuditReport;
 class DataAuditCommandTest {
     @TempDir
     Path dir;
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun();
 
     private int run(String... args) {
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8));
+        return cli.run(args);
     }
 
     @Test
     void writesTheMarkdownAndCsvReports() throws Exception {
         Path o = dir.resolve("audit");
         assertEquals(0, run("data-audit", "--sources", "src/data/thermo-sources", "--out", o.toString()),
-                err.toString(StandardCharsets.UTF_8));
+                cli.err());
         String csv = Files.readString(o.resolve("data-audit.csv"));
         assertTrue(csv.startsWith(String.join(",", AuditReport.COLUMNS) + "\n"), csv.substring(0, 80));
         assertFalse(csv.contains(",new,"), "every finding accepted");
@@ -45,7 +38,7 @@ class DataAuditCommandTest {
     void aSourceFolderWithoutTheNasaFileIsOneLineExit2() {
         Path o = dir.resolve("audit2");
         assertEquals(2, run("data-audit", "--sources", dir.toString(), "--out", o.toString()));
-        String e = err.toString(StandardCharsets.UTF_8).strip();
+        String e = cli.err().strip();
         assertTrue(e.contains("--sources") && e.contains("nasa_glenn_thermo.inp") && !e.contains("\n"), e);
         assertFalse(Files.exists(o));
     }
@@ -53,7 +46,7 @@ class DataAuditCommandTest {
     @Test
     void twoFormsOfOneSolutionAreRefused() {
         assertEquals(2, run("point", "--T-K", "1500", "--P-bar", "1e-4", "--solutions", "olivine,olivine-fe-mg"));
-        String e = err.toString(StandardCharsets.UTF_8).strip();
+        String e = cli.err().strip();
         assertTrue(e.contains("--solutions") && e.contains("two solutions") && !e.contains("\n"), e);
     }
 
@@ -61,7 +54,7 @@ class DataAuditCommandTest {
     void unknownCiReferenceIsOneLineExit2() {
         assertEquals(2, run("point", "--T-K", "1500", "--P-bar", "1e-4", "--dust-enrichment", "2", "--ci-reference",
                 "orgueil1864"));
-        String e = err.toString(StandardCharsets.UTF_8).strip();
+        String e = cli.err().strip();
         assertTrue(e.contains("--ci-reference") && e.contains("lodders-palme-gail2009, palme-oneill2014"), e);
     }
 }

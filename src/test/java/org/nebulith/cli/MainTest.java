@@ -4,9 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -18,7 +15,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.NumericalException;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -51,7 +48,7 @@ class MainTest {
         protected int execute(final RunContext context) {
             seen = context;
             switch (fail) {
-                case "input": throw InputException.atField("zones.csv", 3, "shape", "unknown shape 'box'",
+                case "input": throw InputException.atField("zones.csv", 3, "shape", "box", "unknown shape",
                         "tophat, gaussian");
                 case "numerical": throw NumericalException.noConvergence(1400, 1e-4, "H=1,O=5e-4", 100, 1e-3);
                 case "illegal": throw new IllegalArgumentException("bad thing in a reader");
@@ -67,28 +64,26 @@ class MainTest {
         }
     }
 
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
     private Probe probe;
+    private final CliRun cli = new CliRun(() -> {
+        probe = new Probe();
+        return List.of(probe);
+    });
 
     private int run(final String... args) {
-        probe = new Probe();
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), List.of(probe));
+        return cli.run(args);
     }
 
     private String out() {
-        return out.toString(StandardCharsets.UTF_8);
+        return cli.out();
     }
 
     private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+        return cli.err();
     }
 
     @ParameterizedTest
-    @CsvSource({"input,2", "numerical,3", "illegal,2", "bug,1"})
+    @CsvSource({"input,2", "numerical,3", "illegal,1", "bug,1"})
     void failuresMapToExitCodesWithOneLineAndNoStackTrace(final String kind, final int code) {
         assertEquals(code, run("probe", "--fail", kind, "--out", dir.resolve("o").toString()));
         String[] lines = err().strip().split("\n");
@@ -162,7 +157,7 @@ class MainTest {
     void presetErrorsNameFileLineAndField() throws Exception {
         Path unknown = Files.writeString(dir.resolve("a.settings"), "T-K = 1500\nzones = z.csv\n");
         assertEquals(2, run("probe", "--preset", unknown.toString(), "--out", dir.resolve("o").toString()));
-        assertTrue(err().contains(unknown + ": line 2: field \"zones\": not a setting of the 'probe' command"),
+        assertTrue(err().contains(unknown + ": line 2: field \"zones\": value \"z.csv\": not a setting of the 'probe' command"),
                 err());
         Path badValue = Files.writeString(dir.resolve("b.settings"), "\nT-K = hot\n");
         assertEquals(2, run("probe", "--preset", badValue.toString()));

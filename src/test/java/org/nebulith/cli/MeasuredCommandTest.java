@@ -4,35 +4,30 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** {@code nebulith measured} and {@code nebulith interior} through the command line. */
+@Tag("slow")
 class MeasuredCommandTest {
     private static final String HEADER = "planet,star,mass_Mearth,mass_err_Mearth,radius_Rearth,radius_err_Rearth\n";
 
     @TempDir
     Path dir;
 
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun();
 
     private int run(final String... args) {
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), List.of());
+        return cli.run(args);
     }
 
     private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+        return cli.err();
     }
 
     @Test
@@ -46,7 +41,7 @@ class MeasuredCommandTest {
         String html = Files.readString(o.resolve("report.html"));
         assertTrue(html.contains("mass-radius") && html.contains("core-fraction-comparison"), "both charts in the report");
         assertTrue(Files.size(o.resolve("mass-radius.png")) > 1000 && Files.size(o.resolve("core-fraction-comparison.png")) > 1000);
-        String text = out.toString(StandardCharsets.UTF_8);
+        String text = cli.out();
         assertTrue(text.contains("NDC Alder b (NDC Alder)"), text);
     }
 
@@ -58,7 +53,7 @@ class MeasuredCommandTest {
             {"b,NDC Alder,1,0,1,0.05", "mass_err_Mearth"},
             {"b,NDC Alder,1,0.1,1,-0.05", "radius_err_Rearth"},
             {"b,NDC Alder,1,0.1,4.0,0.05", "larger than any rocky body"},
-            {"b,No Such Star,1,0.1,1,0.05", "unknown star 'No Such Star'"},
+            {"b,No Such Star,1,0.1,1,0.05", "value \"No Such Star\": unknown star"},
         };
         for (String[] c : cases) {
             Path f = Files.writeString(dir.resolve("p.csv"), HEADER + c[0] + "\n");

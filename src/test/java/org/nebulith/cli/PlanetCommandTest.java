@@ -4,10 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -16,6 +13,7 @@ import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nebulith.composition.AbundancePresets;
@@ -30,17 +28,14 @@ import org.nebulith.report.html.ChromiumProbe;
 import org.nebulith.zones.ZoneFileReader;
 
 /** {@code nebulith planet} in-process: outputs read back against the library's results, bad input. */
+@Tag("slow")
 class PlanetCommandTest {
     @TempDir
     Path dir;
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun();
 
     private int run(String... args) {
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8));
+        return cli.run(args);
     }
 
     private static List<CSVRecord> read(Path f) throws Exception {
@@ -55,7 +50,7 @@ class PlanetCommandTest {
         Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nwarm,tophat,1.5,0.1\n");
         Path outDir = dir.resolve("run");
         assertEquals(0, run("--quiet", "planet", "--composition", "protosolar-lodders2003", "--zones", zones.toString(),
-                "--profile-points", "12", "--out", outDir.toString()), err.toString(StandardCharsets.UTF_8));
+                "--profile-points", "12", "--out", outDir.toString()), cli.err());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",
                 "report.html", "summary.md", "radial-map.png", "radial-map.svg", "radial-map.pdf",
                 "planet-comparison.png")) {
@@ -93,8 +88,8 @@ class PlanetCommandTest {
         Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nfar,tophat,80,1\n");
         Path outDir = dir.resolve("run");
         assertEquals(2, run("planet", "--zones", zones.toString(), "--out", outDir.toString()));
-        String e = err.toString(StandardCharsets.UTF_8);
-        assertTrue(e.contains("far.csv:2") && e.contains("r_center_AU"), e);
+        String e = cli.err();
+        assertTrue(e.contains("far.csv: line 2") && e.contains("r_center_AU"), e);
         assertEquals(1, e.strip().lines().count(), e);
         assertFalse(Files.exists(outDir));
     }
@@ -104,7 +99,7 @@ class PlanetCommandTest {
         Path zones = dir.resolve("neg.csv");
         Files.writeString(zones, "zone,shape,r_center_AU,half_width_AU\nneg,gaussian,1.0,-0.1\n");
         assertEquals(2, run("planet", "--zones", zones.toString(), "--out", dir.resolve("run").toString()));
-        assertTrue(err.toString(StandardCharsets.UTF_8).contains("half_width_AU"), err.toString(StandardCharsets.UTF_8));
+        assertTrue(cli.err().contains("half_width_AU"), cli.err());
         assertFalse(Files.exists(dir.resolve("run")));
     }
 
@@ -112,7 +107,7 @@ class PlanetCommandTest {
     void badAbundanceErrorsAreBadInputBeforeAnyComputing() throws Exception {
         Path outDir = dir.resolve("err-run");
         assertEquals(2, run("planet", "--abundance-errors", "Fe=0.05,Xx=0.1", "--out", outDir.toString()));
-        String e = err.toString(StandardCharsets.UTF_8);
+        String e = cli.err();
         assertTrue(e.contains("--abundance-errors") && e.contains("Xx=0.1"), e);
         assertEquals(1, e.strip().lines().count(), e);
         assertFalse(Files.exists(outDir));
@@ -134,7 +129,7 @@ class PlanetCommandTest {
         Path outDir = dir.resolve("flat");
         assertEquals(0, run("--quiet", "planet", "--composition", "protosolar-lodders2003", "--disk", diskFile.toString(),
                 "--zones", zones.toString(), "--profile-points", "12", "--out", outDir.toString()),
-                err.toString(StandardCharsets.UTF_8));
+                cli.err());
         Map<String, Double> csv = new HashMap<>();
         for (CSVRecord r : read(outDir.resolve("bulk-composition.csv"))) {
             csv.put(r.get("quantity"), r.get("value").isEmpty() ? null : Double.parseDouble(r.get("value")));
@@ -156,8 +151,8 @@ class PlanetCommandTest {
         Path outDir = dir.resolve("hot");
         assertEquals(0, run("planet", "--composition", "protosolar-lodders2003", "--disk", "hot-early-disk",
                 "--zones", zones.toString(), "--profile-points", "12", "--out", outDir.toString()),
-                err.toString(StandardCharsets.UTF_8));
-        String e = err.toString(StandardCharsets.UTF_8);
+                cli.err());
+        String e = cli.err();
         assertTrue(e.contains("notice: zone 'Tessaly-b': its solids are ") && e.contains("% refractory oxides"), e);
         Map<String, String> b = new HashMap<>();
         for (CSVRecord r : read(outDir.resolve("bulk-composition.csv"))) {

@@ -4,12 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.PrintStream;
 import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -35,18 +32,10 @@ import org.nebulith.equilibrium.OracleCases;
 class PointCommandTest {
     @TempDir
     Path dir;
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun();
 
     private int run(String... args) {
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8));
-    }
-
-    private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+        return cli.run(args);
     }
 
     private Path copyList(String resource) throws IOException {
@@ -71,7 +60,7 @@ class PointCommandTest {
         Path csv = dir.resolve("state.csv");
         assertEquals(0, run("point", "--data", "nasa", "--gases", gases.toString(), "--condensed", condensed.toString(),
                 "--elements", c.inlineElements(), "--T-K", Double.toString(c.tK()), "--P-bar", Double.toString(c.pBar()),
-                "--out", csv.toString()), err());
+                "--out", csv.toString()), cli.err());
         List<CSVRecord> rows = parse(Files.readString(csv));
         assertEquals(List.of("species", "phase", "moles", "mole_fraction", "state", "data_id"),
                 rows.get(0).getParser().getHeaderNames());
@@ -97,18 +86,18 @@ class PointCommandTest {
             compared++;
         }
         assertTrue(compared > 20, "compared " + compared);
-        assertTrue(err().contains("condensed phases present"), err());
+        assertTrue(cli.err().contains("condensed phases present"), cli.err());
     }
 
     @Test
     void writesToStandardOutputWithoutAnOutFile() throws IOException {
         assertEquals(0, run("point", "--elements", "H=1,He=0.085,O=4.9e-4,C=2.7e-4,Mg=3.98e-5,Si=3.24e-5,Fe=2.88e-5",
-                "--T-K", "1300", "--P-bar", "1e-4"), err());
-        List<CSVRecord> rows = parse(out.toString(StandardCharsets.UTF_8));
+                "--T-K", "1300", "--P-bar", "1e-4"), cli.err());
+        List<CSVRecord> rows = parse(cli.out());
         Set<String> states = new TreeSet<>();
         rows.forEach(r -> states.add(r.get("state")));
         assertTrue(states.contains("gas") && states.size() > 1, "gas and condensed rows: " + states);
-        assertFalse(out.toString(StandardCharsets.UTF_8).contains("NaN"));
+        assertFalse(cli.out().contains("NaN"));
     }
 
     @Test
@@ -117,8 +106,8 @@ class PointCommandTest {
         Path csv = dir.resolve("never.csv");
         assertEquals(2, run("point", "--data", "nasa", "--gases", gases.toString(), "--elements", "H=1,O=5e-4,C=3e-4",
                 "--T-K", "1500", "--P-bar", "1e-3", "--out", csv.toString()));
-        String[] lines = err().strip().split("\n");
-        assertEquals(1, lines.length, err());
+        String[] lines = cli.err().strip().split("\n");
+        assertEquals(1, lines.length, cli.err());
         assertTrue(lines[0].contains("my-gases.txt") && lines[0].contains("line 3") && lines[0].contains("H2O-typo"),
                 lines[0]);
         assertFalse(Files.exists(csv), "nothing written");
@@ -127,8 +116,8 @@ class PointCommandTest {
     @Test
     void aNonPositiveTemperatureIsBadInput() {
         assertEquals(2, run("point", "--T-K", "-5", "--P-bar", "1e-4"));
-        assertTrue(err().contains("--T-K"), err());
+        assertTrue(cli.err().contains("--T-K"), cli.err());
         assertEquals(2, run("point", "--T-K", "1000"));
-        assertTrue(err().contains("--P-bar"), err());
+        assertTrue(cli.err().contains("--P-bar"), cli.err());
     }
 }

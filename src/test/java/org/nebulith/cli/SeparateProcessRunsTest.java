@@ -13,7 +13,7 @@ import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.nebulith.report.OutputLock;
+import org.nebulith.files.OutputLock;
 
 /**
  * Runs of the real command line in separate JVMs: outputs next to or above the working folder

@@ -4,11 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -17,10 +14,12 @@ import java.util.stream.Stream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Tag;
 import org.nebulith.thermo.PhaseNames;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import java.nio.charset.StandardCharsets;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.condensation.CondensationSequence;
@@ -37,6 +36,7 @@ import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.thermo.Element;
 
 /** {@code nebulith sequence} end to end: the four CSVs read back against a library run of the same settings. */
+@Tag("slow")
 class SequenceCommandTest {
     private static final String[] GRID = {"--T-max-K", "1700", "--T-min-K", "1300", "--T-step-K", "10", "--P-bar", "1e-4"};
 
@@ -45,15 +45,15 @@ class SequenceCommandTest {
     private static Path folder;
     private static int exit;
     private static CondensationSequence expected;
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun();
 
     @BeforeAll
     static void runOnce() {
         folder = dir.resolve("run");
         String[] args = Stream.concat(Stream.of("sequence", "--out", folder.toString()), Stream.of(GRID)).toArray(String[]::new);
-        exit = Main.run(args, new PrintStream(new ByteArrayOutputStream()), new PrintStream(new ByteArrayOutputStream()));
+        exit = new CliRun().run(args);
         ElementAbundances comp = AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances();
-        ChemicalSystem sys = SystemSpec.defaults().build(ChemistryOptions.elementsOf(comp));
+        ChemicalSystem sys = SystemSpec.defaults().build(comp.elements());
         double[] b = new double[sys.elementCount()];
         for (int j = 0; j < b.length; j++) {
             b[j] = comp.moles(sys.elements().get(j));
@@ -165,9 +165,8 @@ class SequenceCommandTest {
         Path path = dir.resolve("path.csv");
         Files.writeString(path, "# demo path of an invented disk\nT_K,P_bar\n1600,1e-4\n1500,-3\n");
         Path out = dir.resolve("bad-run");
-        int code = Main.run(new String[] {"sequence", "--path", path.toString(), "--out", out.toString()},
-                new PrintStream(new ByteArrayOutputStream()), new PrintStream(err, true, StandardCharsets.UTF_8));
-        String msg = err.toString(StandardCharsets.UTF_8).trim();
+        int code = cli.run("sequence", "--path", path.toString(), "--out", out.toString());
+        String msg = cli.err().trim();
         assertEquals(2, code, msg);
         assertTrue(msg.contains("path.csv") && msg.contains("line 4") && msg.contains("P_bar"), msg);
         assertEquals(1, msg.lines().count(), msg);
@@ -180,6 +179,6 @@ class SequenceCommandTest {
     @Test
     void existingFolderIsNotOverwrittenWithoutForce() {
         String[] args = Stream.concat(Stream.of("sequence", "--out", folder.toString()), Stream.of(GRID)).toArray(String[]::new);
-        assertEquals(2, Main.run(args, new PrintStream(new ByteArrayOutputStream()), new PrintStream(err)));
+        assertEquals(2, cli.run(args), cli.err());
     }
 }

@@ -4,9 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -25,8 +22,7 @@ class SurveyCommandTest {
     @TempDir
     Path dir;
 
-    private final ByteArrayOutputStream out = new ByteArrayOutputStream();
-    private final ByteArrayOutputStream err = new ByteArrayOutputStream();
+    private final CliRun cli = new CliRun(() -> List.of(new StandInSurvey(), new FailingSurvey()));
 
     /** The survey command with the fully condensed (mass-balance) stand-in as its estimate. */
     @Command(name = "survey-standin")
@@ -74,29 +70,22 @@ class SurveyCommandTest {
         }
     }
 
-    private int run(final String... args) {
-        out.reset();
-        err.reset();
-        return Main.run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), List.of(new StandInSurvey(), new FailingSurvey()));
-    }
-
-    private String err() {
-        return err.toString(StandardCharsets.UTF_8);
+    private int run(String... args) {
+        return cli.run(args);
     }
 
     @Test
     void demoCatalogueGivesTheTableWithTheRequiredColumns() throws Exception {
         Path outDir = dir.resolve("demo");
         assertEquals(0, run("survey-standin", "--catalogue", "presets/demo-catalogue.csv", "--draws", "40", "--seed", "7",
-                "--threads", "2", "--out", outDir.toString()), err());
+                "--threads", "2", "--out", outDir.toString()), cli.err());
         List<String> lines = Files.readAllLines(outDir.resolve("survey.csv"));
         assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws,n_draws,n_not_applicable", lines.get(0));
         assertTrue(lines.get(1).startsWith("NDC Alder,host,Mg_Si_molar,"), lines.get(1));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("NDC Tamarack,cold,Fe_Si_molar,")));
         assertTrue(Files.exists(outDir.resolve("survey-stars.csv")) && Files.exists(outDir.resolve("survey-notes.txt")));
         assertTrue(Files.size(outDir.resolve("survey-chart.png")) > 1000 && Files.exists(outDir.resolve("survey-chart.svg")));
-        assertTrue(err().contains("survey: 20 stars"), err());
+        assertTrue(cli.err().contains("survey: 20 stars"), cli.err());
     }
 
     @Test
@@ -104,9 +93,9 @@ class SurveyCommandTest {
         Path bad = Files.writeString(dir.resolve("bad.csv"), "star,Fe_H,Fe_H_err,Qq_H,Qq_H_err\nA,x,0.1,0,0\n");
         Path outDir = dir.resolve("never");
         assertEquals(2, run("survey-standin", "--catalogue", bad.toString(), "--out", outDir.toString()));
-        assertTrue(err().contains(bad + ": line 1: field \"Qq_H\": unknown element 'Qq'"), err());
-        assertTrue(err().contains("nothing was computed"), err());
-        assertFalse(err().contains("\tat "), "no stack trace");
+        assertTrue(cli.err().contains(bad + ": line 1: field \"Qq_H\": value \"Qq_H\": unknown element 'Qq'"), cli.err());
+        assertTrue(cli.err().contains("nothing was computed"), cli.err());
+        assertFalse(cli.err().contains("\tat "), "no stack trace");
         assertFalse(Files.exists(outDir));
     }
 
@@ -114,10 +103,10 @@ class SurveyCommandTest {
     void badOptionsExitTwo() {
         assertEquals(2, run("survey-standin", "--catalogue", "presets/demo-catalogue.csv", "--draws", "0",
                 "--out", dir.resolve("x").toString()));
-        assertTrue(err().contains("--draws"), err());
+        assertTrue(cli.err().contains("--draws"), cli.err());
         assertEquals(2, run("survey-standin", "--catalogue", "presets/demo-catalogue.csv", "--solar-reference", "sun1900",
                 "--out", dir.resolve("y").toString()));
-        assertTrue(err().contains("asplund2009, lodders2003"), err());
+        assertTrue(cli.err().contains("asplund2009, lodders2003"), cli.err());
         assertEquals(2, run("survey-standin", "--catalogue", dir.resolve("missing.csv").toString()));
     }
 
@@ -129,7 +118,7 @@ class SurveyCommandTest {
                 + "Smoke-A,0.1,0.05,0.05,0.04,0.08,0.04\n"
                 + "Smoke-B,-0.2,0.05,-0.15,0.04,-0.18,0.04\n");
         assertEquals(0, run("survey", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3", "--threads", "2",
-                "--out", dir.resolve("r").toString()), err());
+                "--out", dir.resolve("r").toString()), cli.err());
         List<String> lines = Files.readAllLines(dir.resolve("r").resolve("survey.csv"));
         assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws,n_draws,n_not_applicable", lines.get(0));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-B,earth-analogue,core_mass_fraction,")), lines.toString());
@@ -160,8 +149,8 @@ class SurveyCommandTest {
         for (String threads : List.of("1", "2")) {
             assertEquals(0, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
                     "--threads", threads, "--max-failed-fraction", "0.5", "--out", dir.resolve("t" + threads).toString()),
-                    err() + out.toString(StandardCharsets.UTF_8));
-            assertEquals("4 of 12 draws failed (failures.csv)", out.toString(StandardCharsets.UTF_8).strip());
+                    cli.err() + cli.out());
+            assertEquals("4 of 12 draws failed (failures.csv)", cli.out().strip());
         }
         for (String f : List.of("survey.csv", "failures.csv", "survey-stars.csv", "survey-notes.txt")) {
             assertEquals(Files.readString(dir.resolve("t1").resolve(f)), Files.readString(dir.resolve("t2").resolve(f)), f);
@@ -176,7 +165,7 @@ class SurveyCommandTest {
         // the default limit (1 % of the draws) is exceeded: exit 3, the partial results kept
         assertEquals(3, run("survey-failing", "--catalogue", cat.toString(), "--draws", "4", "--seed", "3",
                 "--out", dir.resolve("limit").toString()));
-        assertTrue(err().contains("4 of 12 draws failed, more than --max-failed-fraction 0.01"), err());
-        assertTrue(Files.exists(org.nebulith.survey.LocalSurvey.partialTable(dir.resolve("limit"))));
+        assertTrue(cli.err().contains("4 of 12 draws failed, more than --max-failed-fraction 0.01"), cli.err());
+        assertTrue(Files.exists(org.nebulith.report.survey.LocalSurvey.partialTable(dir.resolve("limit"))));
     }
 }

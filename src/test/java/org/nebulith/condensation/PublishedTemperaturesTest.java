@@ -62,7 +62,7 @@ class PublishedTemperaturesTest {
         // thermo-sources README 9: ds62 troilite and NASA FeS appear about 25 K apart
         assertEquals(25, SequenceProbe.firstAppearance(SequenceRuns.sulfide(1e-4, true), "troilite")
                 - SequenceProbe.sulfideAppearance(SequenceRuns.sulfide(1e-4, false)), 10);
-        assertEquals(664, troilite, 30, "with ds62 troilite S is within the issue's tolerance");
+        assertEquals(664, troilite, 30, "with ds62 troilite S is within the 30 K tolerance");
     }
 
     @Test

@@ -55,6 +55,22 @@ class ReferenceSequenceTest {
         sequence = new SequenceRunner(new EquilibriumSolver()).run(sys, totals, settings);
     }
 
+    /** Every state of the sequence is an equilibrium by the test side's own check (not the solver's). */
+    @Test
+    void everyStepPassesTheIndependentCheck() {
+        org.nebulith.equilibrium.IndependentCheck check =
+                new org.nebulith.equilibrium.IndependentCheck(SystemSpec.pure(DataSet.REFERENCE_PURE));
+        List<String> bad = new ArrayList<>();
+        for (org.nebulith.condensation.SequenceStep step : sequence.steps()) {
+            String f = check.check(step.result()).failure();
+            if (f != null) {
+                bad.add(step.temperatureK() + " K: " + f);
+            }
+        }
+        assertTrue(sequence.steps().size() > 300, "steps: " + sequence.steps().size());
+        assertTrue(bad.isEmpty(), String.join("; ", bad));
+    }
+
     private static List<CSVRecord> records(String name) throws IOException {
         try (Reader in = new InputStreamReader(ReferenceSequenceTest.class.getResourceAsStream(FOLDER + name),
                 StandardCharsets.UTF_8)) {

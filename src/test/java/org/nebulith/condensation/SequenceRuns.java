@@ -33,16 +33,6 @@ final class SequenceRuns {
         return AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances();
     }
 
-    static Set<Element> elementsOf(ElementAbundances comp) {
-        Set<Element> e = EnumSet.noneOf(Element.class);
-        comp.elements().forEach(x -> {
-            if (comp.moles(x) > 0) {
-                e.add(x);
-            }
-        });
-        return e;
-    }
-
     static double[] totals(ChemicalSystem sys, ElementAbundances comp) {
         double[] b = new double[sys.elementCount()];
         for (int j = 0; j < b.length; j++) {
@@ -53,7 +43,7 @@ final class SequenceRuns {
 
     static CondensationSequence run(List<Species> species, ElementAbundances comp, double pBar, double tMax,
                                     double tMin, double phi) {
-        ChemicalSystem sys = ChemicalSystem.of(elementsOf(comp), species, SolutionModels.all());
+        ChemicalSystem sys = ChemicalSystem.of(comp.elements(), species, SolutionModels.all());
         SequenceSettings s = new SequenceSettings(PressurePath.constant(pBar), tMax, tMin, 5, phi, 0.05);
         return new SequenceRunner(new EquilibriumSolver()).run(sys, totals(sys, comp), s);
     }

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.StringReader;
 
+import org.nebulith.errors.InputException;
+
 import org.junit.jupiter.api.Test;
 
 class TabulatedDiskTest {
@@ -16,7 +18,7 @@ class TabulatedDiskTest {
     }
 
     private static String failure(String body) {
-        return assertThrows(DiskFormatException.class, () -> read(body)).getMessage();
+        return assertThrows(InputException.class, () -> read(body)).getMessage();
     }
 
     @Test
@@ -51,15 +53,15 @@ class TabulatedDiskTest {
 
     @Test
     void badTablesNameFileLineAndField() {
-        assertTrue(failure("r_AU,T,P_bar,sigma_gas_g_cm2\n1,2,3,4\n").startsWith("disk.csv:1: field 'header'"));
+        assertTrue(failure("r_AU,T,P_bar,sigma_gas_g_cm2\n1,2,3,4\n").startsWith("disk.csv: line 1: field \"header\""));
         String m = failure(HEADER + "1,300,1e-5,100\n0.5,400,1e-4,200\n");
-        assertTrue(m.startsWith("disk.csv:3: field 'r_AU'"), m);
+        assertTrue(m.startsWith("disk.csv: line 3: field \"r_AU\""), m);
         m = failure(HEADER + "1,300,1e-5,100\n2,abc,1e-4,200\n");
-        assertTrue(m.startsWith("disk.csv:3: field 'T_K'"), m);
+        assertTrue(m.startsWith("disk.csv: line 3: field \"T_K\""), m);
         m = failure(HEADER + "1,300,-1e-5,100\n2,200,1e-4,200\n");
-        assertTrue(m.startsWith("disk.csv:2: field 'P_bar'"), m);
+        assertTrue(m.startsWith("disk.csv: line 2: field \"P_bar\""), m);
         m = failure(HEADER + "1,300,1e-5\n");
-        assertTrue(m.startsWith("disk.csv:2: field 'row'"), m);
+        assertTrue(m.startsWith("disk.csv: line 2: field \"row\""), m);
         m = failure(HEADER + "1,300,1e-5,100\n");
         assertTrue(m.contains("at least 2 rows"), m);
         assertTrue(!m.contains("\n"));

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.StringReader;
 
+import org.nebulith.errors.InputException;
+
 import org.junit.jupiter.api.Test;
 
 class ViscousIrradiatedDiskTest {
@@ -67,19 +69,19 @@ class ViscousIrradiatedDiskTest {
         assertTrue(d.temperatureK(1) > 300 && d.temperatureK(1) < 2000);
         String base = "parameter,value\nmodel,power-law\nT1_K,280\nq,0.5\nsigma1_g_cm2,1700\ns,1.5\n"
                 + "r_min_AU,0.1\nr_max_AU,40\n";
-        String m = assertThrows(DiskFormatException.class,
+        String m = assertThrows(InputException.class,
                 () -> DiskPresets.read(new StringReader(base + "pressure,hydrostatic\nM_star_Msun,1\n"), "d.csv")).getMessage();
-        assertTrue(m.startsWith("d.csv: field 'mu': missing"), m);
-        m = assertThrows(DiskFormatException.class,
+        assertTrue(m.startsWith("d.csv: line 0: field \"mu\": value \"\": missing"), m);
+        m = assertThrows(InputException.class,
                 () -> DiskPresets.read(new StringReader(base + "P1_bar,1e-5\np,3\ncolour,red\n"), "d.csv")).getMessage();
-        assertTrue(m.startsWith("d.csv:11: field 'colour'"), m);
-        m = assertThrows(DiskFormatException.class,
+        assertTrue(m.startsWith("d.csv: line 11: field \"colour\""), m);
+        m = assertThrows(InputException.class,
                 () -> DiskPresets.read(new StringReader(base + "P1_bar,x\np,3\n"), "d.csv")).getMessage();
-        assertTrue(m.startsWith("d.csv:9: field 'P1_bar'"), m);
-        m = assertThrows(DiskFormatException.class,
+        assertTrue(m.startsWith("d.csv: line 9: field \"P1_bar\""), m);
+        m = assertThrows(InputException.class,
                 () -> DiskPresets.read(new StringReader("parameter,value\nmodel,spiral\n"), "d.csv")).getMessage();
         assertTrue(m.contains("power-law, viscous-irradiated"), m);
-        m = assertThrows(DiskFormatException.class,
+        m = assertThrows(InputException.class,
                 () -> DiskPresets.read(new StringReader(base.replace("T1_K,280", "T1_K,-280") + "P1_bar,1\np,3\n"), "d.csv"))
                 .getMessage();
         assertTrue(m.contains("T1_K"), m);

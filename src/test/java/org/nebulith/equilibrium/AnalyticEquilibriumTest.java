@@ -38,9 +38,10 @@ class AnalyticEquilibriumTest {
     @ParameterizedTest(name = "T = {0} K, P = {1} bar")
     @CsvSource({"1000, 1", "1500, 1e-4", "2000, 1e-8", "2500, 1e-2", "3000, 1", "4000, 1e-6", "300, 1e-8"})
     void hydrogenDissociationFollowsItsEquilibriumConstant(double tK, double pBar) {
-        ChemicalSystem sys = only(Set.of("H", "H2"), Set.of()).build(EnumSet.of(Element.H));
+        SystemSpec spec = only(Set.of("H", "H2"), Set.of());
+        ChemicalSystem sys = spec.build(EnumSet.of(Element.H));
         EquilibriumResult r = new EquilibriumSolver().solve(EquilibriumProblem.of(sys, tK, pBar, Map.of(Element.H, 1.0)));
-        assertNull(ResultChecks.check(r));
+        assertNull(new IndependentCheck(spec).check(r).failure());
 
         double lnKp = -(2 * species("H").thermo().gOverRT(tK) - species("H2").thermo().gOverRT(tK));
         double k = Math.exp(lnKp) / pBar;
@@ -61,18 +62,19 @@ class AnalyticEquilibriumTest {
      * of lowest g valid at T. Outside values, from memory (no stored copy of the NIST-JANAF Fe(g)
      * table, Chase 1998, was found): the vapour-pressure table of the elements of the CRC Handbook of
      * Chemistry and Physics, which rests on the same assessments, gives 1 Pa over solid iron at
-     * 1728 K and 10 Pa over liquid iron at 1890 K; the 0.03 dex tolerance (about 2.5 K in temperature) reflects that the figures
-     * are recalled, not read.
+     * 1728 K and 10 Pa over liquid iron at 1890 K. Those figures could not be checked against a stored copy,
+     * so they are printed beside the computed pressure (report only), not asserted.
      */
     @ParameterizedTest(name = "T = {0} K")
     @CsvSource({"1728, Fe(d), 1", "1890, Fe(L), 10"})
     void ironVapourPressure(double tK, String stableEntry, double handbookPa) {
         Set<String> condensed = Set.of("Fe(a)", "Fe(c)", "Fe(d)", "Fe(L)");
-        ChemicalSystem sys = only(Set.of("Fe", "He"), condensed).build(EnumSet.of(Element.Fe, Element.He));
+        SystemSpec spec = only(Set.of("Fe", "He"), condensed);
+        ChemicalSystem sys = spec.build(EnumSet.of(Element.Fe, Element.He));
         double pBar = 1.0;
         EquilibriumResult r = new EquilibriumSolver().solve(
                 EquilibriumProblem.of(sys, tK, pBar, Map.of(Element.He, 1.0, Element.Fe, 1e-2)));
-        assertNull(ResultChecks.check(r));
+        assertNull(new IndependentCheck(spec).check(r).failure());
         assertEquals(List.of(stableEntry), r.presentPhaseNames(), "stable iron entry");
 
         double pFe = r.gasMoleFraction(sys.memberNames(0).indexOf("Fe")) * pBar;
@@ -85,7 +87,8 @@ class AnalyticEquilibriumTest {
                         other + " is less stable than " + stableEntry);
             }
         }
-        System.out.printf("iron vapour pressure at %.0f K: %.4g Pa (handbook %s Pa)%n", tK, pFe * 1e5, handbookPa);
-        assertEquals(Math.log10(handbookPa * 1e-5), Math.log10(pFe), 0.03, "CRC Handbook vapour pressure of iron, from memory");
+        // report only: the handbook figures are recalled, not read from a stored copy, so they are not asserted
+        System.out.printf("iron vapour pressure at %.0f K: %.4g Pa (handbook, from memory: %s Pa)%n", tK, pFe * 1e5,
+                handbookPa);
     }
 }

@@ -20,7 +20,8 @@ import org.junit.jupiter.params.provider.MethodSource;
  * as packaged in Debian rocketcea 1.1.18, with the NASA Glenn data it ships; see
  * {@code src/test/resources/oracle/README.md}): with the same species lists, data set {@code nasa}
  * and no solutions, the condensed phases present are the same, and every condensed amount and every
- * gas with mole fraction above 1e-15 agrees with CEA's polished mole numbers to 1e-6 relative.
+ * gas with mole fraction above 1e-15 agrees with CEA's polished mole numbers to 1e-6 relative; the
+ * result passes the {@link IndependentCheck}, and its total Gibbs energy is not above CEA's.
  */
 class OracleTest {
     /** Relative agreement required with {@code moles_polished}. */
@@ -47,7 +48,8 @@ class OracleTest {
         assertEquals(30, cases().size(), "the oracle has 30 cases");
         ChemicalSystem sys = system(c);
         EquilibriumResult r = new EquilibriumSolver().solve(EquilibriumProblem.of(sys, c.tK(), c.pBar(), c.amounts()));
-        assertNull(ResultChecks.check(r), "a posteriori checks");
+        IndependentCheck.Report report = new IndependentCheck(c.spec()).check(r);
+        assertNull(report.failure(), c.id() + ": independent check");
 
         assertEquals(c.present(), new TreeSet<>(r.presentPhaseNames()), c.id() + ": condensed phases present");
 
@@ -85,7 +87,32 @@ class OracleTest {
             }
         }
         assertTrue(compared > 10, "compared " + compared + " amounts");
+        assertGibbsNotAboveTheOracle(c, r, report);
         assertTrue(bad.isEmpty(), c.id() + ": " + bad);
+    }
+
+    /**
+     * Our total G/RT may not exceed CEA's (its polished amounts, evaluated with the same data and
+     * corrected to first order for their balance error): both minimise the same function, so a
+     * higher value would mean a worse minimum. Allowed excess: 1e-12 of |G| (rounding of the sums).
+     */
+    private static void assertGibbsNotAboveTheOracle(OracleCases.Case c, EquilibriumResult r, IndependentCheck.Report report) {
+        Map<String, Double> gas = new HashMap<>();
+        Map<String, Double> condensed = new HashMap<>();
+        for (OracleCases.Expected e : c.expected()) {
+            (e.gas() ? gas : condensed).put(e.species(), e.moles());
+        }
+        double oracle = new IndependentCheck(c.spec()).gibbs(r, gas, condensed, report.lambda());
+        double ours = report.gibbs();
+        assertTrue(ours <= oracle + 1e-12 * Math.abs(oracle),
+                String.format("%s: G/RT ours %.15e above CEA's %.15e", c.id(), ours, oracle));
+        recordGibbs(ours - oracle, Math.abs(oracle));
+    }
+
+    private static double gibbsWorst = Double.NEGATIVE_INFINITY;
+
+    private static synchronized void recordGibbs(double diff, double scale) {
+        gibbsWorst = Math.max(gibbsWorst, diff / scale);
     }
 
     private static synchronized void record(double rel, String where) {
@@ -98,5 +125,6 @@ class OracleTest {
     @AfterAll
     static void summary() {
         System.out.printf("oracle: largest relative difference %.2e (%s)%n", worst, worstAt);
+        System.out.printf("oracle: largest (G_ours - G_CEA)/|G_CEA| %.2e%n", gibbsWorst);
     }
 }

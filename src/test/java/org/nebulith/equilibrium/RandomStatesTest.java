@@ -8,6 +8,7 @@ import java.util.SplittableRandom;
 import java.util.stream.IntStream;
 import java.util.stream.Stream;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.nebulith.composition.AbundancePresets;
@@ -21,10 +22,11 @@ import org.nebulith.thermo.Element;
  * (log-uniform), C/O 0.1-2, dust enrichment 1-1000 (log-uniform) of the proto-solar gas (Lodders
  * 2003, Table 2, preset {@value AbundancePresets#PROTOSOLAR_LODDERS2003}) with CI-chondrite dust.
  * Default data set; three states in four with all solutions, one in four in pure-phase mode. Each
- * state is solved from a cold start and must pass the a posteriori checks of {@link ResultChecks}
- * (element balance 1e-10, equilibrium residuals, no supersaturated absent phase). A failure prints
+ * state is solved from a cold start and must pass the {@link IndependentCheck} (element balance
+ * 1e-10, refitted potentials, no supersaturated absent phase). A failure prints
  * the seed and the state so that it can be rerun alone.
  */
+@Tag("slow")
 class RandomStatesTest {
     /** Number of states. */
     static final int STATES = 300;
@@ -97,9 +99,9 @@ class RandomStatesTest {
             fail("state " + s + ": " + e.getMessage());
             return;
         }
-        String bad = ResultChecks.check(r);
+        SystemSpec spec = s.solutions() ? SystemSpec.defaults() : SystemSpec.defaults().withSolutions(java.util.List.of());
+        String bad = new IndependentCheck(spec).check(r).failure();
         assertTrue(bad == null, "state " + s + ": " + bad);
-        assertTrue(r.diagnostics().maxBalanceError() <= 1e-10, "state " + s + ": balance");
         double cFrac = r.condensedFraction(Element.Si);
         assertTrue(cFrac >= 0 && cFrac <= 1, "state " + s);
     }

@@ -60,10 +60,17 @@ class MessagesTest {
 
     @Test
     void inputMessageNamesFileLineFieldProblemAndAccepted() {
-        InputException e = InputException.atField("zones.csv", 7, "half_width_AU", "negative width -0.1",
+        InputException e = InputException.atField("zones.csv", 7, "half_width_AU", -0.1, "negative width",
                 "a number > 0");
-        assertEquals("zones.csv: line 7: field \"half_width_AU\": negative width -0.1; accepted: a number > 0",
+        assertEquals("zones.csv: line 7: field \"half_width_AU\": value \"-0.1\": negative width; accepted: a number > 0",
                 e.getMessage());
         assertEquals(Messages.BAD_INPUT_FIELD, e.key());
+    }
+
+    @Test
+    void longValuesAreCutTo80CharactersOnOneLine() {
+        String shown = InputException.shown("x".repeat(200) + "\nnext");
+        assertEquals("x".repeat(InputException.VALUE_SHOWN) + "... (205 characters)", shown);
+        assertEquals("a b", InputException.shown(" a\r\nb "));
     }
 }

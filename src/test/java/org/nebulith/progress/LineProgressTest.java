@@ -40,7 +40,7 @@ class LineProgressTest {
     void terminalBarWritesToItsSink() {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         try (PrintStream sink = new PrintStream(bytes, true, StandardCharsets.UTF_8);
-             Progress bar = Progress.open(ProgressMode.TERMINAL_BAR, "stars", 4, sink)) {
+             Progress bar = org.nebulith.progress.terminal.ProgressDisplays.open(ProgressMode.TERMINAL_BAR, "stars", 4, sink)) {
             bar.advance(4);
         }
         String text = bytes.toString(StandardCharsets.UTF_8);

@@ -45,7 +45,7 @@ class CatalogueReaderTest {
         "star,Fe_H,Fe_H_err,Mg_H_err|A,0.1,0.05,0.05|1|Mg_H_err|an error column without a value column",
         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,,0.05|2|Mg_H|an error without a value",
         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,0.1,|2|Mg_H_err|a value without an error",
-        "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,high,0.05|2|Mg_H|'high' is not a number",
+        "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,high,0.05|2|Mg_H|value \"high\"",
         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,0.1,-0.05|2|Mg_H_err|negative value",
         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,NaN,0.05|2|Mg_H|out of range",
         "star,Fe_H,Fe_H_err,Mg_H,Mg_H_err|A,0.1,0.05,7.6,0.05|2|Mg_H|out of range",

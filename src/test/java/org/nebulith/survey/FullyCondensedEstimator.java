@@ -15,7 +15,7 @@ import org.nebulith.thermo.Element;
  * cold-zone check also uses). It exercises the survey statistics; it is not the survey's science,
  * which comes from {@code SurveyCommand.estimator}.
  */
-final class FullyCondensedEstimator implements PlanetEstimator {
+public final class FullyCondensedEstimator implements PlanetEstimator {
 
     static final String ZONE = "cold";
     private static final Element[][] RATIOS = {

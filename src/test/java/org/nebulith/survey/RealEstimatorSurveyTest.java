@@ -8,6 +8,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -24,7 +25,8 @@ import org.nebulith.thermo.Element;
 import org.nebulith.zones.ZoneCondensation;
 import org.nebulith.zones.ZoneFileReader;
 
-/** The survey checks of issue 7 with the real planet estimate (not the mass-balance stand-in). */
+/** The survey checks with the real planet estimate (not the mass-balance stand-in). */
+@Tag("slow")
 class RealEstimatorSurveyTest {
     @TempDir
     static Path dir;

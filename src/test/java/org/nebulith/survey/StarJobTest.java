@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
@@ -20,6 +21,7 @@ import org.nebulith.thermo.Element;
  * The survey of one star. The planet estimate here is {@link FullyCondensedEstimator} (mass balance
  * in a cold zone); {@link #coldZoneEstimator()} is the one place to substitute the real estimate.
  */
+@Tag("slow")
 class StarJobTest {
 
     /** @return the estimator for the cold-zone checks (swap in the real planet estimate's cold zone here) */

@@ -6,15 +6,15 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** Test helpers: the demo catalogue and its rows. */
-final class SurveyTestData {
+public final class SurveyTestData {
 
     /** The demo catalogue of invented stars (repository file). */
-    static final Path DEMO = Path.of("presets", "demo-catalogue.csv");
+    public static final Path DEMO = Path.of("presets", "demo-catalogue.csv");
 
     private SurveyTestData() {
     }
 
-    static List<StarRow> demoRows() throws IOException {
+    public static List<StarRow> demoRows() throws IOException {
         List<StarRow> rows = new ArrayList<>();
         try (CatalogueReader r = CatalogueReader.open(DEMO)) {
             for (CatalogueReader.Parsed p = r.next(); p != null; p = r.next()) {
@@ -27,7 +27,7 @@ final class SurveyTestData {
         return rows;
     }
 
-    static SurveyRow find(List<SurveyRow> rows, String zone, String quantity) {
+    public static SurveyRow find(List<SurveyRow> rows, String zone, String quantity) {
         return rows.stream().filter(r -> r.zone().equals(zone) && r.quantity().equals(quantity)).findFirst()
                 .orElseThrow(() -> new AssertionError("no " + zone + "/" + quantity + " in " + rows));
     }

@@ -7,9 +7,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.nebulith.report.CellText;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.Table;
+import org.nebulith.files.CellText;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartFormat;
 
 /**

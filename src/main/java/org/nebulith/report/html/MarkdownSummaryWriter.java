@@ -2,9 +2,9 @@ package org.nebulith.report.html;
 
 import java.util.List;
 
-import org.nebulith.report.CellText;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.Table;
+import org.nebulith.files.CellText;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 
 /**
  * Writes the short Markdown summary of a {@link Report}: title, run line, the key tables

@@ -6,8 +6,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.Table;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartRenderer;
 
 /**

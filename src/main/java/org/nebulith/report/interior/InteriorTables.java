@@ -5,7 +5,7 @@ import java.util.List;
 import org.nebulith.measured.PlanetVerdict;
 import org.nebulith.planet.interior.ProfilePoint;
 import org.nebulith.planet.interior.Structure;
-import org.nebulith.report.Table;
+import org.nebulith.files.Table;
 
 /** The CSV tables of the interior and measured-planet commands. */
 public final class InteriorTables {

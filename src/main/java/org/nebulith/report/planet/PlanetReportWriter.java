@@ -11,38 +11,31 @@ import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
 import org.nebulith.format.Decimal;
-import org.nebulith.report.Table;
+import org.nebulith.report.Cautions;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;
+import org.nebulith.thermo.DataSet;
 import org.nebulith.zones.IntegrationQuality;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;
 
 /** Writes every output of a planet run into its run folder: tables, charts, HTML report, summary. */
 public final class PlanetReportWriter {
-    /** The cautions every planet report carries. */
-    public static final List<String> CAUTIONS = List.of(
-            "Equilibrium condensation with ideal solutions and no kinetics: real nebular solids may have formed "
-                    + "out of equilibrium, and non-ideal mixing shifts minor-element condensation.",
-            "Silicate and oxide liquids are not modelled; they can be stable at high pressure or strong dust "
-                    + "enrichment, where these results do not apply.",
-            "Results depend on the thermodynamic data (see the sources below); rerun with --variant for a "
-                    + "sensitivity test. No phosphide (schreibersite) data exist in the data set, so P condenses "
-                    + "late as phosphate; Mn has no silicate solution and condenses as metal.",
-            "Below the floor temperature the rock assemblage is frozen at its floor equilibrium; only water ice "
-                    + "is added there (from the ice vapour pressure); CO, CO2, CH4 and NH3 ices are not modelled.",
-            "The core-mantle split is bookkeeping of condensates (metal and sulfide to the core), not a model of "
-                    + "metal-silicate equilibration during differentiation; accretion is assumed to collect the "
-                    + "local solids in proportion to the zone weights, without radial drift.",
-            "The mass-radius relation (Zeng et al. 2016) is valid for 1-8 Earth masses and core mass fractions "
-                    + "0-0.4; values outside are extrapolations.");
+    /**
+     * @param chemistry description of the chemical system (data set and solutions)
+     * @return the cautions every planet report carries ({@link Cautions#planet})
+     */
+    public static List<String> cautions(String chemistry) {
+        return Cautions.planet(chemistry, DataSet.named(DataSet.DEFAULT).variants());
+    }
 
     /**
      * Everything the report shows.
@@ -87,10 +80,11 @@ public final class PlanetReportWriter {
 
     /**
      * @param planets the zone planets, inner first
-     * @return the standing {@link #CAUTIONS}, then one per pair of overlapping feeding zones
+     * @param chemistry description of the chemical system (data set and solutions)
+     * @return the standing cautions ({@link #cautions(String)}), then one per pair of overlapping feeding zones
      */
-    public static List<String> cautions(List<ZonePlanet> planets) {
-        List<String> all = new java.util.ArrayList<>(CAUTIONS);
+    public static List<String> cautions(String chemistry, List<ZonePlanet> planets) {
+        List<String> all = new java.util.ArrayList<>(cautions(chemistry));
         List<org.nebulith.zones.FeedingZone> zones = new java.util.ArrayList<>();
         planets.forEach(p -> zones.add(p.inventory().zone()));
         org.nebulith.zones.ZoneFileReader.overlaps(zones).forEach(line -> all.add(capitalised(line) + "."));
@@ -166,7 +160,7 @@ public final class PlanetReportWriter {
             integration.paragraph(integrationNote(zp));
         }
         data.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
-        cautions(data.planets()).forEach(report::caution);
+        cautions(data.chemistry(), data.planets()).forEach(report::caution);
         data.sources().forEach(c -> report.citation(c.key(), c.source()));
         report.inputs(data.inputs());
         for (String f : List.of("bulk-composition.csv", "comparison.csv", "zone-phases.csv", "radial-profile.csv",

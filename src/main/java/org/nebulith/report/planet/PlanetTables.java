@@ -16,7 +16,7 @@ import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
 import org.nebulith.report.FormulaText;
-import org.nebulith.report.Table;
+import org.nebulith.files.Table;
 import org.nebulith.thermo.PhaseNames;
 import org.nebulith.zones.LocalCondensation;
 import org.nebulith.zones.ZoneInventory;

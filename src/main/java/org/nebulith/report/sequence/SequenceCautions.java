@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 
+import org.nebulith.report.Cautions;
+import org.nebulith.thermo.DataSet;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Species;
 
@@ -22,21 +24,7 @@ public final class SequenceCautions {
      * @return the cautions, one sentence each
      */
     public static List<String> lines(String dataDescription, List<String> extrapolatedGases) {
-        List<String> c = new ArrayList<>();
-        c.add("Every state is full chemical equilibrium (no kinetics, no supersaturation) and the solutions mix "
-                + "ideally; real nebular condensates need not reach either.");
-        c.add("Silicate and oxide liquids are not modelled: they can be stable at high pressure or strong dust "
-                + "enrichment, where the assemblage shown (solids only) is then not the stable one.");
-        c.add("Results depend on the thermodynamic data (" + dataDescription + "); the gaseous Al species, the "
-                + "Ca-aluminates and FeS move some temperatures by tens of kelvin: rerun with --variant TAG "
-                + "(B88, ds62, Cemdata18, Geiger1988, RH95) for a sensitivity check.");
-        c.add("Not in the model: phosphide (schreibersite) and Mn-bearing silicate solutions, so P and Mn "
-                + "condense later, and in other hosts, than with them.");
-        if (!extrapolatedGases.isEmpty()) {
-            c.add("Gas species used below their lowest data temperature (extrapolated by up to 150 K, left out below that): "
-                    + String.join(", ", extrapolatedGases) + ".");
-        }
-        return c;
+        return Cautions.sequence(dataDescription, DataSet.named(DataSet.DEFAULT).variants(), extrapolatedGases);
     }
 
     /**

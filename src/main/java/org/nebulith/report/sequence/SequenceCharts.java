@@ -13,7 +13,7 @@ import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.format.Decimal;
 import org.nebulith.report.PhaseLabels;
-import org.nebulith.report.RunFolder;
+import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;

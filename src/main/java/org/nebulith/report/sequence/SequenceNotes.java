@@ -9,7 +9,7 @@ import org.nebulith.condensation.SequenceSettings;
 import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.format.Decimal;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.RunInputs;
 
 /**
  * The {@code run-notes.md} of a sequence run: settings with their origin, composition and data

@@ -5,8 +5,8 @@ import java.util.List;
 
 import org.nebulith.condensation.CondensationSequence;
 import org.nebulith.format.Decimal;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
 import org.nebulith.report.html.HtmlReportWriter;
 import org.nebulith.report.html.MarkdownSummaryWriter;
 import org.nebulith.report.html.Report;

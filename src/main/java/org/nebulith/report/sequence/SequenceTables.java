@@ -15,8 +15,9 @@ import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.PhaseKind;
 import org.nebulith.thermo.Element;
+import org.nebulith.files.Table;
 import org.nebulith.thermo.PhaseNames;
-import org.nebulith.report.Table;
+import org.nebulith.files.Table;
 
 /**
  * The four tables of a sequence run. Layout of {@code sequence.csv}: one row per grid temperature

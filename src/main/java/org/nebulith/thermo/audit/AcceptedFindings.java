@@ -14,7 +14,7 @@ import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.thermo.DataFormatException;
+import org.nebulith.errors.InputException;
 
 /**
  * Findings of the data audit that were examined and accepted, each with its reason (bundled resource
@@ -61,11 +61,11 @@ public final class AcceptedFindings {
                 try {
                     max = Double.parseDouble(r.get("max_value").trim());
                 } catch (NumberFormatException ex) {
-                    throw new DataFormatException(file, line, "max_value", "'" + r.get("max_value") + "' is not a number",
+                    throw InputException.atField(file, line, "max_value", r.get("max_value"), "not a number",
                             "the largest accepted value in the finding's unit");
                 }
                 if (r.get("reason").isBlank()) {
-                    throw new DataFormatException(file, line, "reason", "empty", "why the finding is accepted");
+                    throw InputException.atField(file, line, "reason", r.get("reason"), "empty", "why the finding is accepted");
                 }
                 String subject = r.get("subject").trim();
                 Pattern glob = Pattern.compile(Pattern.quote(subject).replace("*", "\\E.*\\Q"));

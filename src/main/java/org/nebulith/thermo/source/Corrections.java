@@ -9,7 +9,7 @@ import java.util.Optional;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.thermo.DataFormatException;
+import org.nebulith.errors.InputException;
 
 /**
  * The corrections table ({@code corrections.csv} beside the source files): published values that the
@@ -61,25 +61,26 @@ public final class Corrections {
      * @param in   the table
      * @param file its name for messages
      * @return the corrections
-     * @throws DataFormatException naming line and field of anything not understood
+     * @throws InputException naming line and field of anything not understood
      */
     public static Corrections read(Reader in, String file) throws IOException {
         List<Correction> out = new ArrayList<>();
         CSVFormat fmt = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get();
         try (CSVParser p = CSVParser.parse(in, fmt)) {
             if (!p.getHeaderNames().equals(COLUMNS)) {
-                throw new DataFormatException(file, 1, "header", "columns " + p.getHeaderNames(), String.join(",", COLUMNS));
+                throw InputException.atField(file, 1, "header", String.join(",", p.getHeaderNames()), "not the header",
+                        String.join(",", COLUMNS));
             }
             for (CSVRecord r : p) {
                 long line = r.getRecordNumber() + 1;
                 String field = r.get("field").trim();
                 if (!field.equals(ENTHALPY_OF_FORMATION)) {
-                    throw new DataFormatException(file, line, "field", "'" + field + "' cannot be corrected",
+                    throw InputException.atField(file, line, "field", field, "cannot be corrected",
                             ENTHALPY_OF_FORMATION);
                 }
                 for (String c : List.of("species", "source", "reason")) {
                     if (r.get(c).isBlank()) {
-                        throw new DataFormatException(file, line, c, "empty", "a non-empty text");
+                        throw InputException.atField(file, line, c, "", "empty", "a non-empty text");
                     }
                 }
                 out.add(new Correction(r.get("species").trim(), field, number(r, "file_value", file, line),
@@ -98,7 +99,7 @@ public final class Corrections {
         } catch (NumberFormatException ex) {
             // reported below
         }
-        throw new DataFormatException(file, line, col, "'" + r.get(col) + "' is not a finite number", "a number in J/mol");
+        throw InputException.atField(file, line, col, r.get(col), "not a finite number", "a number in J/mol");
     }
 
     /** @param species a species id @return its correction of the enthalpy of formation, if any */
@@ -116,11 +117,11 @@ public final class Corrections {
      * @param c         a correction
      * @param published the value found in the source
      * @param file      the corrections file name
-     * @throws DataFormatException if the source no longer holds the value the correction was written for
+     * @throws InputException if the source no longer holds the value the correction was written for
      */
     static void checkApplies(Correction c, double published, String file) {
         if (Math.abs(published - c.fileValue()) > 1e-9 * Math.max(1, Math.abs(published))) {
-            throw new DataFormatException(file, c.line(), "file_value", c.fileValue() + " but the source holds "
+            throw InputException.atField(file, c.line(), "file_value", c.fileValue(), "the source holds "
                     + published + " for " + c.species(), "the value of the source file (or remove the correction)");
         }
     }

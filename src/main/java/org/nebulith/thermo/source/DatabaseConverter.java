@@ -14,7 +14,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.nebulith.thermo.DataFormatException;
+import org.nebulith.errors.InputException;
 import org.nebulith.thermo.Element;
 import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.Nasa9Model;
@@ -64,7 +64,7 @@ public final class DatabaseConverter {
             Path tmp = Files.createTempFile(out.getParent(), "species", ".tmp");
             Files.writeString(tmp, csv, StandardCharsets.UTF_8);
             Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } catch (DataFormatException ex) {
+        } catch (InputException ex) {
             System.err.println(ex.getMessage());
             System.exit(2);
         } catch (IOException ex) {
@@ -78,7 +78,7 @@ public final class DatabaseConverter {
      *            {@value #ADDED_MINERAL_FILE} and {@value Corrections#FILE}
      * @return the species file text
      * @throws IOException on read failure
-     * @throws DataFormatException naming file, line and field of anything not understood
+     * @throws InputException naming file, line and field of anything not understood
      */
     public static String convert(Path dir) throws IOException {
         byte[] nasa = Files.readAllBytes(dir.resolve(NASA_FILE));
@@ -104,7 +104,7 @@ public final class DatabaseConverter {
         try {
             nasa = NasaGlennReader.read(new StringReader(new String(nasaBytes, StandardCharsets.US_ASCII)), NASA_FILE);
         } catch (IllegalArgumentException ex) {
-            throw new DataFormatException(NASA_FILE, 0, "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
+            throw InputException.atField(NASA_FILE, 0, "record", "", ex.getMessage(), "the NASA TP-2002-211556 record layout");
         }
         SpeciesFileWriter w = new SpeciesFileWriter();
         w.header(inputs, corrections);
@@ -215,8 +215,8 @@ public final class DatabaseConverter {
         for (String n : m.nasaEntries()) {
             NasaGlennReader.Entry e = byName.get(n);
             if (e == null || !e.condensed() || !m.formula().equals(formula(e))) {
-                throw new DataFormatException(m.file(), m.line(), "source_table_or_file", "NASA species '" + n
-                        + "' is missing or has another composition", "names of NASA condensed entries of formula "
+                throw InputException.atField(m.file(), m.line(), "source_table_or_file", n,
+                        "NASA species missing or of another composition", "names of NASA condensed entries of formula "
                         + m.formula().notation());
             }
             writeNasa(w, e, m.id(), "solid", m.role(), m.variant(), m.file() + ":" + m.line(), corrections);

@@ -12,7 +12,7 @@ import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nebulith.thermo.DataFormatException;
+import org.nebulith.errors.InputException;
 import org.nebulith.thermo.Formula;
 import org.nebulith.thermo.mineral.MineralForm;
 
@@ -100,7 +100,7 @@ final class MineralTableReader {
      * @param in   the table
      * @param file its name for messages
      * @return the rows in table order
-     * @throws DataFormatException naming line and column of anything not understood
+     * @throws InputException naming line and column of anything not understood
      */
     static List<MineralRow> read(Reader in, String file) throws IOException {
         List<CSVRecord> recs = new ArrayList<>();
@@ -148,7 +148,7 @@ final class MineralTableReader {
     private static String role(CSVRecord r, String file) {
         Matcher m = Pattern.compile("^role=(primary|alternative|extra)").matcher(r.get("notes"));
         if (!m.find()) {
-            throw new DataFormatException(file, line(r), "notes", "does not start with role=...",
+            throw InputException.atField(file, line(r), "notes", r.get("notes"), "does not start with role=...",
                     "role=primary|alternative|extra");
         }
         return m.group(1);
@@ -160,7 +160,7 @@ final class MineralTableReader {
                 return s;
             }
         }
-        throw new DataFormatException(file, line(r), "source", "unknown publication '" + r.get("source") + "'",
+        throw InputException.atField(file, line(r), "source", r.get("source"), "unknown publication",
                 "a source the converter knows (extend MineralTableReader.SOURCES)");
     }
 
@@ -173,13 +173,13 @@ final class MineralTableReader {
         try {
             formula = ChemicalFormulaParser.parse(r.get("formula"));
         } catch (IllegalArgumentException ex) {
-            throw new DataFormatException(file, line(r), "formula", ex.getMessage(), "a chemical formula such as Ca3(PO4)2");
+            throw InputException.atField(file, line(r), "formula", r.get("formula"), ex.getMessage(), "a chemical formula such as Ca3(PO4)2");
         }
         String cpForm = r.get("cp_form");
         if (cpForm.startsWith("NASA-9")) {
             Matcher m = Pattern.compile("\\(species (.*)\\)\\s*$").matcher(r.get("source_table_or_file"));
             if (!m.find()) {
-                throw new DataFormatException(file, line(r), "source_table_or_file", "NASA-9 row names no NASA species",
+                throw InputException.atField(file, line(r), "source_table_or_file", r.get("source_table_or_file"), "NASA-9 row names no NASA species",
                         "'(species A, B, ...)'");
             }
             List<String> names = List.of(m.group(1).split(",\\s*"));
@@ -194,7 +194,7 @@ final class MineralTableReader {
         String code = cpForm.substring(0, Math.max(0, cpForm.indexOf(':'))).trim().toLowerCase(java.util.Locale.ROOT);
         MineralForm f = MineralForm.fromCode(code);
         if (f == null) {
-            throw new DataFormatException(file, line(r), "cp_form", "unknown form '" + cpForm + "'",
+            throw InputException.atField(file, line(r), "cp_form", cpForm, "unknown form",
                     "HP:, Berman:, RH95:, Maier-Kelley: or NASA-9");
         }
         return f;
@@ -228,7 +228,7 @@ final class MineralTableReader {
             }
             Matcher m = tp.pattern().matcher(notes);
             if (!m.find()) {
-                throw new DataFormatException(file, line(r), "notes", "mentions '" + tp.trigger()
+                throw InputException.atField(file, line(r), "notes", notes, "mentions '" + tp.trigger()
                         + "' but its parameters are not in the expected wording", tp.pattern().pattern());
             }
             for (int g = 0; g < tp.keys().length; g++) {
@@ -250,7 +250,7 @@ final class MineralTableReader {
     private static String required(CSVRecord r, String column, String file) {
         String v = r.get(column).trim();
         if (v.isEmpty()) {
-            throw new DataFormatException(file, line(r), column, "empty", "a number");
+            throw InputException.atField(file, line(r), column, v, "empty", "a number");
         }
         return v;
     }

@@ -11,7 +11,7 @@ import org.apache.spark.api.java.function.FlatMapFunction;
 import org.nebulith.survey.PlanetEstimator;
 import org.nebulith.survey.StarJob;
 import org.nebulith.survey.StarJobException;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CsvTableWriter;
 import org.nebulith.survey.StarResult;
 import org.nebulith.survey.StarRow;
 import org.nebulith.survey.SurveyRunner;

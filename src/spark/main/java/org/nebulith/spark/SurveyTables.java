@@ -21,7 +21,7 @@ import org.apache.spark.sql.types.StructType;
 import org.apache.spark.storage.StorageLevel;
 import org.nebulith.errors.InputException;
 import org.nebulith.errors.Messages;
-import org.nebulith.report.CsvTableWriter;
+import org.nebulith.files.CsvTableWriter;
 import org.nebulith.survey.SurveyCsv;
 import org.nebulith.survey.SurveyFailures;
 import org.nebulith.survey.SurveyRow;

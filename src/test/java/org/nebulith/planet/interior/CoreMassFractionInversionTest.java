@@ -3,9 +3,11 @@ package org.nebulith.planet.interior;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** The inversion of a mass and radius into a core mass fraction. */
+@Tag("slow")
 class CoreMassFractionInversionTest {
     private final StructureSolver solver = new StructureSolver();
 

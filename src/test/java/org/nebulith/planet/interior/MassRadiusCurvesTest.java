@@ -2,10 +2,12 @@ package org.nebulith.planet.interior;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.nebulith.planet.MassRadius;
 
 /** Mass-radius curves of the structure model against published ones over 1-8 Earth masses. */
+@Tag("slow")
 class MassRadiusCurvesTest {
     private final StructureSolver solver = new StructureSolver();
 

@@ -5,9 +5,9 @@ import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.Map;
 
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
 
 /** Manual probe: renders every sample chart into a folder and prints times and sizes. */
 public final class ChartRenderProbe {

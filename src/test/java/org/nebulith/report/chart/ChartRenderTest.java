@@ -21,11 +21,12 @@ import java.util.stream.Stream;
 import javax.imageio.ImageIO;
 import javax.xml.parsers.DocumentBuilderFactory;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
 import org.w3c.dom.Document;
 
 /**
@@ -33,6 +34,7 @@ import org.w3c.dom.Document;
  * ({@code <text>} elements) and the PDF (the chart font embedded, text shown with text operators),
  * each vector file under {@value #SIZE_LIMIT} bytes.
  */
+@Tag("slow")
 class ChartRenderTest {
 
     private static final byte[] PNG_MAGIC = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};

@@ -13,14 +13,15 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.regex.Pattern;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nebulith.report.chart.Drawing;
-import org.nebulith.report.AtomicOutput;
-import org.nebulith.report.RunFolder;
-import org.nebulith.report.RunInputs;
-import org.nebulith.report.Table;
+import org.nebulith.files.AtomicOutput;
+import org.nebulith.files.RunFolder;
+import org.nebulith.files.RunInputs;
+import org.nebulith.files.Table;
 import org.nebulith.report.chart.ChartFixtures;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
@@ -30,6 +31,7 @@ import org.nebulith.report.chart.ChartRenderer;
  * page must raise no error and log nothing to the console. Skipped only when no Chromium binary
  * is installed ({@code .ci/run} installs Debian's {@code chromium}).
  */
+@Tag("slow")
 class HtmlReportChromiumTest {
 
     @TempDir

@@ -7,7 +7,7 @@ import java.time.Instant;
 
 import org.junit.jupiter.api.Test;
 import org.nebulith.errors.NumericalException;
-import org.nebulith.report.Table;
+import org.nebulith.files.Table;
 
 class ReportWritersTest {
 
