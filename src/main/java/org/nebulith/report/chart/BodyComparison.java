@@ -1,18 +1,21 @@
 package org.nebulith.report.chart;
 
 import java.awt.Color;
-import java.awt.geom.Line2D;
-import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.style.XYStyler;
+
 /**
  * Planet comparison as small multiples: one panel per quantity (molar ratios, core mass fraction),
- * side by side, each on its own linear axis; one row per body (predicted planets first, then the
- * host star and the reference bodies), the row names written once at the left. Planets are filled
- * circles with their error bars (16th to 84th percentile when given); reference bodies have a
- * marker of their own; the host star's value is also drawn as a dotted line through the panel. A
- * body without a value for a quantity shows "n/a" in that panel (nothing is dropped silently).
+ * side by side, each on its own linear axis, their plot areas of one width; one row per body
+ * (predicted planets first, then the host star and the reference bodies), the row names written
+ * once at the left. Planets are filled circles with their error bars (16th to 84th percentile when
+ * given); reference bodies have a marker of their own; the host star's value is also drawn as a
+ * dotted line through the panel. A body without a value for a quantity shows "n/a" in that panel
+ * (nothing is dropped silently).
  *
  * @param quantities axis titles with units, e.g. {@code Mg/Si [mol/mol]}
  * @param bodies     the rows, top to bottom
@@ -65,7 +68,7 @@ public record BodyComparison(List<String> quantities, List<Body> bodies) {
     }
 
     private static final double ROW = 12;
-    private static final double GAP = 9;
+    private static final double GAP = 6;
     private static final Marker[] REFERENCE_MARKERS = {
         Marker.DIAMOND, Marker.OPEN_SQUARE, Marker.TRIANGLE_UP, Marker.OPEN_DIAMOND, Marker.SQUARE, Marker.CROSS,
         Marker.TRIANGLE_DOWN, Marker.PLUS,
@@ -91,70 +94,108 @@ public record BodyComparison(List<String> quantities, List<Body> bodies) {
      * @param widthPt figure width [pt] (the height follows from the number of rows)
      * @return the chart
      */
-    public Drawing chart(final double widthPt) {
-        double labelW = 0;
-        for (Body b : bodies) {
-            labelW = Math.max(labelW, Fonts.width(b.label(), ChartStyle.TICK_PT));
-        }
-        double top = ChartStyle.PAD + 2;
-        double plotH = bodies.size() * ROW;
-        Drawing d = new Drawing(widthPt, top + plotH + Panel.xAxisHeight() + ChartStyle.PAD + 2);
-        double left = ChartStyle.PAD + labelW + 6;
-        double panelW = (widthPt - ChartStyle.PAD - left - GAP * (quantities.size() - 1)) / quantities.size();
-        for (int i = 0; i < bodies.size(); i++) {
-            Body b = bodies.get(i);
-            d.text(b.label(), left - 4, top + (i + 0.5) * ROW + Fonts.capHeight(ChartStyle.TICK_PT) / 2,
-                    ChartStyle.TICK_PT, Drawing.Align.RIGHT, Palette.AXIS);
-        }
+    public Figure chart(final double widthPt) {
+        double height = bodies.size() * ROW + 34;
+        Figure f = new Figure(widthPt, height);
+        List<XYChart> panels = new ArrayList<>();
         for (int q = 0; q < quantities.size(); q++) {
-            Rectangle2D box = new Rectangle2D.Double(left + q * (panelW + GAP), top, panelW, plotH);
-            panel(d, box, q);
+            panels.add(panel(f, widthPt / quantities.size(), height, q));
         }
-        return d;
+        f.row(panels, height, GAP, 14);
+        for (int q = 0; q < quantities.size(); q++) {
+            XYChart c = panels.get(q);
+            Figure.layOut(c, c.getWidth(), c.getHeight());
+            DirectLabels labels = new DirectLabels(f, c);
+            if (q == 0) {
+                for (int i = 0; i < bodies.size(); i++) {
+                    String name = bodies.get(i).label();
+                    labels.put(name, 2 + Fonts.width(name, ChartStyle.NOTE_PT) / 2, labels.y(row(i)));
+                }
+            }
+            for (int i = 0; i < bodies.size(); i++) {
+                if (!Double.isFinite(bodies.get(i).values()[q])) {
+                    labels.put("n/a", labels.box().getCenterX(), labels.y(row(i)));
+                }
+            }
+        }
+        return f;
     }
 
-    private void panel(final Drawing d, final Rectangle2D box, final int q) {
+    /** @return the y of body i (the first at the top) */
+    private double row(final int i) {
+        return bodies.size() - i;
+    }
+
+    private XYChart panel(final Figure f, final double width, final double height, final int q) {
+        XYChart c = ChartStyle.chart(f, width, height, quantities.get(q), "");
+        XYStyler s = c.getStyler();
         double[] range = range(q);
-        Axis x = Axis.linear(range[0], range[1], quantities.get(q)).ticks(5);
-        Axis y = Axis.linear(0, bodies.size(), "");
-        Panel p = new Panel(d, box, x, y);
-        for (int i = 0; i < bodies.size(); i++) {
-            if (i % 2 == 1) {
-                d.fill(new Rectangle2D.Double(box.getMinX(), box.getMinY() + i * ROW, box.getWidth(), ROW),
-                        new Color(0xF3, 0xF3, 0xF3));
+        s.setXAxisMin(range[0]);
+        s.setXAxisMax(range[1]);
+        s.setYAxisMin(0.4);
+        s.setYAxisMax(bodies.size() + 0.6);
+        s.setYAxisTickMarkSpacingHint((int) (ROW - 3));
+        s.setPlotGridHorizontalLinesVisible(false);
+        s.setLegendVisible(false);
+        s.setXAxisTickMarkSpacingHint(32);
+        s.setChartPadding(2);
+        s.setYAxisTitleVisible(false);
+        s.setYAxisTickLabelsFormattingFunction(v -> "");
+        if (q == 0) {
+            double names = 0;
+            for (Body b : bodies) {
+                names = Math.max(names, Fonts.width(b.label(), ChartStyle.NOTE_PT));
             }
+            s.setYAxisLeftWidthHint((int) Math.ceil(names + 14));
         }
-        frameWithoutYTicks(p, d, box);
         for (Body b : bodies) {
-            if (b.kind() == Kind.HOST && Double.isFinite(b.values()[q])) {
-                p.vline(b.values()[q], new LineStyle(Palette.REFERENCE, 0.6, new float[] {1f, 1.5f}));
+            double v = b.values()[q];
+            if (b.kind() == Kind.HOST && Double.isFinite(v)) {
+                ChartStyle.line(c, "host " + q, new double[] {v, v}, new double[] {0.4, bodies.size() + 0.6},
+                        new LineStyle(Palette.REFERENCE, 0.6, new float[] {1f, 1.5f}), false);
             }
         }
+        errorBars(c, q);
         int reference = 0;
         for (int i = 0; i < bodies.size(); i++) {
             Body b = bodies.get(i);
-            double row = bodies.size() - i - 0.5;
             double v = b.values()[q];
             Marker m = b.kind() == Kind.PLANET ? Marker.CIRCLE : b.kind() == Kind.HOST ? Marker.STAR
                     : REFERENCE_MARKERS[reference++ % REFERENCE_MARKERS.length];
-            Color c = b.kind() == Kind.PLANET ? Palette.seriesColour(0) : b.kind() == Kind.HOST
-                    ? Palette.seriesColour(1) : Palette.AXIS;
-            if (!Double.isFinite(v)) {
-                d.text("n/a", box.getCenterX(), p.py(row) + Fonts.capHeight(ChartStyle.NOTE_PT) / 2, ChartStyle.NOTE_PT,
-                        Drawing.Align.CENTRE, Palette.REFERENCE);
-                continue;
+            if (Double.isFinite(v)) {
+                ChartStyle.points(c, "body " + i, new double[] {v}, new double[] {row(i)}, m, colour(b), 1.15, false);
             }
-            p.xErrorBar(b.lowAt(q), b.highAt(q), row, c);
-            p.markerAt(m, p.px(v), p.py(row), c, ChartStyle.MARKER_PT + 0.6);
         }
+        return c;
     }
 
-    private static void frameWithoutYTicks(final Panel p, final Drawing d, final Rectangle2D box) {
-        LineStyle grid = new LineStyle(Palette.GRID, 0.4, new float[] {1f, 1f});
-        for (double t : p.x().ticks()) {
-            d.stroke(new Line2D.Double(p.px(t), box.getMinY(), p.px(t), box.getMaxY()), grid);
+    private static Color colour(final Body b) {
+        return b.kind() == Kind.PLANET ? Palette.seriesColour(0) : b.kind() == Kind.HOST ? Palette.seriesColour(1)
+                : Palette.AXIS;
+    }
+
+    private void errorBars(final XYChart c, final int q) {
+        List<double[]> bars = new ArrayList<>();
+        for (int i = 0; i < bodies.size(); i++) {
+            Body b = bodies.get(i);
+            if (Double.isFinite(b.lowAt(q)) && Double.isFinite(b.highAt(q))) {
+                bars.add(new double[] {b.lowAt(q), b.highAt(q), row(i)});
+            }
         }
-        new Panel(d, box, p.x(), Axis.linear(0, 1, "").labels(v -> "")).frameXOnly();
+        if (bars.isEmpty()) {
+            return;
+        }
+        double[] x = new double[3 * bars.size()];
+        double[] y = new double[3 * bars.size()];
+        for (int k = 0; k < bars.size(); k++) {
+            x[3 * k] = bars.get(k)[0];
+            x[3 * k + 1] = bars.get(k)[1];
+            x[3 * k + 2] = bars.get(k)[1];
+            y[3 * k] = bars.get(k)[2];
+            y[3 * k + 1] = bars.get(k)[2];
+            y[3 * k + 2] = Double.NaN;
+        }
+        ChartStyle.line(c, "bars " + q, x, y, LineStyle.solid(Palette.seriesColour(0), 0.8), false);
     }
 
     private double[] range(final int q) {

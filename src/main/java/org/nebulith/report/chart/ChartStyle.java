@@ -1,9 +1,21 @@
 package org.nebulith.report.chart;
 
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.util.Locale;
+
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.XYStyler;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
 /**
- * Nebulith's chart look: white background, thin dark axes box, light dotted grid, DejaVu Sans
- * sized for a journal column (7 pt ticks, 8 pt axis titles, 6.5 pt notes), no chart title
- * (captions belong to the paper or report), {@link Palette} colours, line patterns and markers.
+ * Nebulith's chart look on XChart: white background, thin dark axes box, thin light grid, the
+ * bundled DejaVu Sans sized for a journal column (7 pt ticks, 8 pt axis titles, 6.5 pt notes), no
+ * chart title (captions belong to the paper or report), the legend outside the plot, and the
+ * {@link Palette} colours, line patterns and markers. Data series are added through
+ * {@link #line} and {@link #points}, which reduce lines to what the figure shows ({@link Polylines}).
  */
 public final class ChartStyle {
 
@@ -18,11 +30,172 @@ public final class ChartStyle {
     /** Note and direct-label size [pt]. */
     public static final double NOTE_PT = 6.5;
     /** Marker size [pt]. */
-    public static final double MARKER_PT = 3.8;
-    /** Margin around the figure [pt]. */
-    public static final double PAD = 4;
+    public static final int MARKER_PT = 4;
+    /** Title of a temperature axis. */
+    static final String TEMPERATURE_TITLE = "Temperature T [K]";
+    /** Margin around a chart [pt]. */
+    public static final int PAD = 4;
 
     private ChartStyle() {
+    }
+
+    /**
+     * @param figure the figure the chart belongs to (its tick labels are recorded there)
+     * @param width  width [pt]
+     * @param height height [pt]
+     * @param xTitle x-axis title with unit
+     * @param yTitle y-axis title with unit
+     * @return an empty XY chart in Nebulith style, linear tick labels for people
+     */
+    static XYChart chart(final Figure figure, final double width, final double height, final String xTitle,
+                         final String yTitle) {
+        XYChart chart = new XYChart((int) Math.round(width), (int) Math.round(height));
+        chart.setXAxisTitle(xTitle);
+        chart.setYAxisTitle(yTitle);
+        apply(chart.getStyler());
+        chart.getStyler().setXAxisTickLabelsFormattingFunction(figure.recording(TickLabels::linear));
+        chart.getStyler().setYAxisTickLabelsFormattingFunction(figure.recording(TickLabels::linear));
+        return chart;
+    }
+
+    /**
+     * A temperature axis decreasing to the right, as condensation diagrams are read (a gas cools
+     * from left to right): the chart plots -T and labels it T; its ends rounded out to 100 K.
+     *
+     * @param figure       the figure
+     * @param chart        the chart
+     * @param temperatureK the temperatures shown [K]
+     */
+    static void temperatureAxis(final Figure figure, final XYChart chart, final double[] temperatureK) {
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
+        for (double t : temperatureK) {
+            min = Math.min(min, t);
+            max = Math.max(max, t);
+        }
+        double lo = Math.floor(min / 100) * 100;
+        double hi = Math.max(Math.ceil(max / 100) * 100, lo + 100);
+        chart.getStyler().setXAxisMin(-hi);
+        chart.getStyler().setXAxisMax(-lo);
+        chart.getStyler().setXAxisTickLabelsFormattingFunction(figure.recording(v -> TickLabels.linear(-v)));
+    }
+
+    /**
+     * @param figure the figure
+     * @param chart  the chart
+     * @param x      true for the x axis, false for y
+     * @param min    low end, &gt; 0
+     * @param max    high end
+     */
+    static void logAxis(final Figure figure, final XYChart chart, final boolean x, final double min,
+                        final double max) {
+        XYStyler s = chart.getStyler();
+        double decades = Math.log10(max / min);
+        if (x) {
+            s.setXAxisLogarithmic(true);
+            s.setXAxisLogarithmicDecadeOnly(decades > 3);
+            s.setXAxisMin(min);
+            s.setXAxisMax(max);
+            s.setXAxisTickLabelsFormattingFunction(figure.recording(v -> TickLabels.log(v, decades)));
+        } else {
+            s.setYAxisLogarithmic(true);
+            s.setYAxisLogarithmicDecadeOnly(decades > 3);
+            s.setYAxisMin(min);
+            s.setYAxisMax(max);
+            s.setYAxisTickLabelsFormattingFunction(figure.recording(v -> TickLabels.log(v, decades)));
+        }
+    }
+
+    /** @param styler the styler to set up */
+    static void apply(final XYStyler styler) {
+        styler.setLocale(Locale.ROOT);
+        styler.setChartBackgroundColor(Color.WHITE);
+        styler.setPlotBackgroundColor(Color.WHITE);
+        styler.setPlotBorderColor(Palette.AXIS);
+        styler.setPlotBorderVisible(true);
+        styler.setAxisTicksLineVisible(false);
+        styler.setChartTitleVisible(false);
+        styler.setChartTitleFont(Fonts.at(TITLE_PT));
+        styler.setChartPadding(PAD);
+        styler.setPlotMargin(0);
+        styler.setPlotContentSize(1.0);
+        styler.setPlotGridLinesColor(Palette.GRID);
+        // solid: XChart fills the outline of each grid line, which for a dashed line is one box per dash
+        styler.setPlotGridLinesStroke(new BasicStroke(0.3f));
+        styler.setAxisTickLabelsFont(Fonts.at(TICK_PT));
+        styler.setAxisTitleFont(Fonts.at(TITLE_PT));
+        styler.setChartFontColor(Palette.AXIS);
+        styler.setAxisTickLabelsColor(Palette.AXIS);
+        styler.setAxisTickMarksColor(Palette.AXIS);
+        styler.setAxisTickMarksStroke(new BasicStroke(0.6f));
+        styler.setAxisTickMarkLength(3);
+        styler.setAxisTickPadding(2);
+        styler.setAxisTitlePadding(3);
+        styler.setLegendFont(Fonts.at(LEGEND_PT));
+        styler.setLegendBorderColor(Color.WHITE);
+        styler.setLegendBackgroundColor(Color.WHITE);
+        styler.setLegendPadding(3);
+        styler.setLegendSeriesLineLength(14);
+        styler.setLegendPosition(Styler.LegendPosition.OutsideE);
+        styler.setAnnotationTextFont(Fonts.at(NOTE_PT));
+        styler.setAnnotationTextFontColor(Palette.NOTE);
+        styler.setAnnotationLineColor(Palette.REFERENCE);
+        styler.setAnnotationLineStroke(new BasicStroke(0.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                new float[] {3f, 2f}, 0f));
+        styler.setMarkerSize(MARKER_PT);
+        styler.setXAxisTickMarkSpacingHint(40);
+        styler.setYAxisTickMarkSpacingHint(26);
+        styler.setDefaultSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        styler.setAntiAlias(true);
+        styler.setTextAntiAlias(true);
+    }
+
+    /**
+     * Adds a line series, reduced to the vertices the figure can show.
+     *
+     * @param chart  the chart
+     * @param name   series name (unique in the chart; shown in the legend when {@code legend})
+     * @param x      x values (NaN breaks the line)
+     * @param y      y values (NaN breaks the line)
+     * @param style  colour, width and dash pattern
+     * @param legend whether the legend lists it
+     * @return the series
+     */
+    static XYSeries line(final XYChart chart, final String name, final double[] x, final double[] y,
+                         final LineStyle style, final boolean legend) {
+        double[][] kept = Polylines.reduce(chart, x, y);
+        XYSeries s = chart.addSeries(name, kept[0], kept[1]);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setLineColor(style.colour());
+        s.setLineStyle(style.stroke());
+        s.setMarker(SeriesMarkers.NONE);
+        s.setMarkerColor(style.colour());
+        s.setShowInLegend(legend);
+        return s;
+    }
+
+    /**
+     * Adds a series of markers only.
+     *
+     * @param chart  the chart
+     * @param name   series name
+     * @param x      x values
+     * @param y      y values
+     * @param marker the marker
+     * @param colour its colour
+     * @param scale  its size relative to {@link #MARKER_PT}
+     * @param legend whether the legend lists it
+     * @return the series
+     */
+    static XYSeries points(final XYChart chart, final String name, final double[] x, final double[] y,
+                           final Marker marker, final Color colour, final double scale, final boolean legend) {
+        XYSeries s = chart.addSeries(name, x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        s.setMarker(marker.sized(scale));
+        s.setMarkerColor(colour);
+        s.setLineColor(colour);
+        s.setShowInLegend(legend);
+        return s;
     }
 
     /**
@@ -41,7 +214,7 @@ public final class ChartStyle {
      * @param dash   dash pattern [pt] (empty for solid)
      * @param marker marker shape
      */
-    public record Series(java.awt.Color colour, float[] dash, Marker marker) {
+    public record Series(Color colour, float[] dash, Marker marker) {
         /** @return the line style */
         public LineStyle line() {
             return new LineStyle(colour, Palette.LINE_WIDTH, dash);

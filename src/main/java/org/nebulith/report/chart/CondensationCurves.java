@@ -1,14 +1,15 @@
 package org.nebulith.report.chart;
 
-import java.awt.geom.Rectangle2D;
 import java.util.List;
+
+import org.knowm.xchart.XYChart;
 
 /**
  * Condensation curves: the fraction of each element condensed against temperature, the temperature
- * axis decreasing to the right (a gas cools from left to right). Each element has its colour, line
- * pattern and marker (markers every {@value #MARKER_SPACING_PT} pt along the rise), its 50 %
- * condensation temperature marked by a ring on the curve, and, where there is room, its symbol
- * written beside the curve; the legend sits outside the plot, the notes in the emptiest corner.
+ * axis decreasing to the right (a gas cools from left to right). Each element is one line with its
+ * colour and line pattern, its 50 % condensation temperature marked by a ring on the curve, and,
+ * where there is room, its symbol written beside the curve; the legend sits outside the plot, the
+ * notes in the emptiest corner of the plot.
  *
  * @param temperatureK the temperature grid [K], any order
  * @param elements     one curve per element: fraction condensed in [0, 1] (1e-9 slack)
@@ -18,8 +19,6 @@ import java.util.List;
 public record CondensationCurves(double[] temperatureK, List<Curve> elements, double[] t50K, List<String> notes) {
 
     private static final double SLACK = 1e-9;
-    /** Distance between markers along a curve [pt]. */
-    static final double MARKER_SPACING_PT = 30;
     private static final double[] LABEL_HEIGHTS = {0.5, 0.62, 0.38, 0.74, 0.26, 0.86, 0.14, 0.93, 0.07};
 
     public CondensationCurves {
@@ -41,84 +40,68 @@ public record CondensationCurves(double[] temperatureK, List<Curve> elements, do
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
-        Legend legend = new Legend();
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), ChartStyle.TEMPERATURE_TITLE,
+                "Fraction of the element condensed");
+        ChartStyle.temperatureAxis(f, c, temperatureK);
+        // a little beyond 0 and 1, so that the ends are labelled and the floors and ceilings stay visible
+        c.getStyler().setYAxisMin(-0.02);
+        c.getStyler().setYAxisMax(1.02);
+        double[] x = negated(temperatureK);
         for (int i = 0; i < elements.size(); i++) {
-            legend.add(Legend.Entry.of(elements.get(i).label(), ChartStyle.series(i)));
+            ChartStyle.line(c, elements.get(i).label(), x, elements.get(i).values(), ChartStyle.series(i).line(), true);
         }
-        legend.add(new Legend.Entry("T50", null, Marker.OPEN_CIRCLE, Palette.AXIS));
-        Axis x = TemperatureAxis.of(temperatureK);
-        Axis y = Axis.linear(0, 1, "Fraction of the element condensed").ticks(5);
-        double left = ChartStyle.PAD + Panel.yAxisWidth(y);
-        double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
-        Rectangle2D box = new Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel p = new Panel(d, box, x, y).frame(true, true);
-        Placement free = new Placement(box);
+        double[] tx = new double[elements.size()];
+        double[] ty = new double[elements.size()];
+        int n = 0;
+        for (int i = 0; i < elements.size(); i++) {
+            if (Double.isFinite(t50K[i]) && -t50K[i] >= c.getStyler().getXAxisMin()
+                    && -t50K[i] <= c.getStyler().getXAxisMax()) {
+                tx[n] = -t50K[i];
+                ty[n++] = 0.5;
+            }
+        }
+        if (n > 0) {
+            ChartStyle.points(c, "T50", java.util.Arrays.copyOf(tx, n), java.util.Arrays.copyOf(ty, n),
+                    Marker.OPEN_CIRCLE, Palette.AXIS, 1.3, true);
+        }
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        Figure.layOut(c, c.getWidth(), c.getHeight());
+        DirectLabels labels = new DirectLabels(f, c);
         double[][][] device = new double[elements.size()][][];
         for (int i = 0; i < elements.size(); i++) {
-            ChartStyle.Series s = ChartStyle.series(i);
-            device[i] = p.line(TemperatureAxis.values(temperatureK), elements.get(i).values(), s.line());
-            free.line(device[i]);
-            p.markersAlong(rise(device[i], p), s.marker(), s.colour(), MARKER_SPACING_PT, 6 + 4.3 * i);
+            device[i] = labels.device(x, elements.get(i).values());
+            labels.free().line(device[i]);
+        }
+        for (int k = 0; k < n; k++) {
+            labels.free().take(DirectLabels.bounds("o", labels.x(tx[k]), labels.y(0.5)));
         }
         for (int i = 0; i < elements.size(); i++) {
-            if (Double.isFinite(t50K[i]) && x.contains(t50K[i])) {
-                p.markerAt(Marker.OPEN_CIRCLE, p.px(t50K[i]), p.py(0.5), ChartStyle.series(i).colour(), 5);
-                free.take(ring(p.px(t50K[i]), p.py(0.5)));
-            }
+            label(labels, device[i], i);
         }
-        for (int i = 0; i < elements.size(); i++) {
-            label(d, p, free, device[i], i);
-        }
-        if (!notes.isEmpty()) {
-            p.cornerNote(notes, free);
-        }
-        legend.draw(d, right + 6, box.getMinY() + 2, 1, 0);
-        return d;
+        labels.note(notes);
+        return f;
     }
 
-    private static Rectangle2D ring(final double x, final double y) {
-        return new Rectangle2D.Double(x - 2.5, y - 2.5, 5, 5);
-    }
-
-    /** The part of a drawn curve strictly inside the box (markers are not put on the 0 and 1 floors). */
-    private static double[][] rise(final double[][] dev, final Panel p) {
-        double top = p.area().getMinY() + 1.5;
-        double bottom = p.area().getMaxY() - 1.5;
-        double[] x = dev[0].clone();
-        double[] y = dev[1].clone();
-        for (int i = 0; i < x.length; i++) {
-            if (!(y[i] > top && y[i] < bottom)) {
-                x[i] = Double.NaN;
-                y[i] = Double.NaN;
-            }
-        }
-        return new double[][] {x, y};
-    }
-
-    private void label(final Drawing d, final Panel p, final Placement free, final double[][] dev, final int i) {
+    private void label(final DirectLabels labels, final double[][] dev, final int i) {
         String text = elements.get(i).label();
         double w = Fonts.width(text, ChartStyle.NOTE_PT) + 1;
-        double h = Fonts.capHeight(ChartStyle.NOTE_PT) + 1;
-        for (double f : LABEL_HEIGHTS) {
-            double yd = p.py(f);
+        for (double h : LABEL_HEIGHTS) {
+            double yd = labels.y(h);
             double xd = crossing(dev, yd);
-            if (!Double.isFinite(xd)) {
-                continue;
-            }
-            for (int side : new int[] {-1, 1}) {
-                double x0 = side < 0 ? xd - 2 - w : xd + 2;
-                Rectangle2D box = new Rectangle2D.Double(x0, yd - h / 2, w, h);
-                if (free.free(box, -1)) {
-                    free.take(box);
-                    d.text(text, x0 + 0.5, yd + Fonts.capHeight(ChartStyle.NOTE_PT) / 2, ChartStyle.NOTE_PT,
-                            Drawing.Align.LEFT, ChartStyle.series(i).colour().darker());
-                    return;
-                }
+            if (Double.isFinite(xd) && labels.putFirstFree(text, i, xd - 2 - w / 2, yd, xd + 2 + w / 2, yd)) {
+                return;
             }
         }
+    }
+
+    private static double[] negated(final double[] v) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = -v[i];
+        }
+        return out;
     }
 
     /** @return device x where the curve first reaches device height yd, scanning from the hot side */

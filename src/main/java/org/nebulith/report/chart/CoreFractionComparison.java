@@ -3,6 +3,8 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.XYChart;
+
 
 /**
  * Core mass fraction from a planet's mass and radius (y) against the one predicted from its star
@@ -39,26 +41,37 @@ public record CoreFractionComparison(List<Point> planets) {
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
-        Axis x = Axis.linear(0, 1, "Core mass fraction predicted from the star").ticks(5);
-        Axis y = Axis.linear(0, 1, "Core mass fraction from mass and radius").ticks(5);
-        Legend legend = new Legend().add(new Legend.Entry("planets", null, Marker.CIRCLE, Palette.colour(0)))
-                .add(new Legend.Entry("1:1", new LineStyle(Palette.REFERENCE, 0.7, new float[] {3f, 2f}), null,
-                        Palette.REFERENCE));
-        double left = ChartStyle.PAD + Panel.yAxisWidth(y);
-        double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
-        java.awt.geom.Rectangle2D box = new java.awt.geom.Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel p = new Panel(d, box, x, y).frame(true, true);
-        p.line(new double[] {0, 1}, new double[] {0, 1}, new LineStyle(Palette.REFERENCE, 0.7, new float[] {3f, 2f}));
-        for (Point pt : planets) {
-            p.xErrorBar(pt.predLow(), pt.predHigh(), pt.measured(), Palette.colour(0));
-            p.yErrorBar(pt.predicted(), pt.measLow(), pt.measHigh(), Palette.colour(0));
-            p.point(Marker.CIRCLE, pt.predicted(), pt.measured(), Palette.colour(0));
-            p.label(pt.label(), Math.min(0.9, pt.predicted()), pt.measured(), 4, -3, Drawing.Align.LEFT);
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Core mass fraction predicted from the star",
+                "Core mass fraction from mass and radius");
+        c.getStyler().setXAxisMin(0.0);
+        c.getStyler().setXAxisMax(1.0);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setYAxisMax(1.0);
+        ChartStyle.line(c, "1:1", new double[] {0, 1}, new double[] {0, 1},
+                new LineStyle(Palette.REFERENCE, 0.7, new float[] {3f, 2f}), true);
+        double[] x = new double[6 * planets.size()];
+        double[] y = new double[6 * planets.size()];
+        for (int k = 0; k < planets.size(); k++) {
+            Point pt = planets.get(k);
+            double[] xs = {pt.predLow(), pt.predHigh(), pt.predHigh(), pt.predicted(), pt.predicted(), pt.predicted()};
+            double[] ys = {pt.measured(), pt.measured(), Double.NaN, pt.measLow(), pt.measHigh(), Double.NaN};
+            System.arraycopy(xs, 0, x, 6 * k, 6);
+            System.arraycopy(ys, 0, y, 6 * k, 6);
         }
-        legend.draw(d, right + 6, box.getMinY() + 2, 1, 0);
-        return d;
+        ChartStyle.line(c, "ranges", x, y, LineStyle.solid(Palette.colour(0), 0.6), false);
+        ChartStyle.points(c, "planets", planets.stream().mapToDouble(Point::predicted).toArray(),
+                planets.stream().mapToDouble(Point::measured).toArray(), Marker.CIRCLE, Palette.colour(0), 1, true);
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        Figure.layOut(c, c.getWidth(), c.getHeight());
+        DirectLabels labels = new DirectLabels(f, c);
+        for (Point pt : planets) {
+            double w = Fonts.width(pt.label(), ChartStyle.NOTE_PT);
+            double px = labels.x(pt.predicted());
+            double py = labels.y(pt.measured());
+            labels.putFirstFree(pt.label(), -1, px + 4 + w / 2, py - 4, px - 4 - w / 2, py - 4, px + 4 + w / 2, py + 5);
+        }
+        return f;
     }
 }

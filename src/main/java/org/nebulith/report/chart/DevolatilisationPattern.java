@@ -1,9 +1,12 @@
 package org.nebulith.report.chart;
 
 import java.awt.Color;
-import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
+
+import org.knowm.xchart.XYChart;
 
 /**
  * The devolatilisation pattern: each element's abundance in a body relative to its star, normalised
@@ -53,44 +56,57 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
-        Legend legend = new Legend();
-        for (int i = 0; i < bodies.size(); i++) {
-            legend.add(new Legend.Entry(bodies.get(i).label(), null, marker(i), colour(i)));
-        }
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "50% condensation temperature T50 [K]",
+                yTitle);
         double[] yr = ratioRange();
         double[] xr = tRange();
-        Axis x = Axis.linear(xr[0], xr[1], "50% condensation temperature T50 [K]").ticks(6);
-        Axis y = Axis.log(yr[0], yr[1], yTitle);
-        double left = ChartStyle.PAD + Panel.yAxisWidth(y);
-        double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
-        Rectangle2D box = new Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel p = new Panel(d, box, x, y).frame(true, true);
-        p.hline(1, new LineStyle(Palette.REFERENCE, 0.6, new float[] {1f, 1.5f}));
-        Placement free = new Placement(box);
-        for (int i = bodies.size() - 1; i >= 0; i--) {
+        c.getStyler().setXAxisMin(xr[0]);
+        c.getStyler().setXAxisMax(xr[1]);
+        ChartStyle.logAxis(f, c, false, yr[0], yr[1]);
+        ChartStyle.line(c, "no depletion", new double[] {xr[0], xr[1]}, new double[] {1, 1},
+                new LineStyle(Palette.REFERENCE, 0.6, new float[] {1f, 1.5f}), false);
+        for (int i = 0; i < bodies.size(); i++) {
+            double[] r = bodies.get(i).ratios();
+            double[] x = new double[r.length];
+            double[] y = new double[r.length];
+            int n = 0;
+            for (int k = 0; k < r.length; k++) {
+                if (Double.isFinite(r[k]) && r[k] > 0 && Double.isFinite(t50K[k])) {
+                    x[n] = t50K[k];
+                    y[n++] = clamp(r[k], yr);
+                }
+            }
+            if (n > 0) {
+                ChartStyle.points(c, bodies.get(i).label(), Arrays.copyOf(x, n), Arrays.copyOf(y, n), marker(i),
+                        colour(i), 1.15, true);
+            }
+        }
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        Figure.layOut(c, c.getWidth(), c.getHeight());
+        DirectLabels labels = new DirectLabels(f, c);
+        for (int i = 0; i < bodies.size(); i++) {
             double[] r = bodies.get(i).ratios();
             for (int k = 0; k < r.length; k++) {
                 if (Double.isFinite(r[k]) && r[k] > 0 && Double.isFinite(t50K[k])) {
-                    p.markerAt(marker(i), p.px(t50K[k]), p.py(clamp(r[k], yr)), colour(i), ChartStyle.MARKER_PT + 0.6);
-                    free.take(new Rectangle2D.Double(p.px(t50K[k]) - 2.5, p.py(clamp(r[k], yr)) - 2.5, 5, 5));
+                    double px = labels.x(t50K[k]);
+                    double py = labels.y(clamp(r[k], yr));
+                    labels.free().take(new java.awt.geom.Rectangle2D.Double(px - 2.5, py - 2.5, 5, 5));
                 }
             }
         }
-        labels(d, p);
-        free.take(new Rectangle2D.Double(box.getMinX(), box.getMinY(), box.getWidth(), ChartStyle.NOTE_PT + 8));
-        if (!notes.isEmpty()) {
-            p.cornerNote(notes, free);
-        }
-        legend.draw(d, right + 6, box.getMinY() + 2, 1, 0);
-        return d;
+        symbols(c, labels);
+        java.awt.geom.Rectangle2D box = labels.box();
+        labels.free().take(new java.awt.geom.Rectangle2D.Double(box.getMinX(), box.getMinY(), box.getWidth(),
+                ChartStyle.NOTE_PT + 8));
+        labels.note(notes);
+        return f;
     }
 
     /** Element symbols in a row along the top of the plot, above their T50, spread so that none overlaps. */
-    private void labels(final Drawing d, final Panel p) {
-        java.util.List<Integer> order = new java.util.ArrayList<>();
+    private void symbols(final XYChart c, final DirectLabels labels) {
+        List<Integer> order = new ArrayList<>();
         for (int k = 0; k < t50K.length; k++) {
             if (Double.isFinite(t50K[k])) {
                 order.add(k);
@@ -104,20 +120,27 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
         double[] wanted = new double[n];
         double[] gaps = new double[Math.max(0, n - 1)];
         for (int i = 0; i < n; i++) {
-            wanted[i] = p.px(t50K[order.get(i)]);
+            wanted[i] = labels.x(t50K[order.get(i)]);
             if (i > 0) {
                 gaps[i - 1] = (Fonts.width(elements.get(order.get(i - 1)), ChartStyle.NOTE_PT)
                         + Fonts.width(elements.get(order.get(i)), ChartStyle.NOTE_PT)) / 2 + 2;
             }
         }
-        Rectangle2D a = p.area();
+        java.awt.geom.Rectangle2D a = labels.box();
         double[] at = Spread.apart(wanted, gaps, a.getMinX() + 4, a.getMaxX() - 4);
-        double baseline = a.getMinY() + ChartStyle.NOTE_PT + 2;
+        double cy = a.getMinY() + ChartStyle.NOTE_PT / 2 + 2;
+        double[] x = new double[3 * n];
+        double[] y = new double[3 * n];
         for (int i = 0; i < n; i++) {
-            d.text(elements.get(order.get(i)), at[i], baseline, ChartStyle.NOTE_PT, Drawing.Align.CENTRE, Palette.AXIS);
-            d.stroke(new java.awt.geom.Line2D.Double(at[i], baseline + 1.5, wanted[i], baseline + 5),
-                    LineStyle.solid(Palette.REFERENCE, 0.3));
+            labels.put(elements.get(order.get(i)), at[i], cy);
+            x[3 * i] = labels.dataX(at[i]);
+            y[3 * i] = labels.dataY(cy + ChartStyle.NOTE_PT / 2 + 0.5);
+            x[3 * i + 1] = t50K[order.get(i)];
+            y[3 * i + 1] = labels.dataY(cy + ChartStyle.NOTE_PT / 2 + 4);
+            x[3 * i + 2] = x[3 * i + 1];
+            y[3 * i + 2] = Double.NaN;
         }
+        ChartStyle.line(c, "symbol leaders", x, y, LineStyle.solid(Palette.REFERENCE, 0.3), false);
     }
 
     private static Marker marker(final int i) {

@@ -12,7 +12,7 @@ import java.util.Map;
 /**
  * The one typeface of every chart: DejaVu Sans (Bitstream Vera licence, text beside the font file),
  * bundled so that text is measured, drawn and embedded (PDF) with the same glyphs on every machine.
- * SVG files name the family and let the viewer supply it (DejaVu Sans, else Verdana, a close match in
+ * It is registered with the graphics environment. SVG files name the family and let the viewer supply it (DejaVu Sans, else Verdana, a close match in
  * width).
  */
 public final class Fonts {
@@ -35,7 +35,10 @@ public final class Fonts {
             if (in == null) {
                 throw new IllegalStateException("bundled chart font " + RESOURCE + " missing from the classpath");
             }
-            return Font.createFont(Font.TRUETYPE_FONT, in);
+            Font font = Font.createFont(Font.TRUETYPE_FONT, in);
+            // known by name to Java2D too, so that PNG and vector files draw the same glyphs
+            java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().registerFont(font);
+            return font;
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (FontFormatException e) {

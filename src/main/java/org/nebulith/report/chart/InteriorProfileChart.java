@@ -1,5 +1,10 @@
 package org.nebulith.report.chart;
 
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.XYStyler;
+
 
 /**
  * Interior structure of one planet: density (left axis) and pressure (right axis) against radius.
@@ -23,25 +28,24 @@ public record InteriorProfileChart(double[] radiusKm, double[] densityKgM3, doub
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
-        double rMax = radiusKm[radiusKm.length - 1];
-        Axis x = Axis.linear(0, rMax, "Radius r [km]");
-        Axis rho = Axis.linear(0, top(densityKgM3), "Density [kg/m3]").ticks(5);
-        Axis p = Axis.linear(0, top(pressureGpa), "Pressure [GPa]").ticks(5);
-        double left = ChartStyle.PAD + Panel.yAxisWidth(rho);
-        double right = size.widthPt() - ChartStyle.PAD - Panel.yAxisWidth(p) - 2;
-        java.awt.geom.Rectangle2D box = new java.awt.geom.Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel panel = new Panel(d, box, x, rho).rightAxis(p).frame(true, true);
-        ChartStyle.Series rs = ChartStyle.series(0);
-        ChartStyle.Series ps = ChartStyle.series(1);
-        panel.line(radiusKm, densityKgM3, rs.line());
-        panel.lineRight(radiusKm, pressureGpa, ps.line());
-        Legend l = new Legend().add(new Legend.Entry("density (left)", rs.line(), null, rs.colour()))
-                .add(new Legend.Entry("pressure (right)", ps.line(), null, ps.colour()));
-        l.draw(d, box.getMaxX() - l.columnWidth() - 4, box.getMinY() + 3, 1, 0);
-        return d;
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Radius r [km]", "Density [kg/m3]");
+        XYStyler s = c.getStyler();
+        s.setXAxisMin(0.0);
+        s.setXAxisMax(radiusKm[radiusKm.length - 1]);
+        s.setYAxisMin(0.0);
+        s.setYAxisMax(top(densityKgM3));
+        s.setLegendPosition(Styler.LegendPosition.InsideNE);
+        ChartStyle.line(c, "density (left)", radiusKm, densityKgM3, ChartStyle.series(0).line(), true);
+        XYSeries p = ChartStyle.line(c, "pressure (right)", radiusKm, pressureGpa, ChartStyle.series(1).line(), true);
+        p.setYAxisGroup(1);
+        c.setYAxisGroupTitle(1, "Pressure [GPa]");
+        s.setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
+        s.setYAxisMin(1, 0.0);
+        s.setYAxisMax(1, top(pressureGpa));
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        return f;
     }
 
     private static double top(final double[] v) {

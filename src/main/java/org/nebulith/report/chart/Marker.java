@@ -42,6 +42,39 @@ public enum Marker {
     }
 
     /**
+     * @param scale size relative to the chart's marker size
+     * @return this shape as an XChart series marker
+     */
+    org.knowm.xchart.style.markers.Marker sized(final double scale) {
+        return new SeriesMarker(this, scale);
+    }
+
+    /** An XChart marker drawing one of these shapes, filled or as a thin outline. */
+    private static final class SeriesMarker extends org.knowm.xchart.style.markers.Marker {
+        private static final java.awt.BasicStroke OUTLINE = new java.awt.BasicStroke(0.7f);
+        private final Marker shape;
+        private final double scale;
+
+        SeriesMarker(final Marker shape, final double scale) {
+            this.shape = shape;
+            this.scale = scale;
+        }
+
+        @Override
+        public void paint(final java.awt.Graphics2D g, final double x, final double y, final int size) {
+            Shape s = shape.at(x, y, size * scale);
+            if (shape.filled()) {
+                g.fill(s);
+                return;
+            }
+            java.awt.Stroke old = g.getStroke();
+            g.setStroke(OUTLINE);
+            g.draw(s);
+            g.setStroke(old);
+        }
+    }
+
+    /**
      * @param x    centre x [pt]
      * @param y    centre y [pt]
      * @param size overall size [pt]

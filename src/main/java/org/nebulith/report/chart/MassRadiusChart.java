@@ -3,6 +3,8 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.XYChart;
+
 
 /**
  * Mass-radius diagram: curves of constant composition (core mass fraction, water) and measured
@@ -44,8 +46,7 @@ public record MassRadiusChart(double[] massMearth, List<Curve> curves, List<Plan
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
+    public Figure chart(final ChartSize size) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = 0;
         for (Curve c : curves) {
@@ -63,32 +64,44 @@ public record MassRadiusChart(double[] massMearth, List<Curve> curves, List<Plan
             hi = 2;
         }
         double span = hi - lo;
-        Axis x = Axis.log(massMearth[0], massMearth[massMearth.length - 1], "Mass [M_earth]");
-        Axis y = Axis.linear(Math.max(0, lo - 0.08 * span), hi + 0.12 * span, "Radius [R_earth]").ticks(5);
-        Legend legend = new Legend();
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Mass [M_earth]", "Radius [R_earth]");
+        double mMin = massMearth[0];
+        double mMax = massMearth[massMearth.length - 1];
+        ChartStyle.logAxis(f, c, true, mMin, mMax);
+        c.getStyler().setYAxisMin(Math.max(0, lo - 0.08 * span));
+        c.getStyler().setYAxisMax(hi + 0.12 * span);
         for (int i = 0; i < curves.size(); i++) {
-            legend.add(new Legend.Entry(curves.get(i).label(), ChartStyle.series(i).line(), null,
-                    ChartStyle.series(i).colour()));
+            ChartStyle.line(c, curves.get(i).label(), massMearth, curves.get(i).values(), ChartStyle.series(i).line(),
+                    true);
         }
         if (!planets.isEmpty()) {
-            legend.add(new Legend.Entry("measured planets", null, Marker.DIAMOND, Palette.AXIS));
+            double[] x = new double[6 * planets.size()];
+            double[] y = new double[6 * planets.size()];
+            for (int k = 0; k < planets.size(); k++) {
+                Planet pl = planets.get(k);
+                double[] xs = {Math.max(mMin, pl.mass() - pl.massErr()), Math.min(mMax, pl.mass() + pl.massErr()),
+                    Double.NaN, pl.mass(), pl.mass(), Double.NaN};
+                double[] ys = {pl.radius(), pl.radius(), Double.NaN, pl.radius() - pl.radiusErr(),
+                    pl.radius() + pl.radiusErr(), Double.NaN};
+                System.arraycopy(xs, 0, x, 6 * k, 6);
+                System.arraycopy(ys, 0, y, 6 * k, 6);
+                x[6 * k + 2] = pl.mass();
+                x[6 * k + 5] = pl.mass();
+            }
+            ChartStyle.line(c, "1-sigma", x, y, LineStyle.solid(Palette.REFERENCE, 0.6), false);
+            ChartStyle.points(c, "measured planets", planets.stream().mapToDouble(Planet::mass).toArray(),
+                    planets.stream().mapToDouble(Planet::radius).toArray(), Marker.DIAMOND, Palette.AXIS, 1.2, true);
         }
-        double left = ChartStyle.PAD + Panel.yAxisWidth(y);
-        double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
-        java.awt.geom.Rectangle2D box = new java.awt.geom.Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel p = new Panel(d, box, x, y).frame(true, true);
-        for (int i = 0; i < curves.size(); i++) {
-            p.line(massMearth, curves.get(i).values(), ChartStyle.series(i).line());
-        }
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        Figure.layOut(c, c.getWidth(), c.getHeight());
+        DirectLabels labels = new DirectLabels(f, c);
         for (Planet pl : planets) {
-            p.xErrorBar(Math.max(massMearth[0], pl.mass() - pl.massErr()),
-                    Math.min(massMearth[massMearth.length - 1], pl.mass() + pl.massErr()), pl.radius(), Palette.REFERENCE);
-            p.yErrorBar(pl.mass(), pl.radius() - pl.radiusErr(), pl.radius() + pl.radiusErr(), Palette.REFERENCE);
-            p.point(Marker.DIAMOND, pl.mass(), pl.radius(), Palette.AXIS);
-            p.label(pl.label(), pl.mass(), pl.radius() + pl.radiusErr(), 0, -2, Drawing.Align.CENTRE);
+            double x = labels.x(pl.mass());
+            double y = labels.y(pl.radius() + pl.radiusErr()) - 5;
+            labels.putFirstFree(pl.label(), -1, x, y, x, labels.y(pl.radius() - pl.radiusErr()) + 5);
         }
-        legend.draw(d, right + 6, box.getMinY() + 2, 1, 0);
-        return d;
+        return f;
     }
+
 }

@@ -47,7 +47,7 @@ public final class Palette {
     /** Axes, ticks and their labels. */
     public static final Color AXIS = new Color(0x22, 0x22, 0x22);
     /** Grid lines. */
-    public static final Color GRID = new Color(0xD8, 0xD8, 0xD8);
+    public static final Color GRID = new Color(0xE4, 0xE4, 0xE4);
 
     private Palette() {
     }

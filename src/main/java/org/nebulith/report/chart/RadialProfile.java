@@ -1,19 +1,21 @@
 package org.nebulith.report.chart;
 
-import java.awt.geom.Line2D;
-import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.XYStyler;
+
 /**
- * Radial map of a disk in three stacked panels sharing a logarithmic distance axis: midplane
- * temperature and pressure (top); molar Mg/Si and Fe/Si of the local solids with the host star's
- * ratios as dotted lines, and the condensed share of the heavy elements on the right axis (middle);
- * the weight of each feeding zone (bottom). Condensation fronts are vertical lines through all
- * panels, labelled above the top panel ("+" a phase appears, "\u2212" it disappears, going outwards),
- * the labels spread so that none overlaps. The distance range is the zones plus a margin.
+ * Radial map of a disk in stacked panels sharing a logarithmic distance axis: midplane temperature,
+ * midplane pressure (log), molar Mg/Si and Fe/Si of the local solids with the host star's ratios as
+ * dotted lines, the condensed share of the mass of the elements heavier than He, and the weight of
+ * each feeding zone (bottom). Condensation fronts are vertical lines through all panels, named in a
+ * strip above the top panel ("+" a phase appears, "\u2212" it disappears, going outwards), the names
+ * spread so that none overlaps. The distance range is the zones plus a margin.
  *
  * @param radiusAU          radial grid [AU], increasing
  * @param temperatureK      midplane temperature [K]
@@ -96,156 +98,285 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
      * @param heightPt figure height [pt]
      * @return the chart
      */
-    public Drawing chart(final double widthPt, final double heightPt) {
-        Drawing d = new Drawing(widthPt, heightPt);
+    public Figure chart(final double widthPt, final double heightPt) {
+        Figure f = new Figure(widthPt, heightPt);
         double[] r = range();
-        Axis x = Axis.log(r[0], r[1], "Distance from the star r [AU]");
+        List<Front> shown = shownFronts(r);
+        double strip = shown.isEmpty() ? 0 : LABEL_ROWS * (ChartStyle.NOTE_PT + 1.5) + 6;
+        double avail = heightPt - strip;
+        double[] heights = {avail * 0.17, avail * 0.17, avail * 0.27, avail * 0.15, avail * 0.24};
+        XYChart t = panel(f, widthPt, heights[0], r, "T [K]");
         double[] tShown = shownOrAll(visible(temperatureK, r), temperatureK);
+        double tLow = Math.floor(min(tShown) * 0.95 / 100) * 100;
+        double tHigh = Math.max(tLow + 100, Math.ceil(max(tShown) * 1.05 / 100) * 100);
+        // ends a little beyond round values, so that the round values are labelled
+        t.getStyler().setYAxisMin(tLow - 0.03 * (tHigh - tLow));
+        t.getStyler().setYAxisMax(tHigh + 0.03 * (tHigh - tLow));
+        ChartStyle.line(t, "T", radiusAU, temperatureK, LineStyle.solid(Palette.seriesColour(1), Palette.LINE_WIDTH),
+                false);
+        XYChart p = panel(f, widthPt, heights[1], r, "P [bar]");
         double[] pShown = shownOrAll(visible(pressureBar, r), pressureBar);
-        Axis t = Axis.linear(0, Math.max(100, Math.ceil(max(tShown) * 1.05 / 100) * 100), "T [K]").ticks(4);
-        Axis p = Axis.log(decadeBelow(min(pShown)), decadeAbove(max(pShown)), "P [bar]");
-        Axis ratio = Axis.linear(0, ratioTop(), "Molar ratio in solids").ticks(4);
-        Axis cond = Axis.linear(0, 1, "Heavy elements condensed").ticks(4);
-        Axis weight = Axis.linear(0, 1.5, "Zone weight").ticks(2).labels(v -> v == 0 ? "0" : v == 1 ? "1" : "");
-        double left = ChartStyle.PAD + Math.max(Panel.yAxisWidth(ratio), Panel.yAxisWidth(t));
-        double right = widthPt - ChartStyle.PAD - Math.max(Panel.yAxisWidth(cond), Panel.yAxisWidth(p)) - 2;
-        double labelStrip = 3 * ChartStyle.NOTE_PT + 6;
-        double top = ChartStyle.PAD + labelStrip;
-        double avail = heightPt - top - Panel.xAxisHeight() - ChartStyle.PAD - 14;
-        double h1 = avail * 0.27;
-        double h3 = avail * 0.17;
-        double h2 = avail - h1 - h3;
-        double w = right - left;
-        Panel tp = new Panel(d, new Rectangle2D.Double(left, top, w, h1), x, t).rightAxis(p);
-        Panel rp = new Panel(d, new Rectangle2D.Double(left, top + h1 + 7, w, h2), x, ratio).rightAxis(cond);
-        Panel zp = new Panel(d, new Rectangle2D.Double(left, top + h1 + h2 + 14, w, h3), x, weight);
-        tp.frame(false, true);
-        rp.frame(false, true);
-        zp.frame(true, true);
-        drawTop(tp);
-        drawMiddle(rp);
-        drawZones(zp);
-        drawFronts(d, List.of(tp, rp, zp), top);
-        return d;
+        ChartStyle.logAxis(f, p, false, decadeBelow(min(pShown)), decadeAbove(max(pShown)));
+        ChartStyle.line(p, "P", radiusAU, pressureBar, new LineStyle(Palette.seriesColour(0), Palette.LINE_WIDTH,
+                new float[] {4f, 2f}), false);
+        XYChart m = panel(f, widthPt, heights[2], r, "Molar ratio in solids");
+        middle(m);
+        XYChart cf = panel(f, widthPt, heights[3], r, "Condensed");
+        cf.getStyler().setYAxisMin(-0.03);
+        cf.getStyler().setYAxisMax(1.03);
+        ChartStyle.line(cf, CONDENSED, radiusAU, condensedFraction,
+                new LineStyle(Palette.seriesColour(2), Palette.LINE_WIDTH, new float[] {1f, 1.5f}), false);
+        XYChart z = panel(f, widthPt, heights[4], r, "Zone weight");
+        z.getStyler().setXAxisTicksVisible(true);
+        z.getStyler().setXAxisTitleVisible(true);
+        zones(z);
+        List<XYChart> panels = new ArrayList<>(List.of(t, p, m, cf, z));
+        for (XYChart c : panels) {
+            frontLines(c, shown);
+        }
+        List<XYChart> all = new ArrayList<>(panels);
+        double[] hs = heights;
+        XYChart labelStrip = null;
+        if (!shown.isEmpty()) {
+            labelStrip = strip(f, widthPt, strip, r);
+            all.add(0, labelStrip);
+            hs = new double[heights.length + 1];
+            hs[0] = strip;
+            System.arraycopy(heights, 0, hs, 1, heights.length);
+        }
+        f.stack(all, hs, 0);
+        for (XYChart c : all) {
+            Figure.layOut(c, c.getWidth(), c.getHeight());
+        }
+        labelMiddle(f, m);
+        DirectLabels cfLabels = new DirectLabels(f, cf);
+        double[][] cfDev = cfLabels.device(radiusAU, condensedFraction);
+        cfLabels.free().line(cfDev);
+        labelEnd(cfLabels, CONDENSED, cfDev, 0);
+        labelZones(f, z);
+        if (labelStrip != null) {
+            frontLabels(f, labelStrip, shown);
+        }
+        return f;
     }
 
-    private void drawTop(final Panel tp) {
-        ChartStyle.Series ts = ChartStyle.series(1);
-        ChartStyle.Series ps = ChartStyle.series(0);
-        tp.line(radiusAU, temperatureK, LineStyle.solid(ts.colour(), Palette.LINE_WIDTH));
-        tp.lineRight(radiusAU, pressureBar, new LineStyle(ps.colour(), Palette.LINE_WIDTH, new float[] {4f, 2f}));
-        Legend l = new Legend().add(new Legend.Entry("T (left)", LineStyle.solid(ts.colour(), Palette.LINE_WIDTH), null,
-                        ts.colour()))
-                .add(new Legend.Entry("P (right)", new LineStyle(ps.colour(), Palette.LINE_WIDTH, new float[] {4f, 2f}),
-                        null, ps.colour()));
-        Rectangle2D a = tp.area();
-        double lw = 2 * (l.columnWidth() + 6);
-        tp.drawing().fill(new Rectangle2D.Double(a.getMaxX() - lw - 4, a.getMinY() + 2, lw + 2, Legend.rowHeight() + 1),
-                new java.awt.Color(255, 255, 255, 235));
-        l.draw(tp.drawing(), a.getMaxX() - lw - 2, a.getMinY() + 2, 2, 6);
+    /** Rows of front labels above the top panel. */
+    private static final int LABEL_ROWS = 3;
+
+    private static XYChart panel(final Figure f, final double width, final double height, final double[] r,
+                                 final String yTitle) {
+        XYChart c = ChartStyle.chart(f, width, height, "Distance from the star r [AU]", yTitle);
+        ChartStyle.logAxis(f, c, true, r[0], r[1]);
+        c.getStyler().setXAxisTicksVisible(false);
+        c.getStyler().setXAxisTitleVisible(false);
+        c.getStyler().setChartPadding(2);
+        c.getStyler().setYAxisTickMarkSpacingHint(16);
+        c.getStyler().setLegendVisible(false);
+        return c;
     }
 
-    private void drawMiddle(final Panel rp) {
-        ChartStyle.Series mg = ChartStyle.series(0);
-        ChartStyle.Series fe = ChartStyle.series(1);
-        ChartStyle.Series cf = ChartStyle.series(2);
-        LineStyle hostStyle = new LineStyle(Palette.REFERENCE, 0.7, new float[] {1f, 1.5f});
-        Legend l = new Legend();
-        double[][] mgDev = rp.line(radiusAU, mgSi, mg.line());
-        rp.markersAlong(mgDev, mg.marker(), mg.colour(), 40, 8);
-        double[][] feDev = rp.line(radiusAU, feSi, fe.line());
-        rp.markersAlong(feDev, fe.marker(), fe.colour(), 40, 28);
-        LineStyle cfLine = new LineStyle(cf.colour(), Palette.LINE_WIDTH, new float[] {1f, 1.5f});
-        rp.lineRight(radiusAU, condensedFraction, cfLine);
-        l.add(Legend.Entry.of("Mg/Si", mg)).add(Legend.Entry.of("Fe/Si", fe))
-                .add(new Legend.Entry("heavy elements condensed (right)", cfLine, null, cf.colour()));
+    private void middle(final XYChart m) {
+        m.getStyler().setYAxisMin(0.0);
+        m.getStyler().setYAxisMax(ratioTop());
+        ChartStyle.line(m, "Mg/Si", radiusAU, mgSi, ChartStyle.series(0).line(), false);
+        ChartStyle.line(m, "Fe/Si", radiusAU, feSi, ChartStyle.series(1).line(), false);
+        LineStyle host = new LineStyle(Palette.REFERENCE, 0.7, new float[] {1f, 1.5f});
+        double[] ends = {radiusAU[0], radiusAU[radiusAU.length - 1]};
         if (Double.isFinite(hostMgSi)) {
-            rp.hline(hostMgSi, hostStyle);
-            rp.drawing().text("host Mg/Si", rp.area().getMinX() + 2, rp.py(hostMgSi) - 1.5, ChartStyle.NOTE_PT,
-                    Drawing.Align.LEFT, Palette.REFERENCE);
+            ChartStyle.line(m, "host Mg/Si", ends, new double[] {hostMgSi, hostMgSi}, host, false);
         }
         if (Double.isFinite(hostFeSi)) {
-            rp.hline(hostFeSi, hostStyle);
-            rp.drawing().text("host Fe/Si", rp.area().getMinX() + 2, rp.py(hostFeSi) + ChartStyle.NOTE_PT,
-                    ChartStyle.NOTE_PT, Drawing.Align.LEFT, Palette.REFERENCE);
+            ChartStyle.line(m, "host Fe/Si", ends, new double[] {hostFeSi, hostFeSi}, host, false);
         }
-        Rectangle2D a = rp.area();
-        double lw = l.columnWidth();
-        double lh = l.height(1);
-        rp.drawing().fill(new Rectangle2D.Double(a.getMaxX() - lw - 5, a.getMaxY() - lh - 4, lw + 3, lh + 2),
-                new java.awt.Color(255, 255, 255, 235));
-        l.draw(rp.drawing(), a.getMaxX() - lw - 3, a.getMaxY() - lh - 3, 1, 0);
     }
 
-    private void drawZones(final Panel zp) {
+    private static final String CONDENSED = "heavy elements condensed";
+
+    private void zones(final XYChart z) {
+        z.getStyler().setYAxisMin(0.0);
+        z.getStyler().setYAxisMax(1.45);
         for (int i = 0; i < zones.size(); i++) {
-            Zone z = zones.get(i);
-            double[] wgt = z.weight();
-            double peak = max(wgt);
-            double[] norm = new double[wgt.length];
-            for (int k = 0; k < wgt.length; k++) {
-                norm[k] = peak > 0 ? wgt[k] / peak : 0;
-                if (radiusAU[k] < z.innerAU() * 0.999 || radiusAU[k] > z.outerAU() * 1.001) {
-                    norm[k] = Double.NaN;
+            ChartStyle.line(z, "zone " + zones.get(i).label(), radiusAU, normalised(zones.get(i)),
+                    ChartStyle.series(i + 3).line(), false);
+        }
+    }
+
+    private double[] normalised(final Zone zone) {
+        double[] wgt = zone.weight();
+        double peak = max(wgt);
+        double[] norm = new double[wgt.length];
+        for (int k = 0; k < wgt.length; k++) {
+            boolean inside = radiusAU[k] >= zone.innerAU() * 0.999 && radiusAU[k] <= zone.outerAU() * 1.001;
+            norm[k] = inside ? (peak > 0 ? wgt[k] / peak : 0) : Double.NaN;
+        }
+        return norm;
+    }
+
+    private void labelMiddle(final Figure f, final XYChart m) {
+        DirectLabels labels = new DirectLabels(f, m);
+        double[][] mg = labels.device(radiusAU, mgSi);
+        double[][] fe = labels.device(radiusAU, feSi);
+        labels.free().line(mg);
+        labels.free().line(fe);
+        java.awt.geom.Rectangle2D box = labels.box();
+        if (Double.isFinite(hostMgSi)) {
+            labelHost(labels, "host Mg/Si", labels.y(hostMgSi), box);
+        }
+        if (Double.isFinite(hostFeSi)) {
+            labelHost(labels, "host Fe/Si", labels.y(hostFeSi), box);
+        }
+        labelEnd(labels, "Mg/Si", mg, 0);
+        labelEnd(labels, "Fe/Si", fe, 1);
+    }
+
+    private static void labelHost(final DirectLabels labels, final String text, final double y,
+                                  final java.awt.geom.Rectangle2D box) {
+        double w = Fonts.width(text, ChartStyle.NOTE_PT);
+        double h = Fonts.capHeight(ChartStyle.NOTE_PT);
+        double x = box.getMinX() + 3 + w / 2;
+        labels.putFirstFree(text, -1, x, y - h / 2 - 2, x, y + h / 2 + 2, box.getMaxX() - 3 - w / 2, y - h / 2 - 2);
+    }
+
+    /** Writes a curve's name near its outer end, above or below it, where there is room. */
+    private static void labelEnd(final DirectLabels labels, final String text, final double[][] dev,
+                                 final int line) {
+        double w = Fonts.width(text, ChartStyle.NOTE_PT);
+        double h = Fonts.capHeight(ChartStyle.NOTE_PT);
+        java.awt.geom.Rectangle2D box = labels.box();
+        for (int k = dev[0].length - 1; k >= 0; k--) {
+            double x = dev[0][k];
+            double y = dev[1][k];
+            if (!Double.isFinite(x) || x > box.getMaxX() - w / 2 - 2 || y < box.getMinY() || y > box.getMaxY()) {
+                continue;
+            }
+            if (labels.putFirstFree(text, line, x - w / 2, y - h / 2 - 2.5, x - w / 2, y + h / 2 + 2.5)) {
+                return;
+            }
+            if (x < box.getMinX() + box.getWidth() * 0.4) {
+                return;
+            }
+        }
+    }
+
+    private void labelZones(final Figure f, final XYChart z) {
+        DirectLabels labels = new DirectLabels(f, z);
+        for (int i = 0; i < zones.size(); i++) {
+            Zone zone = zones.get(i);
+            double[] norm = normalised(zone);
+            int peak = 0;
+            for (int k = 0; k < norm.length; k++) {
+                if (Double.isFinite(norm[k]) && (!Double.isFinite(norm[peak]) || norm[k] > norm[peak])) {
+                    peak = k;
                 }
             }
-            ChartStyle.Series s = ChartStyle.series(i + 3);
-            zp.line(radiusAU, norm, s.line());
-            double centre = Math.sqrt(z.innerAU() * z.outerAU());
-            zp.drawing().text(z.label(), zp.px(centre), zp.py(1.0) - 2, ChartStyle.NOTE_PT, Drawing.Align.CENTRE,
-                    s.colour().darker());
+            double x = labels.x(radiusAU[peak]);
+            double h = Fonts.capHeight(ChartStyle.NOTE_PT);
+            double y = labels.y(1.0) - h / 2 - 2;
+            double w = Fonts.width(zone.label(), ChartStyle.NOTE_PT);
+            labels.putFirstFree(zone.label(), -1, x, y, x - w / 2 - 3, y - h - 2, x + w / 2 + 3, y - h - 2, x, y - h - 2);
         }
     }
 
-    private void drawFronts(final Drawing d, final List<Panel> panels, final double top) {
+    private List<Front> shownFronts(final double[] r) {
         List<Front> shown = new ArrayList<>();
-        Axis x = panels.get(0).x();
-        for (Front f : fronts) {
-            if (x.contains(f.radiusAU())) {
-                shown.add(f);
+        for (Front fr : fronts) {
+            if (fr.radiusAU() >= r[0] && fr.radiusAU() <= r[1]) {
+                shown.add(fr);
             }
         }
         shown.sort(Comparator.comparingDouble(Front::radiusAU));
-        LineStyle line = new LineStyle(Palette.REFERENCE, 0.5, new float[] {3f, 2f});
-        for (Front f : shown) {
-            for (Panel p : panels) {
-                p.vline(f.radiusAU(), line);
-            }
-        }
-        // three label rows above the top panel; within a row labels are spread apart horizontally
-        int rows = 3;
-        Panel tp = panels.get(0);
-        for (int row = 0; row < rows; row++) {
-            List<Front> inRow = new ArrayList<>();
-            for (int i = row; i < shown.size(); i += rows) {
-                inRow.add(shown.get(i));
-            }
-            placeRow(d, tp, inRow, top - 2 - (rows - 1 - row) * (ChartStyle.NOTE_PT + 1.5), line);
-        }
+        return shown;
     }
 
-    private static void placeRow(final Drawing d, final Panel tp, final List<Front> inRow, final double baseline,
-                                 final LineStyle line) {
-        int n = inRow.size();
-        if (n == 0) {
+    private static void frontLines(final XYChart c, final List<Front> shown) {
+        if (shown.isEmpty()) {
             return;
         }
-        double[] wanted = new double[n];
-        double[] widths = new double[n];
-        double[] gaps = new double[Math.max(0, n - 1)];
-        for (int i = 0; i < n; i++) {
-            widths[i] = Fonts.width(inRow.get(i).text(), ChartStyle.NOTE_PT);
-            wanted[i] = tp.px(inRow.get(i).radiusAU());
-            if (i > 0) {
-                gaps[i - 1] = (widths[i - 1] + widths[i]) / 2 + 4;
+        double lo = c.getStyler().getYAxisMin();
+        double hi = c.getStyler().getYAxisMax();
+        double[] x = new double[3 * shown.size()];
+        double[] y = new double[3 * shown.size()];
+        for (int i = 0; i < shown.size(); i++) {
+            x[3 * i] = shown.get(i).radiusAU();
+            x[3 * i + 1] = shown.get(i).radiusAU();
+            x[3 * i + 2] = shown.get(i).radiusAU();
+            y[3 * i] = lo;
+            y[3 * i + 1] = hi;
+            y[3 * i + 2] = Double.NaN;
+        }
+        XYSeries s = c.addSeries("fronts", x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setLineColor(Palette.REFERENCE);
+        s.setLineStyle(new LineStyle(Palette.REFERENCE, 0.5, new float[] {3f, 2f}).stroke());
+        s.setMarker(org.knowm.xchart.style.markers.SeriesMarkers.NONE);
+        s.setShowInLegend(false);
+    }
+
+    /** The strip above the panels where the fronts are named, its x axis the panels' (not drawn). */
+    private static XYChart strip(final Figure f, final double width, final double height, final double[] r) {
+        XYChart c = ChartStyle.chart(f, width, height, "", "");
+        ChartStyle.logAxis(f, c, true, r[0], r[1]);
+        XYStyler s = c.getStyler();
+        s.setYAxisMin(0.0);
+        s.setYAxisMax(1.0);
+        s.setAxisTicksVisible(false);
+        s.setAxisTitlesVisible(false);
+        s.setPlotBorderVisible(false);
+        s.setPlotGridLinesVisible(false);
+        s.setLegendVisible(false);
+        s.setChartPadding(0);
+        return c;
+    }
+
+    /** Names the fronts in rows above the top panel, spread so that none overlaps, with a leader to each. */
+    private static void frontLabels(final Figure f, final XYChart stripChart, final List<Front> shown) {
+        DirectLabels labels = new DirectLabels(f, stripChart);
+        java.awt.geom.Rectangle2D a = labels.box();
+        double rowH = ChartStyle.NOTE_PT + 1.5;
+        List<double[]> leaders = new ArrayList<>();
+        for (int row = 0; row < LABEL_ROWS; row++) {
+            List<Front> inRow = new ArrayList<>();
+            for (int i = row; i < shown.size(); i += LABEL_ROWS) {
+                inRow.add(shown.get(i));
+            }
+            int n = inRow.size();
+            if (n == 0) {
+                continue;
+            }
+            double[] wanted = new double[n];
+            double[] widths = new double[n];
+            double[] gaps = new double[Math.max(0, n - 1)];
+            for (int i = 0; i < n; i++) {
+                widths[i] = Fonts.width(inRow.get(i).text(), ChartStyle.NOTE_PT);
+                wanted[i] = labels.x(inRow.get(i).radiusAU());
+                if (i > 0) {
+                    gaps[i - 1] = (widths[i - 1] + widths[i]) / 2 + 4;
+                }
+            }
+            double[] at = Spread.apart(wanted, gaps, a.getMinX() + widths[0] / 2, a.getMaxX() - widths[n - 1] / 2);
+            double cy = a.getMinY() + 1 + (row + 0.5) * rowH;
+            for (int i = 0; i < n; i++) {
+                labels.put(inRow.get(i).text(), at[i], cy);
+                leaders.add(new double[] {labels.dataX(at[i]), labels.dataY(cy + rowH / 2 - 0.5),
+                    inRow.get(i).radiusAU()});
             }
         }
-        Rectangle2D a = tp.area();
-        double[] at = Spread.apart(wanted, gaps, a.getMinX() + widths[0] / 2, a.getMaxX() - widths[n - 1] / 2);
-        for (int i = 0; i < n; i++) {
-            d.text(inRow.get(i).text(), at[i], baseline, ChartStyle.NOTE_PT, Drawing.Align.CENTRE, Palette.NOTE);
-            d.stroke(new Line2D.Double(at[i], baseline + 1.2, wanted[i], a.getMinY()), line.withWidth(0.3));
+        double[] x = new double[3 * leaders.size()];
+        double[] y = new double[3 * leaders.size()];
+        for (int i = 0; i < leaders.size(); i++) {
+            x[3 * i] = leaders.get(i)[0];
+            y[3 * i] = leaders.get(i)[1];
+            x[3 * i + 1] = leaders.get(i)[2];
+            y[3 * i + 1] = 0;
+            x[3 * i + 2] = leaders.get(i)[2];
+            y[3 * i + 2] = Double.NaN;
         }
+        XYSeries s = stripChart.addSeries("leaders", x, y);
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setLineStyle(LineStyle.solid(Palette.REFERENCE, 0.3).stroke());
+        s.setLineColor(Palette.REFERENCE);
+        s.setMarker(org.knowm.xchart.style.markers.SeriesMarkers.NONE);
+        s.setShowInLegend(false);
     }
 
     private double[] range() {

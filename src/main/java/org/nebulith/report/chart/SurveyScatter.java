@@ -1,16 +1,19 @@
 package org.nebulith.report.chart;
 
 import java.awt.Color;
-import java.awt.geom.Line2D;
-import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+
+import org.knowm.xchart.XYChart;
 
 /**
  * Survey: molar Mg/Si against Fe/Si for host stars and their predicted planets, with their ranges
  * (16th to 84th percentile) as thin crosses; host stars as open rings and planets as smaller dots
  * drawn over them, so that a planet at its star's position shows as a dot inside a ring; labelled
  * reference bodies (the Sun, bulk Earth) as large distinct markers; the legend outside the plot.
+ * The ranges of Mg/Si and Fe/Si are correlated (both divide by Si): the crosses are not
+ * independent errors.
  *
  * @param stars      the host stars
  * @param planets    the predicted planets
@@ -60,69 +63,85 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
      * @param size figure size
      * @return the chart
      */
-    public Drawing chart(final ChartSize size) {
-        Drawing d = Drawing.of(size);
-        Color starColour = Palette.seriesColour(1);
-        Color planetColour = Palette.seriesColour(0);
-        Legend legend = new Legend();
-        if (!planets.isEmpty()) {
-            legend.add(new Legend.Entry("predicted planets", null, Marker.CIRCLE, planetColour));
-        }
-        if (!stars.isEmpty()) {
-            legend.add(new Legend.Entry("host stars", null, Marker.OPEN_CIRCLE, starColour));
-        }
-        for (int i = 0; i < references.size(); i++) {
-            legend.add(new Legend.Entry(references.get(i).label(), null, REFERENCE_MARKERS[i % REFERENCE_MARKERS.length],
-                    Palette.AXIS));
-        }
-        legend.add(new Legend.Entry("16th-84th pct.", LineStyle.solid(Palette.REFERENCE, 0.5), null, Palette.REFERENCE));
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Fe/Si [mol/mol]", "Mg/Si [mol/mol]");
         double[] xr = range(true);
         double[] yr = range(false);
-        Axis x = Axis.linear(xr[0], xr[1], "Fe/Si [mol/mol]").ticks(7);
-        Axis y = Axis.linear(yr[0], yr[1], "Mg/Si [mol/mol]").ticks(7);
-        double left = ChartStyle.PAD + Panel.yAxisWidth(y);
-        double right = size.widthPt() - ChartStyle.PAD - legend.columnWidth() - 6;
-        Rectangle2D box = new Rectangle2D.Double(left, ChartStyle.PAD + 2, right - left,
-                size.heightPt() - 2 * ChartStyle.PAD - 2 - Panel.xAxisHeight());
-        Panel p = new Panel(d, box, x, y).frame(true, true);
-        Color planetFill = new Color(planetColour.getRed(), planetColour.getGreen(), planetColour.getBlue(), 150);
-        Color planetBar = new Color(planetColour.getRed(), planetColour.getGreen(), planetColour.getBlue(), 80);
-        Color starBar = new Color(starColour.getRed(), starColour.getGreen(), starColour.getBlue(), 110);
-        for (Point pt : stars) {
-            cross(p, pt, starBar);
+        c.getStyler().setXAxisMin(xr[0]);
+        c.getStyler().setXAxisMax(xr[1]);
+        c.getStyler().setYAxisMin(yr[0]);
+        c.getStyler().setYAxisMax(yr[1]);
+        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideS);
+        c.getStyler().setLegendLayout(org.knowm.xchart.style.Styler.LegendLayout.Horizontal);
+        Color starColour = Palette.seriesColour(1);
+        Color planetColour = Palette.seriesColour(0);
+        ranges(c, "star ranges", stars, translucent(starColour, 110));
+        ranges(c, "planet ranges", planets, translucent(planetColour, 80));
+        if (!stars.isEmpty()) {
+            ChartStyle.points(c, "host stars", fe(stars), mg(stars), Marker.OPEN_CIRCLE, starColour, 1.4, true);
         }
-        for (Point pt : planets) {
-            cross(p, pt, planetBar);
-        }
-        for (Point pt : stars) {
-            p.markerAt(Marker.OPEN_CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), starColour, ChartStyle.MARKER_PT + 1.6);
-        }
-        // planets on top, smaller than the star rings: a planet that sits on its star shows as a dot in a ring
-        for (Point pt : planets) {
-            p.markerAt(Marker.CIRCLE, p.px(pt.feSi()), p.py(pt.mgSi()), planetFill, ChartStyle.MARKER_PT - 1.2);
+        // planets over the star rings and smaller: a planet that sits on its star shows as a dot in a ring
+        if (!planets.isEmpty()) {
+            ChartStyle.points(c, "predicted planets", fe(planets), mg(planets), Marker.CIRCLE,
+                    translucent(planetColour, 150), 0.65, true);
         }
         for (int i = 0; i < references.size(); i++) {
             Point r = references.get(i);
-            p.markerAt(REFERENCE_MARKERS[i % REFERENCE_MARKERS.length], p.px(r.feSi()), p.py(r.mgSi()), Palette.AXIS,
-                    ChartStyle.MARKER_PT + 2);
-            d.text(r.label(), p.px(r.feSi()) + 4.5, p.py(r.mgSi()) - 3, ChartStyle.NOTE_PT, Drawing.Align.LEFT,
-                    Palette.AXIS);
+            ChartStyle.points(c, r.label(), new double[] {r.feSi()}, new double[] {r.mgSi()},
+                    REFERENCE_MARKERS[i % REFERENCE_MARKERS.length], Palette.AXIS, 1.6, true);
         }
-        legend.draw(d, right + 6, box.getMinY() + 2, 1, 0);
-        return d;
+        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        Figure.layOut(c, c.getWidth(), c.getHeight());
+        DirectLabels labels = new DirectLabels(f, c);
+        for (Point r : references) {
+            double w = Fonts.width(r.label(), ChartStyle.NOTE_PT);
+            double x = labels.x(r.feSi());
+            double y = labels.y(r.mgSi());
+            labels.putFirstFree(r.label(), -1, x + 5 + w / 2, y - 4, x - 5 - w / 2, y - 4, x + 5 + w / 2, y + 5,
+                    x - 5 - w / 2, y + 5);
+        }
+        return f;
     }
 
-    private static void cross(final Panel p, final Point pt, final Color c) {
-        LineStyle s = LineStyle.solid(c, 0.5);
-        Drawing d = p.drawing();
-        d.clip(p.area());
-        if (Double.isFinite(pt.feSiLow()) && Double.isFinite(pt.feSiHigh())) {
-            d.stroke(new Line2D.Double(p.px(pt.feSiLow()), p.py(pt.mgSi()), p.px(pt.feSiHigh()), p.py(pt.mgSi())), s);
+    private static Color translucent(final Color c, final int alpha) {
+        return new Color(c.getRed(), c.getGreen(), c.getBlue(), alpha);
+    }
+
+    private static double[] fe(final List<Point> points) {
+        return points.stream().mapToDouble(Point::feSi).toArray();
+    }
+
+    private static double[] mg(final List<Point> points) {
+        return points.stream().mapToDouble(Point::mgSi).toArray();
+    }
+
+    /** The 16th-84th percentile ranges of a group as thin crosses, one series (one path). */
+    private static void ranges(final XYChart c, final String name, final List<Point> points, final Color colour) {
+        List<double[]> segments = new ArrayList<>();
+        for (Point pt : points) {
+            if (Double.isFinite(pt.feSiLow()) && Double.isFinite(pt.feSiHigh())) {
+                segments.add(new double[] {pt.feSiLow(), pt.mgSi(), pt.feSiHigh(), pt.mgSi()});
+            }
+            if (Double.isFinite(pt.mgSiLow()) && Double.isFinite(pt.mgSiHigh())) {
+                segments.add(new double[] {pt.feSi(), pt.mgSiLow(), pt.feSi(), pt.mgSiHigh()});
+            }
         }
-        if (Double.isFinite(pt.mgSiLow()) && Double.isFinite(pt.mgSiHigh())) {
-            d.stroke(new Line2D.Double(p.px(pt.feSi()), p.py(pt.mgSiLow()), p.px(pt.feSi()), p.py(pt.mgSiHigh())), s);
+        if (segments.isEmpty()) {
+            return;
         }
-        d.endClip();
+        double[] x = new double[3 * segments.size()];
+        double[] y = new double[3 * segments.size()];
+        for (int k = 0; k < segments.size(); k++) {
+            double[] sg = segments.get(k);
+            x[3 * k] = sg[0];
+            y[3 * k] = sg[1];
+            x[3 * k + 1] = sg[2];
+            y[3 * k + 1] = sg[3];
+            x[3 * k + 2] = sg[2];
+            y[3 * k + 2] = Double.NaN;
+        }
+        ChartStyle.line(c, name, x, y, LineStyle.solid(colour, 0.5), false);
     }
 
     private double[] range(final boolean fe) {

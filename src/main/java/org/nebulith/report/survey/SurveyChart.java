@@ -15,7 +15,7 @@ import org.apache.commons.csv.CSVRecord;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.planet.MolarRatios;
 import org.nebulith.planet.ReferenceBodies;
-import org.nebulith.report.chart.Drawing;
+import org.nebulith.report.chart.Figure;
 import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
@@ -67,7 +67,7 @@ final class SurveyChart {
         if (stars.isEmpty()) {
             return null;
         }
-        Drawing chart = new SurveyScatter(stars, planets, references()).chart(ChartSize.COLUMN_TALL);
+        Figure chart = new SurveyScatter(stars, planets, references()).chart(ChartSize.COLUMN_TALL);
         return ChartRenderer.write(chart, run, BASE, java.util.EnumSet.allOf(ChartFormat.class)).png();
     }
 

@@ -10,7 +10,7 @@ public final class ChartFixtures {
     }
 
     /** @return every chart kind with invented demo data, by base file name */
-    public static Map<String, Drawing> all() {
+    public static Map<String, Figure> all() {
         return ChartSamples.all();
     }
 }

@@ -20,7 +20,7 @@ public final class ChartRenderProbe {
         Path target = Path.of(args[0]);
         try (RunFolder run = AtomicOutput.openRunFolder(target, true, new RunInputs())) {
             for (int pass = 0; pass < 2; pass++) {
-                for (Map.Entry<String, Drawing> e : ChartSamples.all().entrySet()) {
+                for (Map.Entry<String, Figure> e : ChartSamples.all().entrySet()) {
                     for (ChartFormat f : ChartFormat.values()) {
                         long t0 = System.nanoTime();
                         ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(), EnumSet.of(f));

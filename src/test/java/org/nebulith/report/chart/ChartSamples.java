@@ -117,8 +117,8 @@ final class ChartSamples {
     }
 
     /** @return every chart kind, by base file name */
-    static java.util.Map<String, Drawing> all() {
-        java.util.Map<String, Drawing> charts = new java.util.LinkedHashMap<>();
+    static java.util.Map<String, Figure> all() {
+        java.util.Map<String, Figure> charts = new java.util.LinkedHashMap<>();
         charts.put("condensation-curves", condensation().chart(ChartSize.COLUMN_TALL));
         charts.put("phase-assemblage", phases().chart(ChartSize.PAGE));
         charts.put("radial-profile", radial().chart(ChartSize.PAGE.widthPt(), 330));

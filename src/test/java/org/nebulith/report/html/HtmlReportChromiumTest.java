@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.nebulith.report.chart.Drawing;
+import org.nebulith.report.chart.Figure;
 import org.nebulith.files.AtomicOutput;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
@@ -63,7 +63,7 @@ class HtmlReportChromiumTest {
                 Instant.parse("2026-01-01T00:00:00Z"));
         try (RunFolder run = AtomicOutput.openRunFolder(target, false, inputs)) {
             Report.Section charts = report.section("Charts");
-            for (Map.Entry<String, Drawing> e : ChartFixtures.all().entrySet()) {
+            for (Map.Entry<String, Figure> e : ChartFixtures.all().entrySet()) {
                 ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(),
                         EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
                 charts.chart(r, e.getKey().replace('-', ' ') + " (invented demo data)");

@@ -6,12 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.geom.Path2D;
 import java.awt.geom.PathIterator;
-import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
-/** The chart kit's geometry: line reduction, label spreading, axis ticks and labels, SVG text. */
-class ChartKitTest {
+/** The chart engine's geometry: line reduction, label spreading, tick labels. */
+class ChartEngineTest {
 
     @Test
     void reductionKeepsEveryPointFartherThanTheToleranceAndDropsCollinearOnes() {
@@ -51,23 +50,14 @@ class ChartKitTest {
     }
 
     @Test
-    void ticksAreRoundAndLabelsPlain() {
-        Axis a = Axis.linear(0, 1, "f");
-        assertEquals(List.of(0.0, 0.2, 0.4, 0.6000000000000001, 0.8, 1.0), a.ticks());
-        assertEquals("0.6", a.label(a.ticks().get(3)));
-        Axis log = Axis.log(0.2, 3, "r [AU]");
-        assertTrue(log.ticks().contains(1.5) && log.ticks().contains(0.3), log.ticks().toString());
-        assertEquals("1.5", log.label(1.5));
-        assertEquals("10\u207b\u2074", Axis.log(1e-7, 1e-3, "P").label(1e-4));
-        Axis t = Axis.linear(300, 2000, "T").reversed();
-        assertTrue(t.fraction(2000) < t.fraction(300));
-    }
-
-    @Test
-    void svgTextIsLiveAndEscaped() {
-        Drawing d = new Drawing(100, 50).text("Mg/Si < 1 & \"x\"", 10, 20, 7, Drawing.Align.LEFT, Palette.AXIS);
-        String svg = SvgWriter.write(d);
-        assertTrue(svg.contains(">Mg/Si &lt; 1 &amp; &quot;x&quot;</text>"), svg);
+    void tickLabelsArePlainDecimalsAndPowers() {
+        assertEquals("0.6", TickLabels.linear(0.6000000000000001));
+        assertEquals("0", TickLabels.linear(-1e-17));
+        assertEquals("\u22120.2", TickLabels.linear(-0.2));
+        assertEquals("0.3", TickLabels.log(0.3, 1.2));
+        assertEquals("", TickLabels.log(0.7, 1.2), "minor ticks of a short log axis are unlabelled");
+        assertEquals("10\u207b\u2074", TickLabels.log(1e-4, 4));
+        assertEquals("", TickLabels.log(2e-4, 4), "a long log axis labels its decades only");
     }
 
     private static int vertices(final Path2D.Double p) {

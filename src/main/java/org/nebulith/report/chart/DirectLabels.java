@@ -1,0 +1,175 @@
+package org.nebulith.report.chart;
+
+import java.awt.geom.Rectangle2D;
+import java.util.List;
+
+import org.knowm.xchart.AnnotationText;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.style.XYStyler;
+
+/**
+ * Labels written on a laid-out XChart chart, placed in device coordinates [pt] where they overlap
+ * nothing ({@link Placement}) and added as XChart text annotations in screen space: series names
+ * beside their curves, notes in the emptiest corner of the plot.
+ */
+final class DirectLabels {
+
+    private final Figure figure;
+    private final XYChart chart;
+    private final Rectangle2D box;
+    private final Placement free;
+
+    /**
+     * @param figure the figure (labels are recorded as its texts)
+     * @param chart  the chart, already laid out at its final size ({@link Figure#layOut})
+     */
+    DirectLabels(final Figure figure, final XYChart chart) {
+        this.figure = figure;
+        this.chart = chart;
+        this.box = plotBox(chart);
+        this.free = new Placement(box);
+    }
+
+    /** @param chart a laid-out chart with its axis ranges set @return its plot area [pt] */
+    static Rectangle2D plotBox(final XYChart chart) {
+        XYStyler s = chart.getStyler();
+        double x0 = chart.getScreenXFromChart(s.getXAxisMin());
+        double x1 = chart.getScreenXFromChart(s.getXAxisMax());
+        double y0 = chart.getScreenYFromChart(s.getYAxisMin());
+        double y1 = chart.getScreenYFromChart(s.getYAxisMax());
+        return new Rectangle2D.Double(Math.min(x0, x1), Math.min(y0, y1), Math.abs(x1 - x0), Math.abs(y1 - y0));
+    }
+
+    /** @return the plot area [pt] */
+    Rectangle2D box() {
+        return box;
+    }
+
+    /** @return the free-space bookkeeping */
+    Placement free() {
+        return free;
+    }
+
+    /** @param v an x value @return its device x [pt] */
+    double x(final double v) {
+        return chart.getScreenXFromChart(v);
+    }
+
+    /** @param v a y value @return its device y [pt] */
+    double y(final double v) {
+        return chart.getScreenYFromChart(v);
+    }
+
+    /** @param dev a device x [pt] @return the x value there */
+    double dataX(final double dev) {
+        XYStyler s = chart.getStyler();
+        return inverse((dev - box.getMinX()) / box.getWidth(), s.getXAxisMin(), s.getXAxisMax(),
+                s.isXAxisLogarithmic());
+    }
+
+    /** @param dev a device y [pt] @return the y value there */
+    double dataY(final double dev) {
+        XYStyler s = chart.getStyler();
+        return inverse((box.getMaxY() - dev) / box.getHeight(), s.getYAxisMin(), s.getYAxisMax(),
+                s.isYAxisLogarithmic());
+    }
+
+    private static double inverse(final double fraction, final double min, final double max, final boolean log) {
+        return log ? Math.pow(10, Math.log10(min) + fraction * (Math.log10(max) - Math.log10(min)))
+                : min + fraction * (max - min);
+    }
+
+    /**
+     * @param xs x values (NaN = gap)
+     * @param ys y values (NaN = gap)
+     * @return their device coordinates, NaN kept
+     */
+    double[][] device(final double[] xs, final double[] ys) {
+        double[][] d = new double[2][xs.length];
+        boolean logY = chart.getStyler().isYAxisLogarithmic();
+        for (int i = 0; i < xs.length; i++) {
+            boolean ok = Double.isFinite(xs[i]) && Double.isFinite(ys[i]) && (!logY || ys[i] > 0);
+            d[0][i] = ok ? x(xs[i]) : Double.NaN;
+            d[1][i] = ok ? y(ys[i]) : Double.NaN;
+        }
+        return d;
+    }
+
+    /**
+     * @param text a label
+     * @param cx   its centre x [pt]
+     * @param cy   its centre y [pt]
+     * @return the box it covers [pt]
+     */
+    static Rectangle2D bounds(final String text, final double cx, final double cy) {
+        double w = Fonts.width(text, ChartStyle.NOTE_PT) + 1;
+        double h = Fonts.capHeight(ChartStyle.NOTE_PT) + 1.5;
+        return new Rectangle2D.Double(cx - w / 2, cy - h / 2, w, h);
+    }
+
+    /**
+     * Writes a label centred on a device point and marks its box as taken.
+     *
+     * @param text the label
+     * @param cx   centre x [pt]
+     * @param cy   centre y [pt]
+     */
+    void put(final String text, final double cx, final double cy) {
+        free.take(bounds(text, cx, cy));
+        figure.text(text);
+        chart.addAnnotation(new AnnotationText(text, cx, chart.getHeight() - cy, true));
+    }
+
+    /**
+     * Writes a label at the first free place among candidate centres.
+     *
+     * @param text   the label
+     * @param except index of a line the label may touch (its own), or -1
+     * @param xy     candidate centres, x and y alternating [pt]
+     * @return whether it was placed
+     */
+    boolean putFirstFree(final String text, final int except, final double... xy) {
+        for (int i = 0; i + 1 < xy.length; i += 2) {
+            if (free.free(bounds(text, xy[i], xy[i + 1]), except)) {
+                put(text, xy[i], xy[i + 1]);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Writes note lines, left-aligned, in the corner of the plot that overlaps the fewest lines.
+     *
+     * @param lines the note lines
+     */
+    void note(final List<String> lines) {
+        if (lines.isEmpty()) {
+            return;
+        }
+        double lineH = ChartStyle.NOTE_PT + 1.5;
+        double w = 0;
+        for (String l : lines) {
+            w = Math.max(w, Fonts.width(l, ChartStyle.NOTE_PT) + 1);
+        }
+        double h = lines.size() * lineH;
+        Rectangle2D best = null;
+        int fewest = Integer.MAX_VALUE;
+        for (double fy : new double[] {0, 1}) {
+            for (double fx : new double[] {1, 0}) {
+                Rectangle2D r = new Rectangle2D.Double(box.getMinX() + 3 + fx * (box.getWidth() - w - 6),
+                        box.getMinY() + 3 + fy * (box.getHeight() - h - 6), w, h);
+                int hits = free.hits(r);
+                if (hits < fewest) {
+                    fewest = hits;
+                    best = r;
+                }
+            }
+        }
+        for (int i = 0; i < lines.size(); i++) {
+            String l = lines.get(i);
+            double lw = Fonts.width(l, ChartStyle.NOTE_PT);
+            put(l, best.getMinX() + lw / 2, best.getMinY() + (i + 0.5) * lineH);
+        }
+    }
+}
