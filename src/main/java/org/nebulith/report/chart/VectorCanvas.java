@@ -47,6 +47,8 @@ final class VectorCanvas extends Graphics2D {
     private double endX;
     private double endY;
     private int texts;
+    private Paint paint;
+    private Paint applied;
 
     /**
      * @param backend the vector graphics that receives the drawing
@@ -77,11 +79,15 @@ final class VectorCanvas extends Graphics2D {
             join(l.getX1(), l.getY1(), l.getX2(), l.getY2());
             return;
         }
-        flush();
+        ready();
         backend.draw(s);
     }
 
     private void join(final double x1, final double y1, final double x2, final double y2) {
+        if (pending != null && paint != null && !paint.equals(applied)) {
+            flush();
+        }
+        applyPaint();
         if (pending == null) {
             pending = new Path2D.Double();
             pending.moveTo(x1, y1);
@@ -95,7 +101,7 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public void fill(final Shape s) {
-        flush();
+        ready();
         TextOutlines.Match m = labels.find(s);
         if (m == null) {
             backend.fill(s);
@@ -118,18 +124,29 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public void setColor(final Color c) {
-        if (!Objects.equals(c, backend.getColor())) {
-            flush();
-        }
-        backend.setColor(c);
+        setPaint(c);
     }
 
+    /**
+     * Paint is passed on only when something is drawn: XChart sets the fill colour of a series at
+     * every gap of a line without filling anything, which must not end the line's path.
+     */
     @Override
     public void setPaint(final Paint paint) {
-        if (!Objects.equals(paint, backend.getPaint())) {
-            flush();
+        this.paint = paint;
+    }
+
+    /** Draws the collected path, then brings the backend's paint up to date. */
+    private void ready() {
+        flush();
+        applyPaint();
+    }
+
+    private void applyPaint() {
+        if (paint != null && !paint.equals(applied)) {
+            backend.setPaint(paint);
+            applied = paint;
         }
-        backend.setPaint(paint);
     }
 
     @Override
@@ -266,89 +283,89 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public void drawString(final String str, final int x, final int y) {
-        flush();
+        ready();
         backend.drawString(str, x, y);
     }
 
     @Override
     public void drawString(final String str, final float x, final float y) {
-        flush();
+        ready();
         backend.drawString(str, x, y);
     }
 
     @Override
     public void drawString(final AttributedCharacterIterator iterator, final int x, final int y) {
-        flush();
+        ready();
         backend.drawString(iterator, x, y);
     }
 
     @Override
     public void drawString(final AttributedCharacterIterator iterator, final float x, final float y) {
-        flush();
+        ready();
         backend.drawString(iterator, x, y);
     }
 
     @Override
     public void drawGlyphVector(final GlyphVector g, final float x, final float y) {
-        flush();
+        ready();
         backend.drawGlyphVector(g, x, y);
     }
 
     @Override
     public boolean drawImage(final Image img, final AffineTransform xform, final ImageObserver obs) {
-        flush();
+        ready();
         return backend.drawImage(img, xform, obs);
     }
 
     @Override
     public void drawImage(final BufferedImage img, final BufferedImageOp op, final int x, final int y) {
-        flush();
+        ready();
         backend.drawImage(img, op, x, y);
     }
 
     @Override
     public void drawRenderedImage(final RenderedImage img, final AffineTransform xform) {
-        flush();
+        ready();
         backend.drawRenderedImage(img, xform);
     }
 
     @Override
     public void drawRenderableImage(final RenderableImage img, final AffineTransform xform) {
-        flush();
+        ready();
         backend.drawRenderableImage(img, xform);
     }
 
     @Override
     public boolean drawImage(final Image img, final int x, final int y, final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, x, y, observer);
     }
 
     @Override
     public boolean drawImage(final Image img, final int x, final int y, final int width, final int height,
                              final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, x, y, width, height, observer);
     }
 
     @Override
     public boolean drawImage(final Image img, final int x, final int y, final Color bgcolor,
                              final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, x, y, bgcolor, observer);
     }
 
     @Override
     public boolean drawImage(final Image img, final int x, final int y, final int width, final int height,
                              final Color bgcolor, final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, x, y, width, height, bgcolor, observer);
     }
 
     @Override
     public boolean drawImage(final Image img, final int dx1, final int dy1, final int dx2, final int dy2,
                              final int sx1, final int sy1, final int sx2, final int sy2, final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, dx1, dy1, dx2, dy2, sx1, sy1, sx2, sy2, observer);
     }
 
@@ -356,13 +373,13 @@ final class VectorCanvas extends Graphics2D {
     public boolean drawImage(final Image img, final int dx1, final int dy1, final int dx2, final int dy2,
                              final int sx1, final int sy1, final int sx2, final int sy2, final Color bgcolor,
                              final ImageObserver observer) {
-        flush();
+        ready();
         return backend.drawImage(img, dx1, dy1, dx2, dy2, sx1, sy1, sx2, sy2, bgcolor, observer);
     }
 
     @Override
     public void copyArea(final int x, final int y, final int width, final int height, final int dx, final int dy) {
-        flush();
+        ready();
         backend.copyArea(x, y, width, height, dx, dy);
     }
 
@@ -373,71 +390,71 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public void fillRect(final int x, final int y, final int width, final int height) {
-        flush();
+        ready();
         backend.fillRect(x, y, width, height);
     }
 
     @Override
     public void clearRect(final int x, final int y, final int width, final int height) {
-        flush();
+        ready();
         backend.clearRect(x, y, width, height);
     }
 
     @Override
     public void drawRoundRect(final int x, final int y, final int width, final int height, final int arcWidth,
                               final int arcHeight) {
-        flush();
+        ready();
         backend.drawRoundRect(x, y, width, height, arcWidth, arcHeight);
     }
 
     @Override
     public void fillRoundRect(final int x, final int y, final int width, final int height, final int arcWidth,
                               final int arcHeight) {
-        flush();
+        ready();
         backend.fillRoundRect(x, y, width, height, arcWidth, arcHeight);
     }
 
     @Override
     public void drawOval(final int x, final int y, final int width, final int height) {
-        flush();
+        ready();
         backend.drawOval(x, y, width, height);
     }
 
     @Override
     public void fillOval(final int x, final int y, final int width, final int height) {
-        flush();
+        ready();
         backend.fillOval(x, y, width, height);
     }
 
     @Override
     public void drawArc(final int x, final int y, final int width, final int height, final int startAngle,
                         final int arcAngle) {
-        flush();
+        ready();
         backend.drawArc(x, y, width, height, startAngle, arcAngle);
     }
 
     @Override
     public void fillArc(final int x, final int y, final int width, final int height, final int startAngle,
                         final int arcAngle) {
-        flush();
+        ready();
         backend.fillArc(x, y, width, height, startAngle, arcAngle);
     }
 
     @Override
     public void drawPolyline(final int[] xPoints, final int[] yPoints, final int nPoints) {
-        flush();
+        ready();
         backend.drawPolyline(xPoints, yPoints, nPoints);
     }
 
     @Override
     public void drawPolygon(final int[] xPoints, final int[] yPoints, final int nPoints) {
-        flush();
+        ready();
         backend.drawPolygon(xPoints, yPoints, nPoints);
     }
 
     @Override
     public void fillPolygon(final int[] xPoints, final int[] yPoints, final int nPoints) {
-        flush();
+        ready();
         backend.fillPolygon(xPoints, yPoints, nPoints);
     }
 
@@ -450,7 +467,7 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public Graphics create() {
-        flush();
+        ready();
         return new VectorCanvas((Graphics2D) backend.create(), labels);
     }
 
@@ -486,7 +503,7 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public Paint getPaint() {
-        return backend.getPaint();
+        return paint != null ? paint : backend.getPaint();
     }
 
     @Override
@@ -506,7 +523,7 @@ final class VectorCanvas extends Graphics2D {
 
     @Override
     public Color getColor() {
-        return backend.getColor();
+        return paint instanceof Color c ? c : backend.getColor();
     }
 
     @Override

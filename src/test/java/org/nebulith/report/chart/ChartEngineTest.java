@@ -55,7 +55,9 @@ class ChartEngineTest {
         assertEquals("0", TickLabels.linear(-1e-17));
         assertEquals("\u22120.2", TickLabels.linear(-0.2));
         assertEquals("0.3", TickLabels.log(0.3, 1.2));
-        assertEquals("", TickLabels.log(0.7, 1.2), "minor ticks of a short log axis are unlabelled");
+        assertEquals("0.7", TickLabels.log(0.7, 1.5));
+        assertEquals("", TickLabels.log(0.4, 1.5), "some minor ticks of a short log axis are unlabelled");
+        assertEquals("", TickLabels.log(0.9, 1.1));
         assertEquals("10\u207b\u2074", TickLabels.log(1e-4, 4));
         assertEquals("", TickLabels.log(2e-4, 4), "a long log axis labels its decades only");
     }

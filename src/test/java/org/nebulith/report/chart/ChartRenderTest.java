@@ -162,7 +162,8 @@ class ChartRenderTest {
                 for (XYSeries series : c.getSeriesCollection()) {
                     if (series.getXYSeriesRenderStyle().orElse(null) == XYSeries.XYSeriesRenderStyle.Line
                             && series.getXData().length > 20) {
-                        long paths = svg.lines().filter(l -> l.contains(strokeOf(series))).count();
+                        String[] style = strokeOf(series).split("\\|");
+                        long paths = svg.lines().filter(l -> l.contains(style[0]) && l.contains(style[1])).count();
                         assertTrue(paths >= 1 && paths <= 3, e.getKey() + ": series " + series.getName() + " drawn as "
                                 + paths + " paths");
                     }
@@ -172,35 +173,56 @@ class ChartRenderTest {
     }
 
     @Test
-    void condensationCurvesAreOnePathEach() {
-        // 14 invented elements of 171 points: each curve one path, whatever the number of grid points
+    void condensationCurvesAreOnePathEachAndLabelledAsText() {
+        // 14 invented elements of 171 points each: one path per curve (and one legend sample), not 170 segments
         Figure f = ChartSamples.condensation().chart(ChartSize.COLUMN_TALL);
         String svg = new String(ChartRenderer.svg(f), StandardCharsets.UTF_8);
-        long curvePaths = svg.lines().filter(l -> l.contains("<path") && l.contains("stroke-width:1;")).count();
-        long segments = svg.lines().filter(l -> l.contains("<line")).count();
-        assertTrue(segments < 40, segments + " separate line elements");
-        for (String element : List.of("Al", "Ti", "Mg", "Na", "S")) {
+        long curvePaths = svg.lines().filter(l -> l.contains("<path") && l.contains("stroke-linejoin:round")).count();
+        assertEquals(2 * 14, curvePaths, "one path per curve and one legend sample per curve");
+        assertEquals(0, svg.lines().filter(l -> l.contains("<line")).count(), "no separate segments");
+        for (String element : List.of("Al", "Ti", "Mg", "Na", "S", "T50")) {
             assertTrue(svg.contains(">" + element + "</text>"), element + " written as text");
         }
-        assertTrue(curvePaths <= 2 * 14 + 4, curvePaths + " stroked paths for 14 curves");
+    }
+
+    @Test
+    void temperatureAxisDecreasesToTheRightWithPositiveLabels() {
+        Figure f = ChartSamples.condensation().chart(ChartSize.COLUMN_TALL);
+        XYChart c = f.charts().get(0);
+        assertTrue(c.getScreenXFromChart(-2000) < c.getScreenXFromChart(-300), "hot at the left");
+        String svg = new String(ChartRenderer.svg(f), StandardCharsets.UTF_8);
+        assertTrue(svg.contains(">1500</text>") && !svg.contains(">\u22121500</text>"), "temperatures labelled as such");
     }
 
     private static String escaped(final String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
     }
 
-    /** @return the SVG style fragment of a series' stroke colour */
+    /**
+     * @return the SVG style of a series' stroke (colour | width and dash pattern), as VectorGraphics2D writes
+     *         it (an opacity between the two parts)
+     */
     private static String strokeOf(final XYSeries s) {
         java.awt.Color c = s.getLineColor();
-        return "stroke:rgb(" + c.getRed() + "," + c.getGreen() + "," + c.getBlue() + ")" + dashOf(s);
+        java.awt.BasicStroke b = s.getLineStyle();
+        StringBuilder style = new StringBuilder("stroke:rgb(").append(c.getRed()).append(',').append(c.getGreen())
+                .append(',').append(c.getBlue()).append(")|");
+        if (b.getLineWidth() != 1f) {
+            style.append(";stroke-width:").append(number(b.getLineWidth()));
+        }
+        style.append(";stroke-miterlimit:10;stroke-linejoin:round;");
+        float[] dash = b.getDashArray();
+        if (dash == null) {
+            return style.append('"').toString();
+        }
+        style.append("stroke-dasharray:");
+        for (int i = 0; i < dash.length; i++) {
+            style.append(i > 0 ? "," : "").append(number(dash[i]));
+        }
+        return style.append(";\"").toString();
     }
 
-    private static String dashOf(final XYSeries s) {
-        float[] d = s.getLineStyle().getDashArray();
-        if (d == null) {
-            return ";stroke-miterlimit";
-        }
-        StringBuilder b = new StringBuilder(";");
-        return b.toString();
+    private static String number(final float v) {
+        return v == Math.rint(v) ? Integer.toString((int) v) : Float.toString(v);
     }
 }
