@@ -159,11 +159,14 @@ public final class ChartStyle {
      * @param y      y values (NaN breaks the line)
      * @param style  colour, width and dash pattern
      * @param legend whether the legend lists it
-     * @return the series
+     * @return the series, or null when no point has both values (nothing is drawn)
      */
     static XYSeries line(final XYChart chart, final String name, final double[] x, final double[] y,
                          final LineStyle style, final boolean legend) {
         double[][] kept = Polylines.reduce(chart, x, y);
+        if (kept[0].length == 0) {
+            return null;
+        }
         XYSeries s = chart.addSeries(name, kept[0], kept[1]);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
         s.setLineColor(style.colour());
@@ -185,10 +188,13 @@ public final class ChartStyle {
      * @param colour its colour
      * @param scale  its size relative to {@link #MARKER_PT}
      * @param legend whether the legend lists it
-     * @return the series
+     * @return the series, or null for no points
      */
     static XYSeries points(final XYChart chart, final String name, final double[] x, final double[] y,
                            final Marker marker, final Color colour, final double scale, final boolean legend) {
+        if (x.length == 0) {
+            return null;
+        }
         XYSeries s = chart.addSeries(name, x, y);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
         s.setMarker(marker.sized(scale));
@@ -196,6 +202,24 @@ public final class ChartStyle {
         s.setLineColor(colour);
         s.setShowInLegend(legend);
         return s;
+    }
+
+    /**
+     * Gives a chart without data series an invisible one (XChart paints no chart without series).
+     *
+     * @param chart the chart
+     */
+    static void neverEmpty(final XYChart chart) {
+        if (!chart.getSeriesCollection().isEmpty()) {
+            return;
+        }
+        XYStyler s = chart.getStyler();
+        double x = s.getXAxisMin() != null ? s.getXAxisMin() : 0;
+        double y = s.getYAxisMin() != null ? s.getYAxisMin() : 0;
+        XYSeries none = chart.addSeries("(no data)", new double[] {x}, new double[] {y});
+        none.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+        none.setMarker(SeriesMarkers.NONE);
+        none.setShowInLegend(false);
     }
 
     /**

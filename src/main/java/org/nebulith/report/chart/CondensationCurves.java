@@ -66,8 +66,7 @@ public record CondensationCurves(double[] temperatureK, List<Curve> elements, do
             ChartStyle.points(c, "T50", java.util.Arrays.copyOf(tx, n), java.util.Arrays.copyOf(ty, n),
                     Marker.OPEN_CIRCLE, Palette.AXIS, 1.3, true);
         }
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         double[][][] device = new double[elements.size()][][];
         for (int i = 0; i < elements.size(); i++) {

@@ -63,14 +63,10 @@ public record CoreFractionComparison(List<Point> planets) {
         ChartStyle.line(c, "ranges", x, y, LineStyle.solid(Palette.colour(0), 0.6), false);
         ChartStyle.points(c, "planets", planets.stream().mapToDouble(Point::predicted).toArray(),
                 planets.stream().mapToDouble(Point::measured).toArray(), Marker.CIRCLE, Palette.colour(0), 1, true);
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         for (Point pt : planets) {
-            double w = Fonts.width(pt.label(), ChartStyle.NOTE_PT);
-            double px = labels.x(pt.predicted());
-            double py = labels.y(pt.measured());
-            labels.putFirstFree(pt.label(), -1, px + 4 + w / 2, py - 4, px - 4 - w / 2, py - 4, px + 4 + w / 2, py + 5);
+            labels.beside(pt.label(), labels.x(pt.predicted()), labels.y(pt.measured()));
         }
         return f;
     }

@@ -83,8 +83,7 @@ public record DevolatilisationPattern(List<String> elements, double[] t50K, List
                         colour(i), 1.15, true);
             }
         }
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         for (int i = 0; i < bodies.size(); i++) {
             double[] r = bodies.get(i).ratios();

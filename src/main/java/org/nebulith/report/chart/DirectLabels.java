@@ -139,6 +139,19 @@ final class DirectLabels {
     }
 
     /**
+     * Writes a point's label beside it: right and above, left and above, right and below, or left
+     * and below, the first place free.
+     *
+     * @param text the label
+     * @param px   the point's device x [pt]
+     * @param py   the point's device y [pt]
+     */
+    void beside(final String text, final double px, final double py) {
+        double w = Fonts.width(text, ChartStyle.NOTE_PT) / 2 + 5;
+        putFirstFree(text, -1, px + w, py - 4, px - w, py - 4, px + w, py + 5, px - w, py + 5);
+    }
+
+    /**
      * Writes note lines, left-aligned, in the corner of the plot that overlaps the fewest lines.
      *
      * @param lines the note lines

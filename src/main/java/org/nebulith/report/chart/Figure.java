@@ -43,13 +43,6 @@ public final class Figure {
         this.heightPt = heightPt;
     }
 
-    /** @param chart a chart filling the figure @return the figure */
-    static Figure of(final XYChart chart) {
-        Figure f = new Figure(chart.getWidth(), chart.getHeight());
-        f.add(chart, 0, 0, chart.getWidth(), chart.getHeight());
-        return f;
-    }
-
     /** @return width [pt] */
     public double widthPt() {
         return widthPt;
@@ -73,7 +66,18 @@ public final class Figure {
      * @param height height [pt]
      */
     void add(final XYChart chart, final double x, final double y, final double width, final double height) {
+        ChartStyle.neverEmpty(chart);
         cells.add(new Cell(chart, x, y, (int) Math.round(width), (int) Math.round(height)));
+    }
+
+    /**
+     * Makes a chart fill the figure and lays it out, so that labels can be placed on it.
+     *
+     * @param chart the chart, of the figure's size
+     */
+    void fill(final XYChart chart) {
+        add(chart, 0, 0, widthPt, heightPt);
+        layOut(chart, chart.getWidth(), chart.getHeight());
     }
 
     /**
@@ -140,6 +144,7 @@ public final class Figure {
      * @return the left and right device x of its plot area when painted at that size [pt]
      */
     static double[] plotEdges(final XYChart chart, final int width, final int height) {
+        ChartStyle.neverEmpty(chart);
         layOut(chart, width, height);
         double[] range = xRange(chart);
         double a = chart.getScreenXFromChart(range[0]);

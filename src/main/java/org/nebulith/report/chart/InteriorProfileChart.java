@@ -39,12 +39,14 @@ public record InteriorProfileChart(double[] radiusKm, double[] densityKgM3, doub
         s.setLegendPosition(Styler.LegendPosition.InsideNE);
         ChartStyle.line(c, "density (left)", radiusKm, densityKgM3, ChartStyle.series(0).line(), true);
         XYSeries p = ChartStyle.line(c, "pressure (right)", radiusKm, pressureGpa, ChartStyle.series(1).line(), true);
-        p.setYAxisGroup(1);
+        if (p != null) {
+            p.setYAxisGroup(1);
+        }
         c.setYAxisGroupTitle(1, "Pressure [GPa]");
         s.setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
         s.setYAxisMin(1, 0.0);
         s.setYAxisMax(1, top(pressureGpa));
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
+        f.fill(c);
         return f;
     }
 

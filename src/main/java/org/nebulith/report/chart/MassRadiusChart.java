@@ -93,8 +93,7 @@ public record MassRadiusChart(double[] massMearth, List<Curve> curves, List<Plan
             ChartStyle.points(c, "measured planets", planets.stream().mapToDouble(Planet::mass).toArray(),
                     planets.stream().mapToDouble(Planet::radius).toArray(), Marker.DIAMOND, Palette.AXIS, 1.2, true);
         }
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         for (Planet pl : planets) {
             double x = labels.x(pl.mass());

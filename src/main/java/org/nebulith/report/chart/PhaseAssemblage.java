@@ -53,8 +53,7 @@ public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String 
             shown[i] = v;
             ChartStyle.line(c, phases.get(i).label(), x, v, ChartStyle.series(i).line(), true);
         }
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         double[][][] device = new double[phases.size()][][];
         for (int i = 0; i < phases.size(); i++) {

@@ -91,15 +91,10 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
             ChartStyle.points(c, r.label(), new double[] {r.feSi()}, new double[] {r.mgSi()},
                     REFERENCE_MARKERS[i % REFERENCE_MARKERS.length], Palette.AXIS, 1.6, true);
         }
-        f.add(c, 0, 0, size.widthPt(), size.heightPt());
-        Figure.layOut(c, c.getWidth(), c.getHeight());
+        f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
         for (Point r : references) {
-            double w = Fonts.width(r.label(), ChartStyle.NOTE_PT);
-            double x = labels.x(r.feSi());
-            double y = labels.y(r.mgSi());
-            labels.putFirstFree(r.label(), -1, x + 5 + w / 2, y - 4, x - 5 - w / 2, y - 4, x + 5 + w / 2, y + 5,
-                    x - 5 - w / 2, y + 5);
+            labels.beside(r.label(), labels.x(r.feSi()), labels.y(r.mgSi()));
         }
         return f;
     }
