@@ -104,7 +104,7 @@ public record BodyComparison(List<String> quantities, List<Body> bodies) {
         f.row(panels, height, GAP, 14);
         for (int q = 0; q < quantities.size(); q++) {
             XYChart c = panels.get(q);
-            Figure.layOut(c, c.getWidth(), c.getHeight());
+            f.layOut(c);
             DirectLabels labels = new DirectLabels(f, c);
             if (q == 0) {
                 for (int i = 0; i < bodies.size(); i++) {

@@ -26,6 +26,9 @@ public final class Figure {
     private record Cell(XYChart chart, double x, double y, int width, int height) {
     }
 
+    /** Least space right of stacked plots, for the last tick label [pt]. */
+    private static final double RIGHT_MARGIN = 6;
+
     private final double widthPt;
     private final double heightPt;
     private final List<Cell> cells = new ArrayList<>();
@@ -77,7 +80,7 @@ public final class Figure {
      */
     void fill(final XYChart chart) {
         add(chart, 0, 0, widthPt, heightPt);
-        layOut(chart, chart.getWidth(), chart.getHeight());
+        layOut(chart);
     }
 
     /**
@@ -93,7 +96,7 @@ public final class Figure {
         double[] left = new double[n];
         double[] right = new double[n];
         double maxLeft = 0;
-        double maxRight = 0;
+        double maxRight = RIGHT_MARGIN;
         for (int i = 0; i < n; i++) {
             XYChart c = charts.get(i);
             double[] edges = plotEdges(c, (int) Math.round(widthPt), (int) Math.round(heights[i]));
@@ -108,6 +111,37 @@ public final class Figure {
             add(charts.get(i), x, y, widthPt - x - (maxRight - right[i]), heights[i]);
             y += heights[i];
         }
+    }
+
+    /**
+     * Adds a chart so that its plot area covers a given rectangle of the figure (the chart itself may
+     * reach beyond it: give it a transparent background). Its axis insets are measured once, at a
+     * size larger than the rectangle.
+     *
+     * @param chart the chart
+     * @param plot  where its plot area must be [pt]
+     */
+    void overlay(final XYChart chart, final java.awt.geom.Rectangle2D plot) {
+        int w0 = (int) Math.round(plot.getWidth()) + 200;
+        int h0 = (int) Math.round(plot.getHeight()) + 200;
+        layOut(chart, w0, h0);
+        java.awt.geom.Rectangle2D box = DirectLabels.plotBox(chart);
+        double left = box.getMinX();
+        double top = box.getMinY();
+        double right = w0 - box.getMaxX();
+        double bottom = h0 - box.getMaxY();
+        add(chart, plot.getMinX() - left, plot.getMinY() - top, left + plot.getWidth() + right,
+                top + plot.getHeight() + bottom);
+    }
+
+    /** @return where a chart added to this figure sits and how large it is [pt], or null */
+    java.awt.geom.Rectangle2D cell(final XYChart chart) {
+        for (Cell c : cells) {
+            if (c.chart() == chart) {
+                return new java.awt.geom.Rectangle2D.Double(c.x(), c.y(), c.width(), c.height());
+            }
+        }
+        return null;
     }
 
     /**
@@ -150,6 +184,22 @@ public final class Figure {
         double a = chart.getScreenXFromChart(range[0]);
         double b = chart.getScreenXFromChart(range[1]);
         return new double[] {Math.min(a, b), Math.max(a, b)};
+    }
+
+    /**
+     * Lays a chart of this figure out at the size of its cell (after which its screen coordinates
+     * are those it is painted with).
+     *
+     * @param chart a chart added to this figure
+     */
+    void layOut(final XYChart chart) {
+        for (Cell c : cells) {
+            if (c.chart() == chart) {
+                layOut(chart, c.width(), c.height());
+                return;
+            }
+        }
+        throw new IllegalArgumentException("chart not in this figure");
     }
 
     /** Paints a chart on a scratch image so that XChart computes its layout (and its screen coordinates). */

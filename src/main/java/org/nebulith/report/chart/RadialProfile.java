@@ -102,9 +102,9 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         Figure f = new Figure(widthPt, heightPt);
         double[] r = range();
         List<Front> shown = shownFronts(r);
-        double strip = shown.isEmpty() ? 0 : LABEL_ROWS * (ChartStyle.NOTE_PT + 1.5) + 6;
+        double strip = shown.isEmpty() ? 0 : LABEL_ROWS * (ChartStyle.NOTE_PT + 2) + 6;
         double avail = heightPt - strip;
-        double[] heights = {avail * 0.17, avail * 0.17, avail * 0.27, avail * 0.15, avail * 0.24};
+        double[] heights = {avail * 0.2, avail * 0.19, avail * 0.25, avail * 0.14, avail * 0.22};
         XYChart t = panel(f, widthPt, heights[0], r, "T [K]");
         double[] tShown = shownOrAll(visible(temperatureK, r), temperatureK);
         double tLow = Math.floor(min(tShown) * 0.95 / 100) * 100;
@@ -119,14 +119,14 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         ChartStyle.logAxis(f, p, false, decadeBelow(min(pShown)), decadeAbove(max(pShown)));
         ChartStyle.line(p, "P", radiusAU, pressureBar, new LineStyle(Palette.seriesColour(0), Palette.LINE_WIDTH,
                 new float[] {4f, 2f}), false);
-        XYChart m = panel(f, widthPt, heights[2], r, "Molar ratio in solids");
+        XYChart m = panel(f, widthPt, heights[2], r, "Ratio [mol/mol]");
         middle(m);
         XYChart cf = panel(f, widthPt, heights[3], r, "Condensed");
         cf.getStyler().setYAxisMin(-0.03);
         cf.getStyler().setYAxisMax(1.03);
         ChartStyle.line(cf, CONDENSED, radiusAU, condensedFraction,
                 new LineStyle(Palette.seriesColour(2), Palette.LINE_WIDTH, new float[] {1f, 1.5f}), false);
-        XYChart z = panel(f, widthPt, heights[4], r, "Zone weight");
+        XYChart z = panel(f, widthPt, heights[4], r, "Weight");
         z.getStyler().setXAxisTicksVisible(true);
         z.getStyler().setXAxisTitleVisible(true);
         zones(z);
@@ -134,19 +134,21 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         for (XYChart c : panels) {
             frontLines(c, shown);
         }
-        List<XYChart> all = new ArrayList<>(panels);
-        double[] hs = heights;
-        XYChart labelStrip = null;
-        if (!shown.isEmpty()) {
-            labelStrip = strip(f, widthPt, strip, r);
-            all.add(0, labelStrip);
-            hs = new double[heights.length + 1];
-            hs[0] = strip;
-            System.arraycopy(heights, 0, hs, 1, heights.length);
+        f.stack(panels, heights, strip);
+        for (XYChart c : panels) {
+            f.layOut(c);
         }
-        f.stack(all, hs, 0);
-        for (XYChart c : all) {
-            Figure.layOut(c, c.getWidth(), c.getHeight());
+        if (!shown.isEmpty()) {
+            // the strip's plot area spans the panels' plot width above the top panel
+            java.awt.geom.Rectangle2D cell = f.cell(t);
+            java.awt.geom.Rectangle2D top = DirectLabels.plotBox(t);
+            XYChart labelStrip = strip(f, widthPt, strip, r);
+            double area = cell.getMinY() + top.getMinY() - 1;
+            // reaching down over the top panel (transparent): XChart maps no y into a plot under about 50 pt
+            f.overlay(labelStrip, new java.awt.geom.Rectangle2D.Double(cell.getMinX() + top.getMinX(), 1,
+                    top.getWidth(), area + 60));
+            f.layOut(labelStrip);
+            frontLabels(f, labelStrip, shown, area);
         }
         labelMiddle(f, m);
         DirectLabels cfLabels = new DirectLabels(f, cf);
@@ -154,9 +156,6 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         cfLabels.free().line(cfDev);
         labelEnd(cfLabels, CONDENSED, cfDev, 0);
         labelZones(f, z);
-        if (labelStrip != null) {
-            frontLabels(f, labelStrip, shown);
-        }
         return f;
     }
 
@@ -170,7 +169,7 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         c.getStyler().setXAxisTicksVisible(false);
         c.getStyler().setXAxisTitleVisible(false);
         c.getStyler().setChartPadding(2);
-        c.getStyler().setYAxisTickMarkSpacingHint(16);
+        c.getStyler().setYAxisTickMarkSpacingHint(12);
         c.getStyler().setLegendVisible(false);
         return c;
     }
@@ -319,20 +318,27 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
         XYStyler s = c.getStyler();
         s.setYAxisMin(0.0);
         s.setYAxisMax(1.0);
-        s.setAxisTicksVisible(false);
+        // the y axis is kept (blank): without it XChart gives the plot no height to map y into
+        s.setXAxisTicksVisible(false);
+        s.setYAxisTickLabelsFormattingFunction(v -> "");
+        s.setAxisTickMarkLength(0);
         s.setAxisTitlesVisible(false);
         s.setPlotBorderVisible(false);
         s.setPlotGridLinesVisible(false);
         s.setLegendVisible(false);
         s.setChartPadding(0);
+        java.awt.Color none = new java.awt.Color(255, 255, 255, 0);
+        s.setChartBackgroundColor(none);
+        s.setPlotBackgroundColor(none);
         return c;
     }
 
     /** Names the fronts in rows above the top panel, spread so that none overlaps, with a leader to each. */
-    private static void frontLabels(final Figure f, final XYChart stripChart, final List<Front> shown) {
+    private static void frontLabels(final Figure f, final XYChart stripChart, final List<Front> shown,
+                                    final double area) {
         DirectLabels labels = new DirectLabels(f, stripChart);
         java.awt.geom.Rectangle2D a = labels.box();
-        double rowH = ChartStyle.NOTE_PT + 1.5;
+        double rowH = ChartStyle.NOTE_PT + 2;
         List<double[]> leaders = new ArrayList<>();
         for (int row = 0; row < LABEL_ROWS; row++) {
             List<Front> inRow = new ArrayList<>();
@@ -367,7 +373,7 @@ public record RadialProfile(double[] radiusAU, double[] temperatureK, double[] p
             x[3 * i] = leaders.get(i)[0];
             y[3 * i] = leaders.get(i)[1];
             x[3 * i + 1] = leaders.get(i)[2];
-            y[3 * i + 1] = 0;
+            y[3 * i + 1] = labels.dataY(a.getMinY() + area);
             x[3 * i + 2] = leaders.get(i)[2];
             y[3 * i + 2] = Double.NaN;
         }

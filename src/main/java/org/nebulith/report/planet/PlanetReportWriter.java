@@ -111,7 +111,7 @@ public final class PlanetReportWriter {
         run.writeCsv("radial-profile.csv", profile);
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
         ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
-                data.host()).chart(ChartSize.PAGE.widthPt(), 330), run, "radial-map", formats);
+                data.host()).chart(ChartSize.PAGE.widthPt(), 370), run, "radial-map", formats);
         ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
                 PlanetCharts.bars(data.planets(), data.errorBands()), data.ci())
                 .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
