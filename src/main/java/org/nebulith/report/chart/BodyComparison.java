@@ -146,7 +146,7 @@ public record BodyComparison(List<String> quantities, List<Body> bodies) {
             for (Body b : bodies) {
                 names = Math.max(names, Fonts.width(b.label(), ChartStyle.NOTE_PT));
             }
-            s.setYAxisLeftWidthHint((int) Math.ceil(names + 14));
+            s.setYAxisLeftWidthHint((int) Math.ceil(names + 2));
         }
         for (Body b : bodies) {
             double v = b.values()[q];

@@ -156,7 +156,8 @@ public final class Figure {
         int n = charts.size();
         double[] insets = new double[n];
         double total = 0;
-        int trial = (int) Math.round(widthPt / n);
+        // insets measured at a width where every axis fits (they do not depend on the width)
+        int trial = (int) Math.round(widthPt);
         for (int i = 0; i < n; i++) {
             double[] edges = plotEdges(charts.get(i), trial, (int) Math.round(height));
             insets[i] = trial - (edges[1] - edges[0]);

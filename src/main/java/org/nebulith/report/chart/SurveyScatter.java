@@ -72,18 +72,16 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
         c.getStyler().setXAxisMax(xr[1]);
         c.getStyler().setYAxisMin(yr[0]);
         c.getStyler().setYAxisMax(yr[1]);
-        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideS);
-        c.getStyler().setLegendLayout(org.knowm.xchart.style.Styler.LegendLayout.Horizontal);
         Color starColour = Palette.seriesColour(1);
         Color planetColour = Palette.seriesColour(0);
         ranges(c, "star ranges", stars, translucent(starColour, 110));
         ranges(c, "planet ranges", planets, translucent(planetColour, 80));
         if (!stars.isEmpty()) {
-            ChartStyle.points(c, "host stars", fe(stars), mg(stars), Marker.OPEN_CIRCLE, starColour, 1.4, true);
+            ChartStyle.points(c, "stars", fe(stars), mg(stars), Marker.OPEN_CIRCLE, starColour, 1.4, true);
         }
         // planets over the star rings and smaller: a planet that sits on its star shows as a dot in a ring
         if (!planets.isEmpty()) {
-            ChartStyle.points(c, "predicted planets", fe(planets), mg(planets), Marker.CIRCLE,
+            ChartStyle.points(c, "planets", fe(planets), mg(planets), Marker.CIRCLE,
                     translucent(planetColour, 150), 0.65, true);
         }
         for (int i = 0; i < references.size(); i++) {
