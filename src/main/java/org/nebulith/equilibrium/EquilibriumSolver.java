@@ -72,14 +72,55 @@ public final class EquilibriumSolver {
         if (g.result != null) {
             return ResultBuilder.markCold(g.result, g.result.diagnostics().newtonIterations());
         }
-        if (continuationFailure != null) {
-            throw new ConvergenceException(continuationFailure + "; interior-point path: " + g.failure);
+        String failure = continuationFailure;
+        if (failure == null) {
+            try {
+                return coldSolve(problem);
+            } catch (ConvergenceException e) {
+                failure = e.getMessage();
+            }
         }
-        try {
-            return coldSolve(problem);
-        } catch (ConvergenceException e) {
-            throw new ConvergenceException(e.getMessage() + "; interior-point path: " + g.failure);
+        EquilibriumResult anchored = fromWarmerAnchor(problem);
+        if (anchored != null) {
+            return anchored;
         }
+        throw new ConvergenceException(failure + "; interior-point path: " + g.failure
+                + "; no warmer anchor led down to the state");
+    }
+
+    /**
+     * Temperatures of the last-resort anchors, as multiples of the target's (each below
+     * {@link #SHORT_CONTINUATION_K}).
+     */
+    private static final double[] ANCHOR_FACTORS = {1.05, 1.15, 1.4, 2.0};
+
+    /**
+     * The last resort of a cold start: the globally convergent path at a warmer temperature, where
+     * the barrier problem is better conditioned (below about 250 K nearly every element is condensed
+     * and the dual is nearly degenerate), then the warm start from there down to the target, as a
+     * condensation sequence does it.
+     *
+     * @return the checked equilibrium, or null if no anchor led down to the state
+     */
+    private EquilibriumResult fromWarmerAnchor(EquilibriumProblem problem) {
+        for (double factor : ANCHOR_FACTORS) {
+            double tK = problem.temperatureK() * factor;
+            if (tK >= SHORT_CONTINUATION_K) {
+                break;
+            }
+            EquilibriumProblem anchor = problem.at(tK, problem.pressureBar());
+            StateData st = new StateData(anchor);
+            Attempt g = globalSolve(anchor, st, GasGuess.initial(st, anchor.totals()).lambda);
+            if (g.result == null) {
+                continue;
+            }
+            EquilibriumResult down = warmOnly(problem, WarmStart.of(g.result));
+            if (down != null) {
+                return ResultBuilder.markCold(down, down.diagnostics().newtonIterations()
+                        + g.result.diagnostics().newtonIterations());
+            }
+        }
+        return null;
     }
 
     /**
@@ -128,6 +169,12 @@ public final class EquilibriumSolver {
         if (start == null) {
             return coldSolve(problem);
         }
+        EquilibriumResult warm = warmOnly(problem, start);
+        return warm != null ? warm : solve(problem);
+    }
+
+    /** The warm start's paths (fast attempt, continuation, globally convergent path); null if all fail. */
+    private EquilibriumResult warmOnly(EquilibriumProblem problem, WarmStart start) {
         StateData st = new StateData(problem);
         Iterate it = adapt(start.iterate.copy(), st);
         boolean sameTotals = java.util.Arrays.equals(start.fromTotals, problem.totals());
@@ -140,8 +187,7 @@ public final class EquilibriumSolver {
         if (walked != null) {
             return walked;
         }
-        Attempt global = globalSolve(problem, st, start.iterate.lambda);
-        return global.result != null ? global.result : solve(problem);
+        return globalSolve(problem, st, start.iterate.lambda).result;
     }
 
     /**

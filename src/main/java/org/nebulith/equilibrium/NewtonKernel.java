@@ -235,7 +235,7 @@ final class NewtonKernel {
             }
             if (!(fTrial < f) && !(fTrial < 1e-28)) {
                 evaluate(it, r, jac);
-                return converged(r, n);
+                return converged(r, n) || stalledAtRounding();
             }
             copyInto(trial, it);
             if (vanishing(it) >= 0) {
@@ -263,6 +263,16 @@ final class NewtonKernel {
             }
         }
         return -1;
+    }
+
+    /**
+     * After {@link #converged} found the residuals above the tolerances: true if the line search can
+     * no longer reduce them only because they are at the rounding level of an ill-conditioned
+     * system (the balances within the conservation limit {@link ResultChecks#BALANCE_LIMIT}, the
+     * phase conditions within their tolerance), which is accepted as converged.
+     */
+    private boolean stalledAtRounding() {
+        return lastBalance <= ResultChecks.BALANCE_LIMIT && lastPotential <= opt.potentialTolerance();
     }
 
     private boolean converged(double[] r, int n) {

@@ -44,9 +44,9 @@ public final class SolutionModels {
 
     /**
      * Orthopyroxene enstatite-ferrosilite, the standard form. The form with the Mn end-member
-     * ({@link #ORTHOPYROXENE_MN}) is offered but not standard: with it the fractional (removal fraction 1)
-     * sequence of the proto-solar gas at 1e-4 bar fails near 1057 K (Mn-rich residual gas, orthopyroxene
-     * supersaturated after the continuation stalls), a phase-selection limit of the solver.
+     * ({@link #ORTHOPYROXENE_MN}) is offered but not standard, so that the default results and their golden
+     * files keep Mn in its pure phases; both forms run the equilibrium and the fractional sequence of the
+     * proto-solar gas to the floor.
      */
     public static final SolutionModel ORTHOPYROXENE = new SolutionModel("orthopyroxene", List.of(
             ORTHOPYROXENE_MN.endMembers().get(0), ORTHOPYROXENE_MN.endMembers().get(1)));

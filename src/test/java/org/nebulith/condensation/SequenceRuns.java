@@ -12,6 +12,7 @@ import org.nebulith.composition.DustEnrichment;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumSolver;
+import org.nebulith.equilibrium.SolutionModel;
 import org.nebulith.equilibrium.SolutionModels;
 import org.nebulith.thermo.DataSet;
 import org.nebulith.thermo.Element;
@@ -43,7 +44,12 @@ final class SequenceRuns {
 
     static CondensationSequence run(List<Species> species, ElementAbundances comp, double pBar, double tMax,
                                     double tMin, double phi) {
-        ChemicalSystem sys = ChemicalSystem.of(comp.elements(), species, SolutionModels.all());
+        return run(species, SolutionModels.all(), comp, pBar, tMax, tMin, phi);
+    }
+
+    static CondensationSequence run(List<Species> species, List<SolutionModel> solutions, ElementAbundances comp,
+                                    double pBar, double tMax, double tMin, double phi) {
+        ChemicalSystem sys = ChemicalSystem.of(comp.elements(), species, solutions);
         SequenceSettings s = new SequenceSettings(PressurePath.constant(pBar), tMax, tMin, 5, phi, 0.05);
         return new SequenceRunner(new EquilibriumSolver()).run(sys, totals(sys, comp), s);
     }

@@ -16,7 +16,8 @@ import org.nebulith.composition.ElementAbundances;
  * trace phases changed at once): each must now converge from a cold start and from a warm start at
  * a state 2 K hotter, and both results must pass the {@link IndependentCheck}. Compositions in mol
  * as printed by the failing runs; all are invented scenarios of this project (random states, a
- * survey draw of an invented near-solar star, the demo catalogue's star "NDC Birch").
+ * survey draw of an invented near-solar star, the demo catalogue's star "NDC Birch", the three cold
+ * failures of the first 100,000-state stress run, all below 225 K with every element condensed).
  */
 class ReportedStatesTest {
     private static final String RANDOM_1 = "H=1,He=0.0146358,C=0.000140636,N=1.22022e-05,O=0.000174828,Na=7.77452e-07,"
@@ -37,6 +38,29 @@ class ReportedStatesTest {
             + "K=3.23141e-08,Ca=7.15679e-07,Ti=3.84142e-08,Cr=1.07620e-07,Mn=8.11693e-08,Fe=9.53656e-06,Co=2.94708e-08,"
             + "Ni=5.71361e-07";
 
+    /** Stress state 47593 of seed 2026 (the 100,000-state run), all solutions, cold. */
+    private static final String STRESS_47593 = "H=1.0,He=0.022092851744539115,C=1.9609900823711098E-4,"
+            + "N=3.3633195053202244E-4,O=4.69007044965411E-4,Na=6.270858559993189E-6,Mg=3.727848812484619E-5,"
+            + "Al=2.228542757703982E-6,Si=2.4279700329094117E-5,P=1.9941089901489596E-7,S=3.89614856633211E-5,"
+            + "Cl=2.9610161603981166E-7,K=1.2453974572022156E-7,Ca=2.568882117072529E-6,Ti=3.2552223642260954E-7,"
+            + "Cr=2.1841966477792974E-6,Mn=1.0934742115801334E-6,Fe=3.0422693040037245E-5,Co=6.58806845570722E-8,"
+            + "Ni=5.100191399824546E-6";
+    /** Stress state 73688 of seed 2026, all solutions, cold. */
+    private static final String STRESS_73688 = "H=0.9999999999999999,He=0.04201326490518861,C=0.0014307988622575727,"
+            + "N=1.3210869175098427E-4,O=7.309741494673385E-4,Na=2.7004061772365685E-6,Mg=9.064735984235627E-5,"
+            + "Al=2.5646549738567004E-6,Si=3.14384957793339E-5,P=4.4387457336166E-7,S=3.463244812023194E-5,"
+            + "Cl=1.7049162079088698E-7,K=6.016184603898179E-7,Ca=2.2434831174806576E-6,Ti=3.5145799410617116E-7,"
+            + "Cr=1.0899641999221565E-6,Mn=8.97669036734424E-7,Fe=2.9436703592822226E-5,Co=1.3580057256662652E-7,"
+            + "Ni=4.216488728757328E-6";
+
+    /** Stress state 78772 of seed 2026, all solutions, cold. */
+    private static final String STRESS_78772 = "H=1.0,He=0.027786096908296875,C=4.595566331018323E-4,"
+            + "N=2.1838886830528179E-4,O=7.169397238379689E-4,Na=3.535946728500287E-6,Mg=6.1572289042389E-5,"
+            + "Al=3.4341166382500465E-6,Si=4.524102897326977E-5,P=1.5805690806278401E-6,S=1.0658428837614383E-4,"
+            + "Cl=2.2622982959441492E-7,K=1.9106457601818878E-7,Ca=1.4866544185586365E-5,Ti=1.4551979007854807E-7,"
+            + "Cr=8.220001012936086E-7,Mn=1.547711975922555E-6,Fe=5.0493231360266644E-5,Co=3.3093224508647884E-7,"
+            + "Ni=2.2379305022562127E-6";
+
     static Stream<Arguments> states() {
         String solar = AbundancePresets.preset(AbundancePresets.PROTOSOLAR_LODDERS2003).abundances().perH().toInline();
         return Stream.of(
@@ -46,7 +70,12 @@ class ReportedStatesTest {
                 Arguments.of("whitlockite state of a survey draw", 674.662, 5.51816e-06, WHITLOCKITE),
                 Arguments.of("wollastonite state of NDC Birch", 300, 1.85149e-05, BIRCH),
                 Arguments.of("NDC Birch at 398 K", 398, 1.85149e-05, BIRCH),
-                Arguments.of("proto-solar gas at the 200 K lower limit", 200, 1e-4, solar));
+                Arguments.of("proto-solar gas at the 200 K lower limit", 200, 1e-4, solar),
+                Arguments.of("stress state 47593 (nearly all condensed, 221 K)", 220.845190422005, 1.476721552140562E-8,
+                        STRESS_47593),
+                Arguments.of("stress state 73688 (C/O 1.96, 207 K)", 207.465999339999, 2.3765847716682495E-4,
+                        STRESS_73688),
+                Arguments.of("stress state 78772 (212 K)", 212.18255078339985, 2.6088092135906566E-6, STRESS_78772));
     }
 
     @ParameterizedTest(name = "{0}")
