@@ -12,14 +12,45 @@ import org.knowm.xchart.XYChart;
  * (16th to 84th percentile) as thin crosses; host stars as open rings and planets as smaller dots
  * drawn over them, so that a planet at its star's position shows as a dot inside a ring; labelled
  * reference bodies (the Sun, bulk Earth) as large distinct markers; the legend outside the plot.
- * The ranges of Mg/Si and Fe/Si are correlated (both divide by Si): the crosses are not
- * independent errors.
+ * The errors of Mg/Si and Fe/Si are correlated (both divide by Si): a star whose covariance is
+ * known is drawn with its 68 % ellipse instead of a cross.
  *
  * @param stars      the host stars
  * @param planets    the predicted planets
  * @param references reference bodies drawn as single markers (no ranges)
  */
-public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> references) {
+public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> references, List<Ellipse> ellipses) {
+
+    /**
+     * The covariance of a star's molar Fe/Si and Mg/Si, drawn as its 68 % region (the ellipse of
+     * Delta chi^2 = 2.30 for two parameters, common practice) in place of its range cross.
+     *
+     * @param label      the star (as its {@link Point})
+     * @param varFeSi    variance of Fe/Si
+     * @param varMgSi    variance of Mg/Si
+     * @param covariance their covariance
+     */
+    public record Ellipse(String label, double varFeSi, double varMgSi, double covariance) {
+        public Ellipse {
+            Objects.requireNonNull(label);
+            if (!(varFeSi >= 0 && varMgSi >= 0 && covariance * covariance <= varFeSi * varMgSi * (1 + 1e-9))) {
+                throw new IllegalArgumentException(label + ": not a covariance matrix: " + varFeSi + ", " + varMgSi
+                        + ", " + covariance);
+            }
+        }
+    }
+
+    /** Chi-square of two degrees of freedom enclosing 68.27 % (common practice). */
+    private static final double CHI2_68 = 2.30;
+
+    /**
+     * @param stars      the host stars
+     * @param planets    the predicted planets
+     * @param references reference bodies drawn as single markers
+     */
+    public SurveyScatter(final List<Point> stars, final List<Point> planets, final List<Point> references) {
+        this(stars, planets, references, List.of());
+    }
 
     /**
      * One body with its ratios and their ranges.
@@ -54,6 +85,7 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
         stars = List.copyOf(stars);
         planets = List.copyOf(planets);
         references = List.copyOf(references);
+        ellipses = List.copyOf(ellipses);
         if (stars.isEmpty() && planets.isEmpty()) {
             throw new IllegalArgumentException("survey chart: no stars and no planets");
         }
@@ -74,7 +106,11 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
         c.getStyler().setYAxisMax(yr[1]);
         Color starColour = Palette.seriesColour(1);
         Color planetColour = Palette.seriesColour(0);
-        ranges(c, "star ranges", stars, translucent(starColour, 110));
+        java.util.Set<String> withEllipse = new java.util.HashSet<>();
+        ellipses.forEach(e -> withEllipse.add(e.label()));
+        ranges(c, "star ranges", stars.stream().filter(p -> !withEllipse.contains(p.label())).toList(),
+                translucent(starColour, 110));
+        ellipses(c, translucent(starColour, 140));
         ranges(c, "planet ranges", planets, translucent(planetColour, 80));
         if (!stars.isEmpty()) {
             ChartStyle.points(c, "stars", fe(stars), mg(stars), Marker.OPEN_CIRCLE, starColour, 1.4, true);
@@ -95,6 +131,38 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
             labels.beside(r.label(), labels.x(r.feSi()), labels.y(r.mgSi()));
         }
         return f;
+    }
+
+    /** The stars' 68 % regions as closed curves, one series (one path). */
+    private void ellipses(final XYChart c, final Color colour) {
+        java.util.Map<String, Point> byLabel = new java.util.HashMap<>();
+        stars.forEach(p -> byLabel.putIfAbsent(p.label(), p));
+        int steps = 40;
+        double[] x = new double[ellipses.size() * (steps + 2)];
+        double[] y = new double[x.length];
+        int k = 0;
+        for (Ellipse e : ellipses) {
+            Point p = byLabel.get(e.label());
+            if (p == null) {
+                continue;
+            }
+            // Cholesky factor of the covariance: (a 0; b d)
+            double a = Math.sqrt(e.varFeSi());
+            double b = a > 0 ? e.covariance() / a : 0;
+            double d = Math.sqrt(Math.max(0, e.varMgSi() - b * b));
+            double r = Math.sqrt(CHI2_68);
+            for (int i = 0; i <= steps; i++) {
+                double t = 2 * Math.PI * i / steps;
+                x[k] = p.feSi() + r * a * Math.cos(t);
+                y[k++] = p.mgSi() + r * (b * Math.cos(t) + d * Math.sin(t));
+            }
+            x[k] = p.feSi();
+            y[k++] = Double.NaN;
+        }
+        if (k > 0) {
+            ChartStyle.line(c, "star ellipses", java.util.Arrays.copyOf(x, k), java.util.Arrays.copyOf(y, k),
+                    LineStyle.solid(colour, 0.5), false);
+        }
     }
 
     private static Color translucent(final Color c, final int alpha) {
@@ -148,6 +216,17 @@ public record SurveyScatter(List<Point> stars, List<Point> planets, List<Point> 
                         lo = Math.min(lo, v);
                         hi = Math.max(hi, v);
                     }
+                }
+            }
+        }
+        for (Ellipse e : ellipses) {
+            for (Point pt : stars) {
+                if (pt.label().equals(e.label())) {
+                    double centre = fe ? pt.feSi() : pt.mgSi();
+                    double half = Math.sqrt(CHI2_68 * (fe ? e.varFeSi() : e.varMgSi()));
+                    lo = Math.min(lo, centre - half);
+                    hi = Math.max(hi, centre + half);
+                    break;
                 }
             }
         }

@@ -227,7 +227,7 @@ public final class LocalSurvey {
                     counter.runDraws);
             run.writeText(NOTES, notes);
             rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
-            byte[] png = SurveyChart.write(partial, run);
+            byte[] png = SurveyChart.write(partial, request.catalogue(), run);
             SurveyReport.write(new SurveyReport.Run(run, request, started, notes, png, run.file(StarsTable.FILE),
                     partial, inputs));
             rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));

@@ -74,9 +74,12 @@ final class SurveyReport {
         if (run.png() != null) {
             r.chart(new ChartRenderer.Rendered(SurveyChart.BASE, run.png(), Map.of()),
                     "Molar Mg/Si against Fe/Si of the host stars (open circles) and of their predicted planets "
-                            + "(filled, translucent): medians with 16th-84th percentile bars; the Sun (photosphere, "
-                            + "Asplund et al. 2009) and bulk Earth (McDonough 2003) marked. Mg/Si and Fe/Si share "
-                            + "Si, so their errors are correlated: the bars are not independent.");
+                            + "(dots): medians. Mg/Si and Fe/Si share Si, so their errors are correlated: each star "
+                            + "has its 68 % covariance ellipse, propagated to first order from the catalogue's [X/H] "
+                            + "errors and error correlation as the survey draws them; the planets have their "
+                            + "16th-84th percentile ranges as crosses (their covariance over the draws is not kept, "
+                            + "so the crosses are not independent errors). The Sun (photosphere, Asplund et al. "
+                            + "2009) and bulk Earth (McDonough 2003) marked.");
         }
         r.table(planets(run.surveyCsv()), "Predicted planets of the first " + SHOWN_STARS
                 + " stars: medians and 16th-84th percentiles over the draws (all quantities: survey.csv)");

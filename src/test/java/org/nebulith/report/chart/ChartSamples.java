@@ -112,8 +112,12 @@ final class ChartSamples {
             planets.add(new SurveyScatter.Point("planet " + i, fe * 0.98, fe * 0.9, fe * 1.05, mg * 1.01,
                     mg * 0.93, mg * 1.08));
         }
+        List<SurveyScatter.Ellipse> ellipses = new ArrayList<>();
+        for (int i = 0; i < 10; i++) {
+            ellipses.add(new SurveyScatter.Ellipse("star " + i, 0.003, 0.004, 0.002));
+        }
         return new SurveyScatter(stars, planets, List.of(SurveyScatter.Point.of("Sun (demo)", 0.85, 1.05),
-                SurveyScatter.Point.of("Earth (demo)", 0.9, 1.1)));
+                SurveyScatter.Point.of("Earth (demo)", 0.9, 1.1)), ellipses);
     }
 
     /** @return every chart kind, by base file name */
