@@ -29,6 +29,8 @@ public final class ChartStyle {
     public static final double LEGEND_PT = 7;
     /** Note and direct-label size [pt]. */
     public static final double NOTE_PT = 6.5;
+    /** Space between a note and the edge of its panel [pt]. */
+    static final int NOTE_PADDING = 2;
     /** Marker size [pt]. */
     public static final int MARKER_PT = 4;
     /** Title of a temperature axis. */
@@ -114,6 +116,7 @@ public final class ChartStyle {
         styler.setPlotBorderColor(Palette.AXIS);
         styler.setPlotBorderVisible(true);
         styler.setAxisTicksLineVisible(false);
+        styler.setYAxisLabelAlignment(org.knowm.xchart.style.AxesChartStyler.TextAlignment.Right);
         styler.setChartTitleVisible(false);
         styler.setChartTitleFont(Fonts.at(TITLE_PT));
         styler.setChartPadding(PAD);
@@ -139,6 +142,11 @@ public final class ChartStyle {
         styler.setLegendPosition(Styler.LegendPosition.OutsideE);
         styler.setAnnotationTextFont(Fonts.at(NOTE_PT));
         styler.setAnnotationTextFontColor(Palette.NOTE);
+        styler.setAnnotationTextPanelFont(Fonts.at(NOTE_PT));
+        styler.setAnnotationTextPanelFontColor(Palette.NOTE);
+        styler.setAnnotationTextPanelBackgroundColor(new Color(255, 255, 255, 225));
+        styler.setAnnotationTextPanelBorderColor(new Color(255, 255, 255, 0));
+        styler.setAnnotationTextPanelPadding(NOTE_PADDING);
         styler.setAnnotationLineColor(Palette.REFERENCE);
         styler.setAnnotationLineStroke(new BasicStroke(0.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                 new float[] {3f, 2f}, 0f));

@@ -4,6 +4,7 @@ import java.awt.geom.Rectangle2D;
 import java.util.List;
 
 import org.knowm.xchart.AnnotationText;
+import org.knowm.xchart.AnnotationTextPanel;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.style.XYStyler;
 
@@ -13,6 +14,9 @@ import org.knowm.xchart.style.XYStyler;
  * beside their curves, notes in the emptiest corner of the plot.
  */
 final class DirectLabels {
+
+    /** Steps of the grid of note positions across the plot. */
+    private static final int GRID = 12;
 
     private final Figure figure;
     private final XYChart chart;
@@ -152,7 +156,8 @@ final class DirectLabels {
     }
 
     /**
-     * Writes note lines, left-aligned, in the corner of the plot that overlaps the fewest lines.
+     * Writes note lines, left-aligned, in a corner of the plot that touches no line or label, else
+     * elsewhere in the plot where it touches none, else where it touches the fewest.
      *
      * @param lines the note lines
      */
@@ -161,28 +166,41 @@ final class DirectLabels {
             return;
         }
         double lineH = ChartStyle.NOTE_PT + 1.5;
-        double w = 0;
+        double w = 2 * ChartStyle.NOTE_PADDING;
         for (String l : lines) {
-            w = Math.max(w, Fonts.width(l, ChartStyle.NOTE_PT) + 1);
+            w = Math.max(w, Fonts.width(l, ChartStyle.NOTE_PT) + 2 * ChartStyle.NOTE_PADDING);
         }
-        double h = lines.size() * lineH;
-        Rectangle2D best = null;
-        int fewest = Integer.MAX_VALUE;
+        double h = lines.size() * lineH + 2 * ChartStyle.NOTE_PADDING;
+        // the corners first, then a grid over the plot: the first box that touches nothing, else the least crowded
+        List<double[]> at = new java.util.ArrayList<>();
         for (double fy : new double[] {0, 1}) {
             for (double fx : new double[] {1, 0}) {
-                Rectangle2D r = new Rectangle2D.Double(box.getMinX() + 3 + fx * (box.getWidth() - w - 6),
-                        box.getMinY() + 3 + fy * (box.getHeight() - h - 6), w, h);
-                int hits = free.hits(r);
-                if (hits < fewest) {
-                    fewest = hits;
-                    best = r;
+                at.add(new double[] {fx, fy});
+            }
+        }
+        for (int gy = 0; gy <= GRID; gy++) {
+            for (int gx = GRID; gx >= 0; gx--) {
+                at.add(new double[] {gx / (double) GRID, gy / (double) GRID});
+            }
+        }
+        Rectangle2D best = null;
+        int fewest = Integer.MAX_VALUE;
+        for (double[] f : at) {
+            Rectangle2D r = new Rectangle2D.Double(box.getMinX() + 3 + f[0] * (box.getWidth() - w - 6),
+                    box.getMinY() + 3 + f[1] * (box.getHeight() - h - 6), w, h);
+            int hits = free.hits(r);
+            if (hits < fewest) {
+                fewest = hits;
+                best = r;
+                if (hits == 0) {
+                    break;
                 }
             }
         }
-        for (int i = 0; i < lines.size(); i++) {
-            String l = lines.get(i);
-            double lw = Fonts.width(l, ChartStyle.NOTE_PT);
-            put(l, best.getMinX() + lw / 2, best.getMinY() + (i + 0.5) * lineH);
-        }
+        free.take(best);
+        lines.forEach(figure::text);
+        // a panel on a light background, so that a note over a line stays readable
+        chart.addAnnotation(new AnnotationTextPanel(String.join("\n", lines), best.getMinX(),
+                chart.getHeight() - best.getMaxY(), true));
     }
 }

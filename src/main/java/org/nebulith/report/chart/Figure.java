@@ -281,6 +281,7 @@ public final class Figure {
             fonts.add(s.getAxisTickLabelsFont());
             fonts.add(s.getLegendFont());
             fonts.add(s.getAnnotationTextFont());
+            fonts.add(s.getAnnotationTextPanelFont());
             fonts.add(s.getChartTitleFont());
         }
         return fonts;
