@@ -146,13 +146,18 @@ public final class SequenceCharts {
         int n = seq.steps().size();
         Map<String, double[]> mass = new LinkedHashMap<>();
         double[] total = new double[n];
+        double[][] molar = molarMasses(sys);
+        String[] labels = new String[sys.phaseCount()];
+        for (int p = 1; p < labels.length; p++) {
+            labels[p] = PhaseLabels.display(sys.phaseName(p));
+        }
         for (int i = 0; i < n; i++) {
             SequenceStep s = seq.steps().get(i);
             for (int p = 1; p < sys.phaseCount(); p++) {
-                for (int k = 0; k < sys.memberNames(p).size(); k++) {
-                    double g = s.totalMoles(p, k) * molarMass(sys.memberStoichiometry(p, k), sys);
+                for (int k = 0; k < molar[p].length; k++) {
+                    double g = s.totalMoles(p, k) * molar[p][k];
                     if (g > 0) {
-                        mass.computeIfAbsent(PhaseLabels.display(sys.phaseName(p)), x -> new double[n])[i] += g;
+                        mass.computeIfAbsent(labels[p], x -> new double[n])[i] += g;
                         total[i] += g;
                     }
                 }
@@ -187,11 +192,19 @@ public final class SequenceCharts {
         return new Assemblage(major, grouped);
     }
 
-    private static double molarMass(double[] stoich, ChemicalSystem sys) {
-        double m = 0;
-        for (int j = 0; j < stoich.length; j++) {
-            m += stoich[j] * sys.elements().get(j).atomicWeight();
+    /** @return the molar mass of every member of every phase [g/mol], by phase and member */
+    private static double[][] molarMasses(ChemicalSystem sys) {
+        List<org.nebulith.thermo.Element> elements = sys.elements();
+        double[][] out = new double[sys.phaseCount()][];
+        for (int p = 0; p < out.length; p++) {
+            out[p] = new double[sys.memberNames(p).size()];
+            for (int k = 0; k < out[p].length; k++) {
+                double[] stoich = sys.memberStoichiometry(p, k);
+                for (int j = 0; j < stoich.length; j++) {
+                    out[p][k] += stoich[j] * elements.get(j).atomicWeight();
+                }
+            }
         }
-        return m;
+        return out;
     }
 }
