@@ -186,6 +186,27 @@ public final class ChartStyle {
     }
 
     /**
+     * Adds a legend entry showing a series' line and marker together (its one point lies outside
+     * the axes, so the plot shows nothing of it): for lines whose markers are a series of their own.
+     *
+     * @param chart the chart, its x range set
+     * @param name  the entry
+     * @param style the line
+     * @param marker the marker
+     */
+    static void legendEntry(final XYChart chart, final String name, final LineStyle style, final Marker marker) {
+        double outside = chart.getStyler().getXAxisMax() + 1e6 * (1 + Math.abs(chart.getStyler().getXAxisMax()));
+        double y = chart.getStyler().getYAxisMin() != null ? chart.getStyler().getYAxisMin() : 0;
+        XYSeries s = chart.addSeries(name, new double[] {outside}, new double[] {y});
+        s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
+        s.setLineColor(style.colour());
+        s.setLineStyle(style.stroke());
+        s.setMarker(marker.sized(0.9));
+        s.setMarkerColor(style.colour());
+        s.setShowInLegend(true);
+    }
+
+    /**
      * Adds a series of markers only.
      *
      * @param chart  the chart

@@ -7,8 +7,9 @@ import org.knowm.xchart.XYChart;
 /**
  * Condensation curves: the fraction of each element condensed against temperature, the temperature
  * axis decreasing to the right (a gas cools from left to right). Each element is one line with its
- * colour and line pattern, its 50 % condensation temperature marked by a ring on the curve, and,
- * where there is room, its symbol written beside the curve; the legend sits outside the plot, the
+ * colour, line pattern and marker (every {@value #MARKER_SPACING_PT} pt along its rise), its 50 %
+ * condensation temperature marked by a ring on the curve, and, where there is room, its symbol
+ * written beside the curve; the legend sits outside the plot, the
  * notes in the emptiest corner of the plot.
  *
  * @param temperatureK the temperature grid [K], any order
@@ -19,6 +20,8 @@ import org.knowm.xchart.XYChart;
 public record CondensationCurves(double[] temperatureK, List<Curve> elements, double[] t50K, List<String> notes) {
 
     private static final double SLACK = 1e-9;
+    /** Distance between markers along a curve [pt]. */
+    static final double MARKER_SPACING_PT = 30;
     private static final double[] LABEL_HEIGHTS = {0.5, 0.62, 0.38, 0.74, 0.26, 0.86, 0.14, 0.93, 0.07};
 
     public CondensationCurves {
@@ -50,7 +53,9 @@ public record CondensationCurves(double[] temperatureK, List<Curve> elements, do
         c.getStyler().setYAxisMax(1.02);
         double[] x = negated(temperatureK);
         for (int i = 0; i < elements.size(); i++) {
-            ChartStyle.line(c, elements.get(i).label(), x, elements.get(i).values(), ChartStyle.series(i).line(), true);
+            ChartStyle.Series s = ChartStyle.series(i);
+            ChartStyle.line(c, elements.get(i).label() + " (line)", x, elements.get(i).values(), s.line(), false);
+            ChartStyle.legendEntry(c, elements.get(i).label(), s.line(), s.marker());
         }
         double[] tx = new double[elements.size()];
         double[] ty = new double[elements.size()];
@@ -75,6 +80,11 @@ public record CondensationCurves(double[] temperatureK, List<Curve> elements, do
         }
         for (int k = 0; k < n; k++) {
             labels.free().take(DirectLabels.bounds("o", labels.x(tx[k]), labels.y(0.5)));
+        }
+        for (int i = 0; i < elements.size(); i++) {
+            ChartStyle.Series s = ChartStyle.series(i);
+            labels.markersAlong(elements.get(i).label() + " (markers)", device[i], s.marker(), s.colour(),
+                    MARKER_SPACING_PT, 6 + 4.3 * i);
         }
         for (int i = 0; i < elements.size(); i++) {
             label(labels, device[i], i);

@@ -100,6 +100,49 @@ final class DirectLabels {
     }
 
     /**
+     * Puts markers along a drawn line, one every {@code spacing} pt of its length, skipping the parts
+     * on the plot's edges (floors and ceilings), as a series of its own outside the legend.
+     *
+     * @param name    series name
+     * @param dev     the line in device coordinates (NaN = gap)
+     * @param marker  the marker
+     * @param colour  its colour
+     * @param spacing distance between markers along the line [pt]
+     * @param offset  distance to the first marker [pt] (staggered between series)
+     */
+    void markersAlong(final String name, final double[][] dev, final Marker marker, final java.awt.Color colour,
+                      final double spacing, final double offset) {
+        List<double[]> at = new java.util.ArrayList<>();
+        double next = offset;
+        double run = 0;
+        for (int k = 1; k < dev[0].length; k++) {
+            double x0 = dev[0][k - 1];
+            double y0 = dev[1][k - 1];
+            double x1 = dev[0][k];
+            double y1 = dev[1][k];
+            if (!(Double.isFinite(x0) && Double.isFinite(y0) && Double.isFinite(x1) && Double.isFinite(y1))
+                    || onEdge(y0) && onEdge(y1)) {
+                continue;
+            }
+            double len = Math.hypot(x1 - x0, y1 - y0);
+            while (run + len >= next) {
+                double f = (next - run) / len;
+                at.add(new double[] {dataX(x0 + f * (x1 - x0)), dataY(y0 + f * (y1 - y0))});
+                next += spacing;
+            }
+            run += len;
+        }
+        if (!at.isEmpty()) {
+            ChartStyle.points(chart, name, at.stream().mapToDouble(p -> p[0]).toArray(),
+                    at.stream().mapToDouble(p -> p[1]).toArray(), marker, colour, 0.9, false);
+        }
+    }
+
+    private boolean onEdge(final double y) {
+        return y < box.getMinY() + 5 || y > box.getMaxY() - 5;
+    }
+
+    /**
      * @param text a label
      * @param cx   its centre x [pt]
      * @param cy   its centre y [pt]

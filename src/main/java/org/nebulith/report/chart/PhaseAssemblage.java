@@ -8,7 +8,7 @@ import org.knowm.xchart.XYChart;
  * Phase assemblage: the share of each condensed phase in the condensate against temperature
  * (decreasing to the right), on a logarithmic axis from {@link #AXIS_FLOOR} up, so that the first
  * condensates and the minor phases stay visible beside the major ones. Each phase is one line with
- * its colour and line pattern; where there is room its name is written at its peak; the legend
+ * its colour, line pattern and markers along it; where there is room its name is written at its peak; the legend
  * sits outside the plot.
  *
  * @param temperatureK the temperature grid [K]
@@ -51,7 +51,10 @@ public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String 
                 v[k] = v[k] >= AXIS_FLOOR * 0.5 ? v[k] : Double.NaN;
             }
             shown[i] = v;
-            ChartStyle.line(c, phases.get(i).label(), x, v, ChartStyle.series(i).line(), true);
+            ChartStyle.Series s = ChartStyle.series(i);
+            if (ChartStyle.line(c, phases.get(i).label() + " (line)", x, v, s.line(), false) != null) {
+                ChartStyle.legendEntry(c, phases.get(i).label(), s.line(), s.marker());
+            }
         }
         f.fill(c);
         DirectLabels labels = new DirectLabels(f, c);
@@ -59,6 +62,11 @@ public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String 
         for (int i = 0; i < phases.size(); i++) {
             device[i] = labels.device(x, shown[i]);
             labels.free().line(device[i]);
+        }
+        for (int i = 0; i < phases.size(); i++) {
+            ChartStyle.Series s = ChartStyle.series(i);
+            labels.markersAlong(phases.get(i).label() + " (markers)", device[i], s.marker(), s.colour(), 34,
+                    5 + 3.7 * i);
         }
         for (int i = 0; i < phases.size(); i++) {
             labelAtPeak(labels, device[i], i);
