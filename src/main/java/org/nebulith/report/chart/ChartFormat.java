@@ -4,7 +4,7 @@ package org.nebulith.report.chart;
 public enum ChartFormat {
     /** Raster, {@value ChartStyle#PNG_DPI} dpi, for screens and the HTML report. */
     PNG("png"),
-    /** Vector with live text ({@code <text>} elements), written by {@link SvgWriter}. */
+    /** Vector with live text ({@code <text>} elements), written through VectorGraphics2D. */
     SVG("svg"),
     /** Vector (pdfbox-graphics2d) with the chart font embedded and text kept as text, for papers. */
     PDF("pdf");

@@ -34,7 +34,8 @@ import java.util.Objects;
  * is drawn as that text instead, so the file keeps live, editable text. XChart draws a line series
  * segment by segment; consecutive segments with the same stroke, paint, transform and clip are
  * collected into one path drawn once, so that each series is one path and its dash pattern runs on
- * along it. Any other drawing call or change of state draws the collected path first.
+ * along it. Any other drawing call or change of stroke, transform or clip draws the collected path
+ * first; paint reaches the backend only when something is drawn.
  */
 final class VectorCanvas extends Graphics2D {
 
