@@ -149,6 +149,9 @@ class ChartRenderTest {
         for (Map.Entry<String, Figure> e : ChartSamples.all().entrySet()) {
             Figure figure = e.getValue();
             String svg = new String(ChartRenderer.svg(figure), StandardCharsets.UTF_8);
+            // glyph outlines of the bundled font are quadratic curves; lines and markers never are
+            assertEquals(0, svg.lines().filter(l -> l.contains("<path") && l.contains(" Q")).count(),
+                    e.getKey() + ": every label written as text, none left as glyph outlines");
             for (XYChart c : figure.charts()) {
                 XYStyler s = c.getStyler();
                 if (s.isXAxisTitleVisible() && !c.getXAxisTitle().isEmpty()) {
