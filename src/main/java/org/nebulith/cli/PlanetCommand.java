@@ -140,6 +140,7 @@ public final class PlanetCommand extends RunCommand {
         DomainChecks.disk("--disk", disk, diskModel, PlanetFormation.profileMinAU(diskModel, zoneList),
                 PlanetFormation.profileMaxAU(diskModel, zoneList), planet.floorK(), spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
+            org.nebulith.report.chart.ChartRenderer.warmUpInBackground();
             return compute(context, run, gas, spec, diskModel, zoneList, errors);
         }
     }

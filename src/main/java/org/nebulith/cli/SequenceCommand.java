@@ -130,6 +130,7 @@ public final class SequenceCommand extends RunCommand {
         double elapsed;
         List<String> cautions = new ArrayList<>();
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
+            org.nebulith.report.chart.ChartRenderer.warmUpInBackground();
             Optional<String> startNote = allGasStart(context, system, totals, path);
             SequenceSettings settings = settings(path);
             startNote.ifPresent(cautions::add);

@@ -12,6 +12,7 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
@@ -63,6 +64,36 @@ public final class ChartRenderer {
      * @param files    the written files by format (paths in the run folder's working copy)
      */
     public record Rendered(String baseName, byte[] png, Map<ChartFormat, Path> files) {
+    }
+
+    /**
+     * Starts drawing a small throw-away chart in all three formats on a background thread of low
+     * priority and returns at once: a command that computes for a while first (on one core) then
+     * finds the chart code loaded and compiled (XChart, VectorGraphics2D, PDFBox, the font), which
+     * otherwise takes a second or more of its first chart. Nothing is written; a failure here is
+     * ignored (the real charts report their own).
+     */
+    public static void warmUpInBackground() {
+        Thread t = new Thread(ChartRenderer::warmUp, "chart warm-up");
+        t.setDaemon(true);
+        t.setPriority(Thread.MIN_PRIORITY);
+        t.start();
+    }
+
+    private static void warmUp() {
+        try {
+            double[] x = {1, 2, 3, 5, 8};
+            double[] y = {0.1, 0.4, 0.2, 0.9, 0.5};
+            Figure f = new DevolatilisationPattern(List.of("Mg", "Si", "Fe", "Na", "S"), new double[] {1300, 1310, 1330,
+                    960, 660}, List.of(new DevolatilisationPattern.Body("warm-up", y)), "ratio", List.of("warm-up"))
+                    .chart(ChartSize.COLUMN);
+            png(f);
+            svg(f);
+            pdf(f);
+            new CondensationCurves(x, List.of(new Curve("Mg", y)), new double[] {2}, List.of()).chart(ChartSize.COLUMN);
+        } catch (RuntimeException e) {
+            // only a warm-up
+        }
     }
 
     /**
