@@ -25,6 +25,17 @@ public final class ChemicalSystem {
     private final Map<String, Integer> phaseIndex = new HashMap<>();
     private final double gasTMin;
     private final double gasTMax;
+    /**
+     * T- and P-dependent data of recent states, by (T, P): a survey's draws revisit the same few
+     * radial nodes, where these data cost about as much as a Newton step. Bounded: cleared when full
+     * (a condensation sequence visits a new temperature at every step).
+     */
+    private final java.util.concurrent.ConcurrentHashMap<ThermalKey, StateData.Thermal> thermal =
+            new java.util.concurrent.ConcurrentHashMap<>();
+    private static final int THERMAL_CACHE_SIZE = 256;
+
+    private record ThermalKey(double tK, double pBar) {
+    }
 
     private ChemicalSystem(Element[] elements, List<PhaseDef> phases) {
         this.elements = elements;
@@ -134,6 +145,24 @@ public final class ChemicalSystem {
     /** @return number of elements */
     public int elementCount() {
         return elements.length;
+    }
+
+    /**
+     * @param tK   temperature [K]
+     * @param pBar pressure [bar]
+     * @return the data of this system that depend on T and P only (shared, never to be modified)
+     */
+    StateData.Thermal thermal(double tK, double pBar) {
+        ThermalKey key = new ThermalKey(tK, pBar);
+        StateData.Thermal th = thermal.get(key);
+        if (th == null) {
+            th = new StateData.Thermal(this, tK, pBar);
+            if (thermal.size() >= THERMAL_CACHE_SIZE) {
+                thermal.clear();
+            }
+            thermal.put(key, th);
+        }
+        return th;
     }
 
     /** @return number of phases (gas first) */

@@ -159,7 +159,12 @@ public final class EquilibriumSolver {
 
     /**
      * Solves from a warm start; falls back to a cold start if the warm start fails or its result
-     * fails the checks (a warm start can land in a wrong assemblage near a phase boundary).
+     * fails the checks (a warm start can land in a wrong assemblage near a phase boundary). A start
+     * of the same composition (a sequence, the next radius) tries the active-set method, then the
+     * continuation from the start's state, then the interior-point path; a start from another
+     * composition (a survey draw from its star's nominal state) tries a short active-set search
+     * ({@link PhaseSelection#forOtherComposition}), then the interior-point path, then the
+     * continuation in composition.
      *
      * @param problem the state
      * @param start   a start from earlier results of the same system (may be null)
@@ -173,21 +178,32 @@ public final class EquilibriumSolver {
         return warm != null ? warm : solve(problem);
     }
 
-    /** The warm start's paths (fast attempt, continuation, globally convergent path); null if all fail. */
+    /**
+     * The warm start's paths (fast attempt, continuation, globally convergent path; from another
+     * composition the globally convergent path before the continuation); null if all fail.
+     */
     private EquilibriumResult warmOnly(EquilibriumProblem problem, WarmStart start) {
         StateData st = new StateData(problem);
         Iterate it = adapt(start.iterate.copy(), st);
         boolean sameTotals = java.util.Arrays.equals(start.fromTotals, problem.totals());
-        Attempt a = attempt(problem, st, it, sameTotals ? PhaseSelection.ITERATION_BUDGET
-                : PhaseSelection.OTHER_COMPOSITION_BUDGET);
+        Attempt a = attempt(problem, st, it, !sameTotals);
         if (a.result != null) {
             return a.result;
+        }
+        if (!sameTotals) {
+            // another composition whose assemblage differs: the global path first (measured on
+            // survey draws: a mean of 5 ms against 25 ms for the continuation in composition)
+            Attempt global = globalSolve(problem, st, start.iterate.lambda);
+            if (global.result != null) {
+                return global.result;
+            }
         }
         EquilibriumResult walked = continueFrom(problem, start);
         if (walked != null) {
             return walked;
         }
-        return globalSolve(problem, st, start.iterate.lambda).result;
+        // from another composition the global path was tried above
+        return sameTotals ? globalSolve(problem, st, start.iterate.lambda).result : null;
     }
 
     /**
@@ -237,13 +253,17 @@ public final class EquilibriumSolver {
     }
 
     private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it) {
-        return attempt(problem, st, it, PhaseSelection.ITERATION_BUDGET);
+        return attempt(problem, st, it, false);
     }
 
-    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it, int budget) {
+    /** @param otherComposition the start comes from another composition ({@link PhaseSelection#forOtherComposition}) */
+    private Attempt attempt(EquilibriumProblem problem, StateData st, Iterate it, boolean otherComposition) {
         Attempt a = new Attempt();
         NewtonKernel kernel = new NewtonKernel(st, problem.totals(), options);
-        PhaseSelection sel = new PhaseSelection(st, kernel, options).withBudget(budget);
+        PhaseSelection sel = new PhaseSelection(st, kernel, options);
+        if (otherComposition) {
+            sel.forOtherComposition();
+        }
         String failure = sel.run(it);
         a.iterations = kernel.iterations;
         a.iterate = it;

@@ -109,7 +109,7 @@ final class InteriorPoint {
     Iterate solve(double[] startLambda) {
         double[] lambda = feasibleStart(startLambda);
         double[] bound = feasibleStart(boundStart());
-        if (lambda == null || (bound != null && evaluate(bound, MU_START, null, null) < evaluate(lambda, MU_START, null, null))) {
+        if (lambda == null || (bound != null && value(bound, MU_START) < value(lambda, MU_START))) {
             lambda = bound;
         }
         if (lambda == null) {
@@ -211,17 +211,18 @@ final class InteriorPoint {
     /** Fills g and grad (the constraints and their gradients). */
     private void constraints(double[] lambda) {
         for (int i = 0; i < phases.length; i++) {
-            g[i] = constraint(i, lambda, null, 0);
+            g[i] = constraint(i, lambda, null, 0, true);
         }
     }
 
     /**
-     * Constraint i at lambda, its gradient into grad[i]; with h non-null and the constraint
+     * Constraint i at lambda, its gradient into grad[i] (skipped, for a solution or the gas, when
+     * neither {@code gradient} nor h is asked for); with h non-null and the constraint
      * strictly satisfied, adds nu = mu / (-g) times the first part of its Hessian,
      * sum_k z_k w_k w_k^T with w_k = a_k / m_k and z_k the normalised member weights (the rank-one
      * part -grad grad^T is added by the caller).
      */
-    private double constraint(int i, double[] lambda, double[][] h, double mu) {
+    private double constraint(int i, double[] lambda, double[][] h, double mu, boolean gradient) {
         int p = phases[i];
         PhaseDef ph = sys.phase(p);
         double[] gi = grad[i];
@@ -252,6 +253,9 @@ final class InteriorPoint {
             sum += y;
         }
         double gv = max + Math.log(sum);
+        if (!gradient && h == null) {
+            return gv;
+        }
         double nu = h != null && gv < 0 ? mu * weight[i] / -gv : 0;
         for (int k = 0; k < mem.length; k++) {
             double z = e[k] / sum;
@@ -286,6 +290,22 @@ final class InteriorPoint {
         return work;
     }
 
+    /** whether {@link #evaluate} fills the constraint gradients (not needed for the objective alone) */
+    private boolean gradients = true;
+
+    /**
+     * The barrier objective alone at lambda (line search, choice of the start): the same value as
+     * {@link #evaluate}, without the constraint gradients.
+     */
+    private double value(double[] lambda, double mu) {
+        gradients = false;
+        try {
+            return evaluate(lambda, mu, null, null);
+        } finally {
+            gradients = true;
+        }
+    }
+
     /**
      * Barrier objective at lambda; with gr and h non-null, fills its gradient and Hessian.
      *
@@ -304,7 +324,7 @@ final class InteriorPoint {
         }
         for (int i = 0; i < phases.length; i++) {
             boolean mixture = sys.phase(phases[i]).kind != PhaseKind.PURE;
-            double gi = constraint(i, lambda, h, mu);
+            double gi = constraint(i, lambda, h, mu, gradients);
             g[i] = gi;
             if (!(gi < 0)) {
                 return Double.POSITIVE_INFINITY;
@@ -352,6 +372,27 @@ final class InteriorPoint {
         return true;
     }
 
+    /**
+     * A step length beyond which the step d from the current point certainly leaves the feasible
+     * set: every constraint is convex, so g(lambda + alpha d) &gt;= g + alpha grad.d, which is
+     * &gt;= 0 from alpha = -g / grad.d on (exact for pure phases). Uses g and grad of the latest
+     * evaluation with gradients (at the current point), with a margin for rounding.
+     */
+    private double boundaryReach(double[] d) {
+        double reach = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < phases.length; i++) {
+            double slope = 0;
+            double[] gv = grad[i];
+            for (int j = 0; j < m; j++) {
+                slope += gv[j] * d[j];
+            }
+            if (slope > 0) {
+                reach = Math.min(reach, -g[i] / slope);
+            }
+        }
+        return reach * (1 + 1e-6) + 1e-300;
+    }
+
     private double[] lineSearch(double[] lambda, double[] d, double f, double dec, double mu) {
         double alpha = 1;
         double big = 0;
@@ -362,11 +403,16 @@ final class InteriorPoint {
             alpha = set.maxStep() / big;
         }
         double[] t = new double[m];
+        double reach = boundaryReach(d);
         for (int ls = 0; ls < 60; ls++) {
+            if (alpha > reach) {
+                alpha *= 0.5; // certainly infeasible: the trial would return +infinity
+                continue;
+            }
             for (int j = 0; j < m; j++) {
                 t[j] = lambda[j] + alpha * d[j];
             }
-            double ft = evaluate(t, mu, null, null);
+            double ft = value(t, mu);
             if (ft <= f - 1e-4 * alpha * dec) {
                 return t;
             }

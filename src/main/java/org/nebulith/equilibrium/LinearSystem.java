@@ -1,8 +1,11 @@
 package org.nebulith.equilibrium;
 
 /**
- * Dense Gaussian elimination with partial pivoting for the small Newton systems of the solver
- * (tens of unknowns), without allocation per solve.
+ * Gaussian elimination with partial pivoting for the small Newton systems of the solver (tens of
+ * unknowns). The systems are sparse (a pure phase's row and column hold only its stoichiometry;
+ * trace elements couple to few others), so each elimination step updates only the columns where
+ * the pivot row is non-zero: the same arithmetic as the dense loop, without its multiplications by
+ * zero.
  */
 final class LinearSystem {
     private LinearSystem() {
@@ -14,6 +17,7 @@ final class LinearSystem {
      * @return false if the matrix is numerically singular
      */
     static boolean solve(double[][] a, double[] r, int n) {
+        int[] nz = new int[n];
         for (int col = 0; col < n; col++) {
             int piv = col;
             double best = Math.abs(a[col][col]);
@@ -37,11 +41,22 @@ final class LinearSystem {
             }
             double[] rowc = a[col];
             double d = rowc[col];
+            int count = 0;
+            for (int k = col + 1; k < n; k++) {
+                if (rowc[k] != 0) {
+                    nz[count++] = k;
+                }
+            }
             for (int i = col + 1; i < n; i++) {
                 double[] rowi = a[i];
-                double f = rowi[col] / d;
+                double v = rowi[col];
+                if (v == 0) {
+                    continue;
+                }
+                double f = v / d;
                 if (f != 0) {
-                    for (int k = col + 1; k < n; k++) {
+                    for (int t = 0; t < count; t++) {
+                        int k = nz[t];
                         rowi[k] -= f * rowc[k];
                     }
                     r[i] -= f * r[col];

@@ -32,7 +32,7 @@ final class NewtonKernel {
      * adds nothing measurable to the Jacobian (its entries would be 1e-22 of the diagonal), so only
      * its residual contribution is kept: this skips most of the hundreds of trace gases per step.
      */
-    private static final double NEGLIGIBLE = 1e-22;
+    static final double NEGLIGIBLE = 1e-22;
     private final double[] gasJacobianFloor;
     /** mole fractions (not normalised) of the mixture members from the latest evaluation */
     final double[][] lastX;
@@ -46,15 +46,7 @@ final class NewtonKernel {
         this.m = sys.elementCount();
         this.opt = opt;
         this.lastX = new double[sys.phaseCount()][];
-        PhaseDef gas = sys.phase(0);
-        this.gasJacobianFloor = new double[gas.members.length];
-        for (int k = 0; k < gasJacobianFloor.length; k++) {
-            double bmin = Double.POSITIVE_INFINITY;
-            for (int j : gas.members[k].nzIndex) {
-                bmin = Math.min(bmin, totals[j]);
-            }
-            gasJacobianFloor[k] = NEGLIGIBLE * bmin;
-        }
+        this.gasJacobianFloor = st.gasJacobianFloor;
     }
 
     /** Mole fraction of member k of phase p (not normalised). */
@@ -160,27 +152,40 @@ final class NewtonKernel {
             xs = new double[ph.members.length];
             lastX[p] = xs;
         }
-        for (int k = 0; k < ph.members.length; k++) {
-            double xk = x(p, k, lambda);
+        double[] cs = st.c[p];
+        int[] start = ph.start;
+        int[] idx = ph.index;
+        double[] cnt = ph.count;
+        double[] mult = ph.multiplicity;
+        for (int k = 0; k < xs.length; k++) {
+            double c = cs[k];
+            if (c == Double.POSITIVE_INFINITY) {
+                xs[k] = 0;
+                continue;
+            }
+            int from = start[k];
+            int to = start[k + 1];
+            double dot = 0;
+            for (int a = from; a < to; a++) {
+                dot += cnt[a] * lambda[idx[a]];
+            }
+            double xk = Math.exp(Math.min((dot - c) / mult[k], MAX_EXP));
             xs[k] = xk;
             if (xk == 0) {
                 continue;
             }
             sum += xk;
-            Constituent mem = ph.members[k];
             double nk = n * xk;
-            int[] idx = mem.nzIndex;
-            double[] cnt = mem.nzCount;
-            double invM = 1.0 / mem.multiplicity;
+            double invM = 1.0 / mult[k];
             boolean negligible = p == 0 && nk < gasJacobianFloor[k];
-            for (int a = 0; a < idx.length; a++) {
+            for (int a = from; a < to; a++) {
                 int j = idx[a];
                 r[j] += nk * cnt[a];
                 if (jac != null && !negligible) {
                     double w = nk * cnt[a] * invM;
                     double[] rowj = jac[j];
-                    for (int c = 0; c < idx.length; c++) {
-                        rowj[idx[c]] += w * cnt[c];
+                    for (int b = from; b < to; b++) {
+                        rowj[idx[b]] += w * cnt[b];
                     }
                     rowj[amountCol] += colScale * xk * cnt[a];
                     grad[j] += xk * cnt[a] * invM;
@@ -199,6 +204,21 @@ final class NewtonKernel {
     }
 
     /**
+     * Consecutive steps cut below {@link #STALL_STEP} by the line search, each reducing 0.5 |r|^2 by
+     * less than a factor {@link #STALL_DECREASE}, after which the iteration is abandoned as stalled:
+     * the Newton system of an assemblage without a solution (a pure phase beside a solution whose
+     * end-members combine to its formula, or an element left without a carrier) creeps with steps
+     * of 1e-5 and would spend the whole iteration limit, with a dozen line-search trials each, before
+     * the phase selection could swap or drop a phase. A stall whose residuals are at the rounding
+     * level ({@link #stalledAtRounding}) counts as converged, as when the line search fails there.
+     */
+    static final int STALL_ITERATIONS = 4;
+    /** Step fraction below which a Newton step counts towards a stall. */
+    static final double STALL_STEP = 1e-2;
+    /** Reduction of 0.5 |r|^2 per step above which a step counts towards a stall. */
+    static final double STALL_DECREASE = 0.9;
+
+    /**
      * Iterates to convergence from it (modified in place).
      *
      * @return true when converged within the options' tolerances
@@ -210,7 +230,10 @@ final class NewtonKernel {
         double[][] jac = new double[n][n];
         double[][] jacTrial = new double[n][n];
         double[] d = new double[n];
+        // the trial point reuses two buffers, swapped with the iterate's arrays when it is accepted
+        Iterate trial = new Iterate(new double[m], 0, it.active, new double[it.u.length]);
         double f = evaluate(it, r, jac);
+        int stalled = 0;
         for (int iter = 0; iter < opt.maxNewtonIterations(); iter++) {
             if (converged(r, n)) {
                 return true;
@@ -223,11 +246,13 @@ final class NewtonKernel {
             }
             iterations++;
             double alpha = stepLimit(d, it);
-            Iterate trial = null;
             double fTrial = Double.POSITIVE_INFINITY;
-            for (int ls = 0; ls < 40; ls++) {
-                trial = step(it, d, alpha);
-                fTrial = evaluate(trial, rTrial, jacTrial);
+            int ls = 0;
+            for (; ls < 40; ls++) {
+                step(it, d, alpha, trial);
+                // the first trial usually passes and gets its Jacobian with the residual; shorter
+                // trials get the residual only, and the accepted one its Jacobian afterwards
+                fTrial = evaluate(trial, rTrial, ls == 0 ? jacTrial : null);
                 if (fTrial <= (1 - 1e-4 * alpha) * f || fTrial < 1e-28) {
                     break;
                 }
@@ -236,6 +261,15 @@ final class NewtonKernel {
             if (!(fTrial < f) && !(fTrial < 1e-28)) {
                 evaluate(it, r, jac);
                 return converged(r, n) || stalledAtRounding();
+            }
+            if (ls > 0) {
+                fTrial = evaluate(trial, rTrial, jacTrial);
+            }
+            stalled = alpha < STALL_STEP && fTrial > STALL_DECREASE * f ? stalled + 1 : 0;
+            if (stalled >= STALL_ITERATIONS) {
+                copyInto(trial, it);
+                // a creep at the rounding level within the conservation limit is convergence
+                return converged(rTrial, n) || stalledAtRounding();
             }
             copyInto(trial, it);
             if (vanishing(it) >= 0) {
@@ -302,21 +336,25 @@ final class NewtonKernel {
         return big > opt.maxPotentialStep() ? opt.maxPotentialStep() / big : 1.0;
     }
 
-    private Iterate step(Iterate it, double[] d, double alpha) {
-        Iterate t = it.copy();
+    /** Writes it + alpha d into t (same active phases). */
+    private void step(Iterate it, double[] d, double alpha, Iterate t) {
         for (int j = 0; j < m; j++) {
-            t.lambda[j] += alpha * d[j];
+            t.lambda[j] = it.lambda[j] + alpha * d[j];
         }
-        t.lnGas += alpha * d[m];
+        t.lnGas = it.lnGas + alpha * d[m];
         for (int q = 0; q < t.u.length; q++) {
-            t.u[q] += alpha * d[m + 1 + q];
+            t.u[q] = it.u[q] + alpha * d[m + 1 + q];
         }
-        return t;
     }
 
+    /** Makes the accepted trial the iterate; the iterate's former arrays become the trial's buffers. */
     private static void copyInto(Iterate from, Iterate to) {
+        double[] l = to.lambda;
         to.lambda = from.lambda;
-        to.lnGas = from.lnGas;
+        from.lambda = l;
+        double[] u = to.u;
         to.u = from.u;
+        from.u = u;
+        to.lnGas = from.lnGas;
     }
 }

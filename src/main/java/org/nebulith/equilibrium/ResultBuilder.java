@@ -11,14 +11,11 @@ final class ResultBuilder {
         ChemicalSystem sys = st.system;
         int np = sys.phaseCount();
         double[] phaseMoles = new double[np];
-        double[][] memberMoles = new double[np][];
-        String[][] memberSpecies = new String[np][];
-        for (int p = 0; p < np; p++) {
-            memberMoles[p] = new double[sys.phase(p).members.length];
-            memberSpecies[p] = new String[memberMoles[p].length];
-            for (int k = 0; k < memberSpecies[p].length; k++) {
-                memberSpecies[p][k] = st.chosen[p][k] == null ? null : st.chosen[p][k].id();
-            }
+        // absent phases share the state's read-only zero arrays; present ones get their own
+        double[][] memberMoles = st.thermal.zeroMoles.clone();
+        memberMoles[0] = new double[memberMoles[0].length];
+        for (int p : it.active) {
+            memberMoles[p] = new double[memberMoles[p].length];
         }
         fillMixture(0, Math.exp(it.lnGas), kernel, it, phaseMoles, memberMoles);
         for (int q = 0; q < it.active.length; q++) {
@@ -34,7 +31,7 @@ final class ResultBuilder {
         ResultChecks.Measures ms = ResultChecks.measure(problem, st, selection, it, phaseMoles, memberMoles);
         EquilibriumResult.Diagnostics d = new EquilibriumResult.Diagnostics(kernel.iterations, changes,
                 ms.balance(), ms.potential(), ms.worstMember(), ms.minAffinity(), ms.minAffinityPhase(), st.excludedGas, cold);
-        return new EquilibriumResult(problem, it.lambda.clone(), phaseMoles, memberMoles, memberSpecies, d, it.copy());
+        return new EquilibriumResult(problem, it.lambda.clone(), phaseMoles, memberMoles, st.thermal.memberSpecies, d, it.copy());
     }
 
     private static void fillMixture(int p, double n, NewtonKernel kernel, Iterate it, double[] phaseMoles,

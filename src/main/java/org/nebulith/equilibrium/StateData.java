@@ -5,60 +5,117 @@ import org.nebulith.thermo.Species;
 /**
  * The temperature- and pressure-dependent data of a system at one state: the standard chemical
  * potential c = G/RT (+ ln P/1 bar for gases) of every phase member, which candidate species
- * supplies it, and the amount scale of each phase.
+ * supplies it, and the amount scale of each phase. The part that depends on T and P only
+ * ({@link Thermal}) is shared by every state of the system at the same T and P
+ * ({@link ChemicalSystem#thermal}): the draws of a survey meet the same radial nodes again and again.
  */
 final class StateData {
     final ChemicalSystem system;
     final double tK;
     final double lnP;
-    /** c[p][k]; +infinity where member k of phase p has no valid species at tK */
+    /** c[p][k]; +infinity where member k of phase p has no valid species at tK (shared: never modified) */
     final double[][] c;
     final Species[][] chosen;
     final boolean[] available;
-    /** largest amount of phase p that the element totals allow [mol] (scale of its amount variable) */
+    /** largest amount of phase p that the element totals allow [mol] (scale of its amount variable; 1 for the gas) */
     final double[] scale;
-    int excludedGas;
+    /** moles of each gas species below which it is left out of the Jacobian ({@link NewtonKernel}) */
+    final double[] gasJacobianFloor;
+    final int excludedGas;
+    /** the data that depend on T and P only (shared) */
+    final Thermal thermal;
 
     StateData(EquilibriumProblem problem) {
         this.system = problem.system();
         this.tK = problem.temperatureK();
         this.lnP = Math.log(problem.pressureBar());
+        Thermal th = system.thermal(tK, problem.pressureBar());
+        thermal = th;
+        c = th.c;
+        chosen = th.chosen;
+        available = th.available;
+        excludedGas = th.excludedGas;
         int np = system.phaseCount();
-        c = new double[np][];
-        chosen = new Species[np][];
-        available = new boolean[np];
         scale = new double[np];
-        for (int p = 0; p < np; p++) {
-            evaluatePhase(p, problem);
+        scale[0] = 1.0; // the gas amount is ln N_gas, never scaled
+        for (int p = 1; p < np; p++) {
+            PhaseDef ph = system.phase(p);
+            double sc = 0;
+            for (int k = 0; k < ph.members.length; k++) {
+                if (chosen[p][k] != null) {
+                    sc = Math.max(sc, maxAmount(ph.members[k], problem));
+                }
+            }
+            scale[p] = sc > 0 ? sc : 1.0;
+        }
+        PhaseDef gas = system.phase(0);
+        gasJacobianFloor = new double[gas.members.length];
+        for (int k = 0; k < gasJacobianFloor.length; k++) {
+            double bmin = Double.POSITIVE_INFINITY;
+            for (int j : gas.members[k].nzIndex) {
+                bmin = Math.min(bmin, problem.total(j));
+            }
+            gasJacobianFloor[k] = NewtonKernel.NEGLIGIBLE * bmin;
         }
     }
 
-    private void evaluatePhase(int p, EquilibriumProblem problem) {
-        PhaseDef ph = system.phase(p);
-        int n = ph.members.length;
-        c[p] = new double[n];
-        chosen[p] = new Species[n];
-        int valid = 0;
-        double sc = 0;
-        for (int k = 0; k < n; k++) {
-            Constituent m = ph.members[k];
-            Species s = m.candidates.length == 1 ? (m.candidates[0].isValidAt(tK) ? m.candidates[0] : null)
-                    : m.stableCandidate(tK);
-            if (s == null) {
-                c[p][k] = Double.POSITIVE_INFINITY;
-                if (ph.kind == PhaseKind.GAS) {
-                    excludedGas++;
+    /** The data of a system that depend on T and P only; immutable once built. */
+    static final class Thermal {
+        final double[][] c;
+        final Species[][] chosen;
+        final boolean[] available;
+        int excludedGas;
+        /** id of the species chosen for each member, null where none is valid (shared by results) */
+        final String[][] memberSpecies;
+        /** a zero amount for every member of each phase (shared by results for absent phases) */
+        final double[][] zeroMoles;
+
+        /**
+         * @param system the system
+         * @param tK     temperature [K]
+         * @param pBar   pressure [bar]
+         */
+        Thermal(ChemicalSystem system, double tK, double pBar) {
+            int np = system.phaseCount();
+            double lnP = Math.log(pBar);
+            c = new double[np][];
+            chosen = new Species[np][];
+            available = new boolean[np];
+            memberSpecies = new String[np][];
+            zeroMoles = new double[np][];
+            for (int p = 0; p < np; p++) {
+                evaluatePhase(system.phase(p), p, tK, lnP);
+                memberSpecies[p] = new String[chosen[p].length];
+                for (int k = 0; k < chosen[p].length; k++) {
+                    memberSpecies[p][k] = chosen[p][k] == null ? null : chosen[p][k].id();
                 }
-                continue;
+                zeroMoles[p] = new double[chosen[p].length];
             }
-            chosen[p][k] = s;
-            double g = s.thermo().gOverRT(tK);
-            c[p][k] = ph.kind == PhaseKind.GAS ? g + lnP : g;
-            valid++;
-            sc = Math.max(sc, maxAmount(m, problem));
         }
-        available[p] = ph.kind == PhaseKind.SOLUTION ? valid >= 1 : valid > 0;
-        scale[p] = sc > 0 ? sc : 1.0;
+
+        private void evaluatePhase(PhaseDef ph, int p, double tK, double lnP) {
+            int n = ph.members.length;
+            c[p] = new double[n];
+            chosen[p] = new Species[n];
+            int valid = 0;
+            for (int k = 0; k < n; k++) {
+                Constituent m = ph.members[k];
+                Species s = m.candidates.length == 1 ? (m.candidates[0].isValidAt(tK) ? m.candidates[0] : null)
+                        : m.stableCandidate(tK);
+                if (s == null) {
+                    c[p][k] = Double.POSITIVE_INFINITY;
+                    if (ph.kind == PhaseKind.GAS) {
+                        excludedGas++;
+                    }
+                    continue;
+                }
+                chosen[p][k] = s;
+                double g = s.thermo().gOverRT(tK);
+                c[p][k] = ph.kind == PhaseKind.GAS ? g + lnP : g;
+                valid++;
+            }
+            available[p] = valid > 0;
+        }
     }
 
     private static double maxAmount(Constituent m, EquilibriumProblem problem) {
