@@ -69,6 +69,10 @@ public final class BenchCommand extends RunCommand {
     @Option(names = "--repeats", paramLabel = "N", defaultValue = "5", description = "Timed runs. Default: ${DEFAULT-VALUE}.")
     private int repeats;
 
+    @Option(names = "--commands", description = "Also time the default 'sequence' and 'planet' commands end to end, "
+            + "each in fresh JVMs (--repeats runs each).")
+    private boolean commands;
+
     @Override
     protected int execute(final RunContext context) {
         check();
@@ -84,6 +88,9 @@ public final class BenchCommand extends RunCommand {
                 system.phaseCount(), fmt(pressureBar), fmt(tMaxK), fmt(tMinK), warmup, repeats);
         engine(context, system, totals);
         sequence(context, system, totals);
+        if (commands) {
+            CommandTimer.run(out, repeats);
+        }
         out.println("note: single-threaded wall-clock figures; other load on the machine slows them");
         return ExitCodes.OK;
     }

@@ -99,6 +99,14 @@ public final class ChemistryOptions {
 
     /** @param context the run @return the composition as given, with its provenance */
     public AbundanceSet baseComposition(RunContext context) {
+        resolvedBase = resolveBase(context);
+        return resolvedBase;
+    }
+
+    /** The composition last resolved by {@link #baseComposition}, kept so that citing it registers nothing again. */
+    private AbundanceSet resolvedBase;
+
+    private AbundanceSet resolveBase(RunContext context) {
         try {
             if (elements != null) {
                 return AbundancePresets.resolve(elements);
@@ -122,6 +130,16 @@ public final class ChemistryOptions {
                     "a preset (" + String.join(", ", AbundancePresets.NAMES) + "), an abundance file, or "
                             + "Element=amount pairs such as H=1,O=4.9e-4");
         }
+    }
+
+    /**
+     * @param context the run
+     * @return the composition's reference for a report: its name and the provenance of its file
+     */
+    public String citeComposition(RunContext context) {
+        AbundanceSet set = resolvedBase != null ? resolvedBase : baseComposition(context);
+        String text = String.join(" ", set.provenance()).strip();
+        return set.name() + (text.isEmpty() ? "" : ": " + text);
     }
 
     /**

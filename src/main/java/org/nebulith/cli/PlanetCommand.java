@@ -11,6 +11,19 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import org.nebulith.condensation.CondensationSequence;
+import org.nebulith.condensation.ElementCondensation;
+import org.nebulith.condensation.PressurePath;
+import org.nebulith.condensation.SequenceRunner;
+import org.nebulith.condensation.SequenceSettings;
+import org.nebulith.equilibrium.ChemicalSystem;
+import org.nebulith.equilibrium.ConvergenceException;
+import org.nebulith.errors.Messages;
+import org.nebulith.errors.NumericalException;
+import org.nebulith.report.SourceList;
+import org.nebulith.report.planet.PlanetCharts;
+import org.nebulith.survey.HostMonteCarlo;
+import org.nebulith.thermo.Element;
 import org.nebulith.composition.AbundancePresets;
 import org.nebulith.composition.ElementAbundances;
 import org.nebulith.disk.DiskModel;
@@ -89,6 +102,19 @@ public final class PlanetCommand extends RunCommand {
                     + "zone,shape,r_center_AU,half_width_AU[,planet_mass_Mearth]. Default: " + DEMO_ZONES_NAME + ".")
     private String zones;
 
+    @Option(names = "--abundance-errors", paramLabel = "X=dex,...",
+            description = "1-sigma errors of the host star's [X/H] [dex], e.g. Fe=0.05,Mg=0.04,Si=0.04: the "
+                    + "comparison chart then shows 16th-84th percentile bars from a seeded Monte Carlo over them.")
+    private String abundanceErrors;
+
+    @Option(names = "--error-draws", paramLabel = "N", defaultValue = "40",
+            description = "Monte Carlo draws for --abundance-errors. Default: ${DEFAULT-VALUE}.")
+    private int errorDraws;
+
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1",
+            description = "Seed of the --abundance-errors Monte Carlo. Default: ${DEFAULT-VALUE}.")
+    private long seed;
+
     @Mixin
     private PlanetOptions planet = new PlanetOptions();
 
@@ -104,6 +130,7 @@ public final class PlanetCommand extends RunCommand {
             throw InputException.atOption("--profile-points", profilePoints, profilePoints < 2 ? "too few radii"
                     : "too many radii (each is an equilibrium solve)", "an integer from 2 to " + MAX_PROFILE_POINTS);
         }
+        Map<Element, Double> errors = errors();
         ElementAbundances gas = chemistry.composition(context);
         SystemSpec spec = chemistry.systemSpec(context);
         DiskModel diskModel = readDisk(context);
@@ -113,12 +140,13 @@ public final class PlanetCommand extends RunCommand {
         DomainChecks.disk("--disk", disk, diskModel, PlanetFormation.profileMinAU(diskModel, zoneList),
                 PlanetFormation.profileMaxAU(diskModel, zoneList), planet.floorK(), spec.species());
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
-            return compute(context, run, gas, spec, diskModel, zoneList);
+            org.nebulith.report.chart.ChartRenderer.warmUpInBackground();
+            return compute(context, run, gas, spec, diskModel, zoneList, errors);
         }
     }
 
     private int compute(RunContext context, RunFolder run, ElementAbundances gas, SystemSpec spec, DiskModel diskModel,
-                        List<FeedingZone> zoneList) {
+                        List<FeedingZone> zoneList, Map<Element, Double> errors) {
         FormationSettings settings = planet.settings(spec, ZoneCondensation.defaults());
         PlanetFormation formation = new PlanetFormation(settings, new EquilibriumSolver());
         List<ZonePlanet> planets;
@@ -128,7 +156,14 @@ public final class PlanetCommand extends RunCommand {
         try (Progress progress = context.progress(task, PlanetFormation.steps(zoneList, profilePoints) + 1L)) {
             PlanetFormation.Formation result = formation.run(gas, diskModel, zoneList, profilePoints, progress);
             planets = result.planets();
-            done = writeOutputs(context, run, gas, diskModel, spec, planets, result.profile());
+            Map<String, double[][]> bands = errors == null ? null : HostMonteCarlo.offsets(gas, errors, diskModel,
+                    zoneList, PlanetCharts.quantityNames(), errorDraws, seed);
+            Map<Element, Double> t50 = hostT50(spec, gas);
+            String errorNote = errors == null ? null
+                    : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
+                    + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "
+                    + "estimate on this disk and these zones and centred on the values shown";
+            done = writeOutputs(context, run, gas, diskModel, spec, planets, result.profile(), bands, t50, errorNote);
             progress.step();
         }
         for (ZonePlanet zp : planets) {
@@ -145,19 +180,76 @@ public final class PlanetCommand extends RunCommand {
     }
 
     private Path writeOutputs(RunContext context, RunFolder run, ElementAbundances gas, DiskModel diskModel,
-                              SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan) {
+                              SystemSpec spec, List<ZonePlanet> planets, List<LocalCondensation.Local> scan,
+                              Map<String, double[][]> bands, Map<Element, Double> t50, String errorNote) {
         List<Report.Setting> settings = new ArrayList<>();
         context.settings().forEach(s -> settings.add(new Report.Setting(s.key(), s.value(), s.origin())));
-        List<Report.Citation> sources = new ArrayList<>();
-        for (Map.Entry<String, String> e : SpeciesDatabase.bundled().sources().entrySet()) {
-            sources.add(new Report.Citation(e.getKey(), e.getValue()));
-        }
+        List<Report.Citation> extra = new ArrayList<>();
+        extra.add(new Report.Citation("disk", diskModel.description()));
+        extra.add(new Report.Citation("reference bodies", PlanetCharts.REFERENCE_SOURCES));
+        extra.add(new Report.Citation("Zeng2016", "Zeng L., Sasselov D.D. & Jacobsen S.B. (2016) ApJ 819, 127: "
+                + "mass-radius relation of rocky planets (radius_Rearth_Zeng2016 in bulk-composition.csv)"));
+        List<Report.Citation> sources = SourceList.of(chemistry.citeComposition(context), spec.species(),
+                gas.elements(), SpeciesDatabase.bundled().sources(), extra);
         PlanetReportWriter.RunData data = new PlanetReportWriter.RunData("Nebulith planet report",
                 "nebulith planet", context.toolVersion(), context.started(), chemistry.describeComposition(),
-                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources,
-                chemistry.ciReference());
+                gas, diskModel, spec.describe(), planets, scan, settings, context.inputs(), sources, bands, errorNote,
+                t50, chemistry.ciReference());
         PlanetReportWriter.write(run, data);
         return run.commit();
+    }
+
+    /**
+     * 50% condensation temperatures of the gas at 1e-4 bar (the usual reference pressure), equilibrium
+     * condensation on a 5 K grid bisected to 0.5 K, for the devolatilisation pattern.
+     */
+    private static Map<Element, Double> hostT50(SystemSpec spec, ElementAbundances gas) {
+        ChemicalSystem system = spec.build(gas.elements());
+        double[] totals = new double[system.elementCount()];
+        for (int j = 0; j < totals.length; j++) {
+            totals[j] = gas.moles(system.elements().get(j));
+        }
+        SequenceSettings s = new SequenceSettings(PressurePath.constant(1e-4), 2000, 250, 5, 0, 0.5);
+        CondensationSequence seq;
+        try {
+            seq = new SequenceRunner(new EquilibriumSolver()).run(system, totals, s);
+        } catch (ConvergenceException e) {
+            throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
+        }
+        Map<Element, Double> out = new java.util.EnumMap<>(Element.class);
+        for (ElementCondensation ec : seq.condensationTemperatures()) {
+            if (ec.t50K().isPresent()) {
+                out.put(ec.element(), ec.t50K().getAsDouble());
+            }
+        }
+        return out;
+    }
+
+    /** @return the --abundance-errors by element, or null when not given */
+    private Map<Element, Double> errors() {
+        if (abundanceErrors == null) {
+            return null;
+        }
+        if (errorDraws < 2) {
+            throw InputException.atOption("--error-draws", errorDraws, "too few draws", "an integer >= 2");
+        }
+        Map<Element, Double> out = new java.util.EnumMap<>(Element.class);
+        for (String part : abundanceErrors.split(",")) {
+            String[] kv = part.split("=", 2);
+            Element e = kv.length == 2 ? Element.fromSymbol(kv[0].strip()) : null;
+            double v;
+            try {
+                v = kv.length == 2 ? Double.parseDouble(kv[1].strip()) : Double.NaN;
+            } catch (NumberFormatException x) {
+                v = Double.NaN;
+            }
+            if (e == null || !(v >= 0) || !Double.isFinite(v) || e == Element.H) {
+                throw InputException.atOption("--abundance-errors", part, "not an element and a 1-sigma error",
+                        "X=dex pairs separated by commas, X an element other than H, dex >= 0 (e.g. Fe=0.05,Mg=0.04)");
+            }
+            out.put(e, v);
+        }
+        return out;
     }
 
     private DiskModel readDisk(RunContext context) throws IOException {

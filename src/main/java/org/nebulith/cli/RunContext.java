@@ -293,10 +293,14 @@ public final class RunContext {
 
     private static String text(final Object value) {
         if (value instanceof Object[]) {
-            return Arrays.stream((Object[]) value).map(String::valueOf).collect(Collectors.joining(","));
+            return Arrays.stream((Object[]) value).map(RunContext::text).collect(Collectors.joining(","));
         }
         if (value instanceof Collection<?>) {
-            return ((Collection<?>) value).stream().map(String::valueOf).collect(Collectors.joining(","));
+            return ((Collection<?>) value).stream().map(RunContext::text).collect(Collectors.joining(","));
+        }
+        if (value instanceof Double || value instanceof Float) {
+            double v = ((Number) value).doubleValue();
+            return Double.isFinite(v) ? org.nebulith.format.Decimal.shortest(v) : String.valueOf(v);
         }
         return String.valueOf(value);
     }

@@ -130,6 +130,7 @@ public final class SequenceCommand extends RunCommand {
         double elapsed;
         List<String> cautions = new ArrayList<>();
         try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
+            org.nebulith.report.chart.ChartRenderer.warmUpInBackground();
             Optional<String> startNote = allGasStart(context, system, totals, path);
             SequenceSettings settings = settings(path);
             startNote.ifPresent(cautions::add);
@@ -173,7 +174,7 @@ public final class SequenceCommand extends RunCommand {
                 compositionLines(context), spec.describe(), describe(path), context.inputs(), cautions, chartsNote)));
         SequenceReport.write(run, seq, tables, charts, new SequenceReport.Meta(context.toolVersion(),
                 context.started(), chemistry.describeComposition(), spec.describe(), describe(path),
-                reportSettings(context), cautions, sources(), context.inputs()));
+                reportSettings(context), cautions, sources(context, spec, java.util.EnumSet.copyOf(seq.system().elements())), context.inputs()));
         return run.commit();
     }
 
@@ -221,11 +222,10 @@ public final class SequenceCommand extends RunCommand {
         return out;
     }
 
-    private static List<org.nebulith.report.html.Report.Citation> sources() {
-        List<org.nebulith.report.html.Report.Citation> out = new java.util.ArrayList<>();
-        org.nebulith.thermo.SpeciesDatabase.bundled().sources().forEach((k, v) ->
-                out.add(new org.nebulith.report.html.Report.Citation(k, v)));
-        return out;
+    private List<org.nebulith.report.html.Report.Citation> sources(RunContext context, SystemSpec spec,
+                                                                   Set<Element> elements) {
+        return org.nebulith.report.SourceList.of(chemistry.citeComposition(context), spec.species(), elements,
+                org.nebulith.thermo.SpeciesDatabase.bundled().sources(), List.of());
     }
 
     private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
@@ -304,7 +304,7 @@ public final class SequenceCommand extends RunCommand {
 
     private String describe(final PressurePath path) {
         if (pathFile == null) {
-            return "constant " + Decimal.format(path.pressureBar(tMaxK)) + " bar";
+            return "constant " + Decimal.shortest(path.pressureBar(tMaxK)) + " bar";
         }
         return "P-T path " + pathFile + " (" + path.points() + " points, " + Decimal.format(path.tableMinK()) + " to "
                 + Decimal.format(path.tableMaxK()) + " K; log-linear in P between points, held constant beyond)";

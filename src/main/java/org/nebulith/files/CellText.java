@@ -41,4 +41,26 @@ public final class CellText {
         throw new IllegalArgumentException(table + ": column " + column + ": unsupported cell type "
                 + value.getClass().getName());
     }
+
+    /**
+     * The cell as people read it (report tables and summaries): temperatures (columns ending in
+     * {@code _K}) to 0.1 K, other floating-point numbers to four significant figures, the rest as
+     * {@link #of}.
+     *
+     * @param value  the cell
+     * @param table  table name, for the message
+     * @param column column name
+     * @param row    1-based data row
+     * @return the cell's text
+     */
+    public static String forPeople(final Object value, final String table, final String column, final long row) {
+        if (value instanceof Double || value instanceof Float) {
+            double x = ((Number) value).doubleValue();
+            if (!Double.isFinite(x)) {
+                throw new NumericalException(Messages.NON_FINITE_OUTPUT, null, table, column, row, value);
+            }
+            return column.endsWith("_K") ? Decimal.kelvin(x) : Decimal.forPeople(x);
+        }
+        return of(value, table, column, row);
+    }
 }

@@ -77,4 +77,83 @@ public final class Decimal {
         }
         return text.append('e').append(exponent).toString();
     }
+
+    /**
+     * A number for people (report tables, summaries, the terminal): four significant figures,
+     * trailing zeros kept (1.150), plain between 1e-4 and 1e7, otherwise {@code d.ddde-N}.
+     *
+     * @param value a finite double
+     * @return its text
+     */
+    public static String forPeople(final double value) {
+        return significant(value, 4);
+    }
+
+    /**
+     * @param value  a finite double
+     * @param digits significant figures (1 to 17)
+     * @return value rounded half-even to that many significant figures, trailing zeros kept
+     */
+    public static String significant(final double value, final int digits) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("not a finite number: " + value);
+        }
+        if (value == 0.0) {
+            return "0";
+        }
+        BigDecimal rounded = round(new BigDecimal(value), digits);
+        int exponent = rounded.precision() - rounded.scale() - 1;
+        rounded = rounded.setScale(Math.max(rounded.scale(), digits - 1 - exponent), RoundingMode.UNNECESSARY);
+        if (exponent >= PLAIN_MIN_EXPONENT && exponent < PLAIN_MAX_EXPONENT) {
+            return rounded.scale() < 0 ? rounded.setScale(0).toPlainString() : rounded.toPlainString();
+        }
+        return scientific(rounded, exponent);
+    }
+
+    /**
+     * @param kelvin a temperature [K]
+     * @return it to 0.1 K, e.g. {@code 1352.4}
+     */
+    public static String kelvin(final double kelvin) {
+        if (!Double.isFinite(kelvin)) {
+            throw new IllegalArgumentException("not a finite temperature: " + kelvin);
+        }
+        return new BigDecimal(kelvin).setScale(1, RoundingMode.HALF_EVEN).toPlainString();
+    }
+
+    /**
+     * A value known only to a given resolution (a temperature bisected to a bracket), written with the
+     * decimals of that resolution: {@code toResolution(992.484375, 0.05)} is {@code 992.48}.
+     *
+     * @param value      a finite double
+     * @param resolution the resolution, &gt; 0
+     * @return the shortest decimal text of the value rounded to the resolution's decimals
+     */
+    public static String toResolution(final double value, final double resolution) {
+        int decimals = Math.max(0, (int) Math.ceil(-Math.log10(resolution) - 1e-9));
+        return format(new BigDecimal(value).setScale(decimals, RoundingMode.HALF_EVEN).doubleValue());
+    }
+
+    /**
+     * The shortest text of a setting: the round-trip digits of {@link #format}, in plain notation from
+     * 0.001 to below a million, otherwise in whichever of plain or exponent notation is shorter
+     * ({@code 1e-4}, {@code 2000}, {@code 0.05}, {@code 1.5e6}).
+     *
+     * @param value a finite double
+     * @return its shortest text
+     */
+    public static String shortest(final double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("not a finite number: " + value);
+        }
+        if (value == 0.0) {
+            return "0";
+        }
+        BigDecimal digits = shortestDigits(value);
+        int exponent = digits.precision() - digits.scale() - 1;
+        String plain = digits.toPlainString();
+        String sci = scientific(digits, exponent);
+        boolean everyday = exponent >= -3 && exponent < 6;
+        return !everyday && sci.length() < plain.length() ? sci : plain;
+    }
 }

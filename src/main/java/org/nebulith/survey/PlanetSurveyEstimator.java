@@ -16,6 +16,7 @@ import java.util.NavigableMap;
 import java.util.concurrent.atomic.AtomicLong;
 
 import org.nebulith.composition.ElementAbundances;
+import org.nebulith.composition.SolarReference;
 import org.nebulith.disk.DiskModel;
 import org.nebulith.disk.DiskPresets;
 import org.nebulith.equilibrium.EquilibriumSolver;
@@ -125,6 +126,19 @@ public final class PlanetSurveyEstimator implements PlanetEstimator {
                             org.nebulith.equilibrium.StateDomain.maxTemperatureK(species))
                     + " and P within " + org.nebulith.equilibrium.StateDomain.pressureRange() + " above the floor temperature");
         }
+    }
+
+    /**
+     * @param disk  the disk, already read
+     * @param zones the feeding zones, already read
+     * @param solar the solar reference (warm-start composition)
+     * @return an estimator for exactly this disk and these zones
+     */
+    public static PlanetSurveyEstimator of(DiskModel disk, List<FeedingZone> zones, SolarReference solar) {
+        PlanetFormation f = new PlanetFormation(FormationSettings.defaults().withIntegration(ZoneCondensation.fast()),
+                new EquilibriumSolver());
+        return new PlanetSurveyEstimator(f, disk, List.copyOf(zones), solar.abundances(),
+                java.util.Collections.emptyNavigableMap(), new Counters());
     }
 
     /**

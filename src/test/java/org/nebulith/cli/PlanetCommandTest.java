@@ -71,10 +71,11 @@ class PlanetCommandTest {
         }
         if (ChromiumProbe.chromium().isPresent()) {
             ChromiumProbe.Result page = ChromiumProbe.open(outDir.resolve("report.html"), dir);
-            assertEquals(2, page.images(), "radial map and comparison chart");
+            assertEquals(3, page.images(), "comparison, devolatilisation pattern and radial map");
             assertEquals(0, page.bad(), "images not decoded");
             assertEquals(0, page.errors(), "errors in the page");
             assertEquals(List.of(), page.console(), "console messages");
+            assertTrue(page.overflow() <= 0, "no horizontal overflow: " + page.overflow() + " px");
         }
         List<CSVRecord> profile = read(outDir.resolve("radial-profile.csv"));
         assertEquals(12, profile.size());
@@ -100,6 +101,16 @@ class PlanetCommandTest {
         assertEquals(2, run("planet", "--zones", zones.toString(), "--out", dir.resolve("run").toString()));
         assertTrue(cli.err().contains("half_width_AU"), cli.err());
         assertFalse(Files.exists(dir.resolve("run")));
+    }
+
+    @Test
+    void badAbundanceErrorsAreBadInputBeforeAnyComputing() throws Exception {
+        Path outDir = dir.resolve("err-run");
+        assertEquals(2, run("planet", "--abundance-errors", "Fe=0.05,Xx=0.1", "--out", outDir.toString()));
+        String e = cli.err();
+        assertTrue(e.contains("--abundance-errors") && e.contains("Xx=0.1"), e);
+        assertEquals(1, e.strip().lines().count(), e);
+        assertFalse(Files.exists(outDir));
     }
 
     @Test

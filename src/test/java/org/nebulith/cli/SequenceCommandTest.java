@@ -103,8 +103,12 @@ class SequenceCommandTest {
         List<CSVRecord> t = read(SequenceTables.TEMPERATURES);
         for (ElementCondensation ec : expected.condensationTemperatures()) {
             CSVRecord r = t.stream().filter(x -> x.get("element").equals(ec.element().symbol())).findFirst().orElseThrow();
-            assertEquals(ec.t50K().isPresent() ? Double.toString(ec.t50K().getAsDouble()) : "",
-                    r.get("T50_K").isEmpty() ? "" : Double.toString(Double.parseDouble(r.get("T50_K"))));
+            // written to the 0.05 K bisection bracket: two decimals, within half a hundredth of the run's value
+            assertEquals(ec.t50K().isPresent(), !r.get("T50_K").isEmpty(), ec.element().symbol());
+            if (ec.t50K().isPresent()) {
+                assertEquals(ec.t50K().getAsDouble(), Double.parseDouble(r.get("T50_K")), 0.005 + 1e-9);
+                assertTrue(r.get("T50_K").matches("\\d+(\\.\\d{1,2})?"), r.get("T50_K"));
+            }
             assertEquals(ec.hostPhase().isEmpty() ? "" : PhaseNames.display(ec.hostPhase()), r.get("host_phase"));
             assertEquals(ec.hostPhase(), r.get("host_data_id"));
             assertFalse(r.get("T_onset_K").contains("NaN"));
@@ -124,6 +128,36 @@ class SequenceCommandTest {
         for (CSVRecord r : a) {
             assertFalse(r.get("phase").matches(".*\\((cr|a|b|c|L)\\)$"), r.get("phase"));
         }
+    }
+
+    @Test
+    void reportOpensInChromiumWithoutOverflowErrorsOrBrokenImages() throws Exception {
+        org.junit.jupiter.api.Assumptions.assumeTrue(org.nebulith.report.html.ChromiumProbe.chromium().isPresent(),
+                "no chromium binary on PATH");
+        org.nebulith.report.html.ChromiumProbe.Result page =
+                org.nebulith.report.html.ChromiumProbe.open(folder.resolve("report.html"), dir);
+        assertEquals(2, page.images(), "condensation curves and phase assemblage");
+        assertEquals(0, page.bad(), "images not decoded");
+        assertEquals(0, page.errors(), "errors in the page");
+        assertEquals(List.of(), page.console(), "console messages");
+        assertTrue(page.overflow() <= 0, "no horizontal overflow: " + page.overflow() + " px");
+    }
+
+    @Test
+    void reportNumbersAreForPeopleAndChartsHaveLiveText() throws IOException {
+        String summary = Files.readString(folder.resolve("summary.md"));
+        // no 16-digit numbers: temperatures to 0.1 K, the rest to four significant figures
+        String tables = summary.lines().filter(l -> l.startsWith("|")).collect(java.util.stream.Collectors.joining("\n"));
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\d+\\.\\d+").matcher(tables);
+        while (m.find()) {
+            String digits = m.group().replace(".", "").replaceFirst("^0+", "");
+            assertTrue(digits.length() <= 5, "at most four significant figures (five for kelvin): " + m.group());
+        }
+        assertFalse(summary.contains("E-"), "settings in shortest decimal, not 1.0E-4");
+        String svg = Files.readString(folder.resolve("condensation-curves.svg"));
+        assertTrue(svg.contains("<text"), "live text");
+        assertTrue(Files.size(folder.resolve("condensation-curves.svg")) < 500_000);
+        assertTrue(Files.size(folder.resolve("phase-assemblage.svg")) < 500_000);
     }
 
     @Test

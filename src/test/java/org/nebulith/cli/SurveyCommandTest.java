@@ -123,6 +123,19 @@ class SurveyCommandTest {
         assertEquals("star,zone,quantity,median,p16,p84,unit,nominal,draws,n_draws,n_not_applicable", lines.get(0));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-B,earth-analogue,core_mass_fraction,")), lines.toString());
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("Smoke-A,host,Mg_Si_molar,")), lines.toString());
+        Path report = dir.resolve("r").resolve("report.html");
+        String html = Files.readString(report);
+        assertTrue(html.contains("Settings") && html.contains("Predicted planets") && html.contains("Asplund"), html);
+        assertFalse(html.contains("run time 0.0 s"), "run time measured from the start of the survey");
+        assertTrue(Files.readString(dir.resolve("r").resolve("survey-chart.svg")).contains("<text"), "live text");
+        if (org.nebulith.report.html.ChromiumProbe.chromium().isPresent()) {
+            org.nebulith.report.html.ChromiumProbe.Result page = org.nebulith.report.html.ChromiumProbe.open(report, dir);
+            assertEquals(1, page.images(), "the survey chart");
+            assertEquals(0, page.bad(), "images not decoded");
+            assertEquals(0, page.errors(), "errors in the page");
+            assertEquals(List.of(), page.console(), "console messages");
+            assertTrue(page.overflow() <= 0, "no horizontal overflow: " + page.overflow() + " px");
+        }
     }
 
     @Test

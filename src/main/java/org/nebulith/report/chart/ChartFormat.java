@@ -4,9 +4,9 @@ package org.nebulith.report.chart;
 public enum ChartFormat {
     /** Raster, {@value ChartStyle#PNG_DPI} dpi, for screens and the HTML report. */
     PNG("png"),
-    /** Vector, text as outlines (VectorGraphics2D). */
+    /** Vector with live text ({@code <text>} elements), written through VectorGraphics2D. */
     SVG("svg"),
-    /** Vector (pdfbox-graphics2d), for papers. */
+    /** Vector (pdfbox-graphics2d) with the chart font embedded and text kept as text, for papers. */
     PDF("pdf");
 
     private final String extension;

@@ -8,8 +8,11 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
@@ -23,15 +26,27 @@ import javax.imageio.metadata.IIOMetadata;
 import javax.imageio.metadata.IIOMetadataNode;
 import javax.imageio.stream.ImageOutputStream;
 
-import org.knowm.xchart.VectorGraphicsEncoder;
-import org.knowm.xchart.internal.chartpart.Chart;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.font.PDType0Font;
 import org.nebulith.files.RunFolder;
 
+import de.erichseifert.vectorgraphics2d.Document;
+import de.erichseifert.vectorgraphics2d.Processors;
+import de.erichseifert.vectorgraphics2d.VectorGraphics2D;
+import de.erichseifert.vectorgraphics2d.util.PageSize;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawer;
+
 /**
- * Renders a chart to PNG (at {@link ChartStyle#PNG_DPI}, with the resolution recorded in the
- * file), SVG and PDF (XChart's {@link VectorGraphicsEncoder}). Every file is written through a
- * temporary file and moved into place, so a failed render (missing fonts, say) never leaves an
- * empty or partial file. Requires {@code java.awt.headless=true} on machines without a display.
+ * Renders a {@link Figure} (XChart charts) to PNG at {@link ChartStyle#PNG_DPI} (the resolution
+ * recorded in the file), to SVG (VectorGraphics2D) and to PDF (pdfbox-graphics2d, the bundled
+ * DejaVu Sans embedded as a subset), the vector files painted through a {@link VectorCanvas} so
+ * that labels stay text and each series one path. Every file is written through a temporary file
+ * and moved into place, so a failed render never leaves an empty or partial file. Requires
+ * {@code java.awt.headless=true} on machines without a display.
  */
 public final class ChartRenderer {
 
@@ -52,68 +67,64 @@ public final class ChartRenderer {
     }
 
     /**
+     * Starts drawing a small throw-away chart in all three formats on a background thread of low
+     * priority and returns at once: a command that computes for a while first (on one core) then
+     * finds the chart code loaded and compiled (XChart, VectorGraphics2D, PDFBox, the font), which
+     * otherwise takes a second or more of its first chart. Nothing is written; a failure here is
+     * ignored (the real charts report their own).
+     */
+    public static void warmUpInBackground() {
+        Thread t = new Thread(ChartRenderer::warmUp, "chart warm-up");
+        t.setDaemon(true);
+        t.setPriority(Thread.MIN_PRIORITY);
+        t.start();
+    }
+
+    private static void warmUp() {
+        try {
+            double[] x = {1, 2, 3, 5, 8};
+            double[] y = {0.1, 0.4, 0.2, 0.9, 0.5};
+            Figure f = new DevolatilisationPattern(List.of("Mg", "Si", "Fe", "Na", "S"), new double[] {1300, 1310, 1330,
+                    960, 660}, List.of(new DevolatilisationPattern.Body("warm-up", y)), "ratio", List.of("warm-up"))
+                    .chart(ChartSize.COLUMN);
+            png(f);
+            svg(f);
+            pdf(f);
+            new CondensationCurves(x, List.of(new Curve("Mg", y)), new double[] {2}, List.of()).chart(ChartSize.COLUMN);
+        } catch (RuntimeException e) {
+            // only a warm-up
+        }
+    }
+
+    /**
      * Writes {@code baseName.png/.svg/.pdf} (those requested) into a run folder.
      *
-     * @param chart    the chart
+     * @param figure   the chart
      * @param run      the open run folder
      * @param baseName file name without extension (e.g. {@code condensation-curves})
      * @param formats  formats to write; PNG is always rendered (the report embeds it)
      * @return what was written
      */
-    public static Rendered write(final Chart<?, ?> chart, final RunFolder run, final String baseName,
+    public static Rendered write(final Figure figure, final RunFolder run, final String baseName,
                                  final Set<ChartFormat> formats) {
-        byte[] png = png(chart);
+        // XChart charts keep layout state while painting: the three encodings are made one after the other
+        byte[] png = png(figure);
         Map<ChartFormat, Path> files = new EnumMap<>(ChartFormat.class);
         for (ChartFormat format : formats) {
-            String name = baseName + "." + format.extension();
-            Path path = format == ChartFormat.PNG
-                    ? run.write(name, out -> out.write(png))
-                    : run.write(name, out -> vector(chart, format, out));
-            files.put(format, path);
+            byte[] bytes = format == ChartFormat.PNG ? png : format == ChartFormat.SVG ? svg(figure) : pdf(figure);
+            files.put(format, run.write(baseName + "." + format.extension(), out -> out.write(bytes)));
         }
         return new Rendered(baseName, png, files);
     }
 
     /**
-     * @param chart the chart
+     * @param figure the chart
      * @return PNG bytes at {@link ChartStyle#PNG_DPI}
      */
-    public static byte[] png(final Chart<?, ?> chart) {
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        try {
-            writePng(chart, bytes);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return bytes.toByteArray();
-    }
-
-    /**
-     * @param chart  the chart
-     * @param format SVG or PDF
-     * @param out    destination
-     * @throws IOException on failure
-     */
-    public static void vector(final Chart<?, ?> chart, final ChartFormat format, final OutputStream out)
-            throws IOException {
-        VectorGraphicsEncoder.VectorGraphicsFormat vg;
-        switch (format) {
-            case SVG:
-                vg = VectorGraphicsEncoder.VectorGraphicsFormat.SVG;
-                break;
-            case PDF:
-                vg = VectorGraphicsEncoder.VectorGraphicsFormat.PDF;
-                break;
-            default:
-                throw new IllegalArgumentException("not a vector format: " + format);
-        }
-        VectorGraphicsEncoder.saveVectorGraphic(chart, out, vg);
-    }
-
-    private static void writePng(final Chart<?, ?> chart, final OutputStream out) throws IOException {
+    public static byte[] png(final Figure figure) {
         double scale = ChartStyle.PNG_DPI / POINTS_PER_INCH;
-        int width = (int) Math.round(chart.getWidth() * scale);
-        int height = (int) Math.round(chart.getHeight() * scale);
+        int width = (int) Math.round(figure.widthPt() * scale);
+        int height = (int) Math.round(figure.heightPt() * scale);
         BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = image.createGraphics();
         try {
@@ -122,11 +133,79 @@ public final class ChartRenderer {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_FRACTIONALMETRICS, RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
             g.scale(scale, scale);
-            chart.paint(g, chart.getWidth(), chart.getHeight());
+            figure.paint(g);
         } finally {
             g.dispose();
         }
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try {
+            encodePng(image, bytes);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return bytes.toByteArray();
+    }
+
+    /**
+     * @param figure the chart
+     * @return the SVG document (UTF-8), sized in points, labels as {@code <text>}
+     */
+    public static byte[] svg(final Figure figure) {
+        VectorGraphics2D g = new VectorGraphics2D();
+        VectorCanvas canvas = new VectorCanvas(g, new TextOutlines(figure.texts(), figure.fonts()));
+        figure.paint(canvas);
+        canvas.dispose();
+        Document doc = Processors.get("svg").getDocument(g.getCommands(),
+                new PageSize(0, 0, figure.widthPt(), figure.heightPt()));
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            doc.writeTo(out);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        String text = out.toString(StandardCharsets.UTF_8);
+        // the page is laid out in points: say so, so that the file prints at its figure size
+        int tag = text.indexOf("<svg");
+        int end = text.indexOf('>', tag);
+        String root = text.substring(tag, end).replaceAll("(width|height)=\"([0-9.]+)px\"", "$1=\"$2pt\"");
+        text = text.substring(0, tag) + root + text.substring(end);
+        return text.getBytes(StandardCharsets.UTF_8);
+    }
+
+    /**
+     * @param figure the chart
+     * @return a one-page PDF of the figure's size, text as text in the embedded (subset) chart font
+     */
+    public static byte[] pdf(final Figure figure) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try (PDDocument doc = new PDDocument()) {
+            float w = (float) figure.widthPt();
+            float h = (float) figure.heightPt();
+            PDPage page = new PDPage(new PDRectangle(w, h));
+            doc.addPage(page);
+            PdfBoxGraphics2D g = new PdfBoxGraphics2D(doc, w, h);
+            PdfBoxGraphics2DFontTextDrawer text = new PdfBoxGraphics2DFontTextDrawer();
+            try (InputStream font = Fonts.open()) {
+                text.registerFont(Fonts.at(1).getFontName(), PDType0Font.load(doc, font, true));
+            }
+            g.setFontTextDrawer(text);
+            VectorCanvas canvas = new VectorCanvas(g, new TextOutlines(figure.texts(), figure.fonts()));
+            figure.paint(canvas);
+            canvas.dispose();
+            g.dispose();
+            try (PDPageContentStream content = new PDPageContentStream(doc, page)) {
+                content.drawForm(g.getXFormObject());
+            }
+            doc.save(out);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toByteArray();
+    }
+
+    private static void encodePng(final BufferedImage image, final OutputStream out) throws IOException {
         ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
         try (ImageOutputStream stream = ImageIO.createImageOutputStream(out)) {
             ImageWriteParam param = writer.getDefaultWriteParam();

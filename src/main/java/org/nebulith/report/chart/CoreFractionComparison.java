@@ -3,10 +3,8 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
+
 
 /**
  * Core mass fraction from a planet's mass and radius (y) against the one predicted from its star
@@ -43,40 +41,33 @@ public record CoreFractionComparison(List<Point> planets) {
      * @param size figure size
      * @return the chart
      */
-    public XYChart chart(final ChartSize size) {
-        XYChart chart = ChartStyle.newXYChart(size, "Core mass fraction predicted from the star",
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Core mass fraction predicted from the star",
                 "Core mass fraction from mass and radius");
-        chart.getStyler().setXAxisMin(0.0).setXAxisMax(1.0).setYAxisMin(0.0).setYAxisMax(1.0);
-        chart.getStyler().setLegendPosition(Styler.LegendPosition.InsideNW);
-        chart.getStyler().setXAxisDecimalPattern("0.0");
-        chart.getStyler().setYAxisDecimalPattern("0.0");
-        XYSeries one = chart.addSeries("1:1", new double[] {0, 1}, new double[] {0, 1});
-        ChartStyle.line(one, 7);
-        one.setLineColor(Palette.REFERENCE);
-        int n = planets.size();
-        double[] x = new double[n];
-        double[] y = new double[n];
-        double[] xl = new double[n];
-        double[] xh = new double[n];
-        double[] yl = new double[n];
-        double[] yh = new double[n];
-        for (int i = 0; i < n; i++) {
-            Point p = planets.get(i);
-            x[i] = p.predicted();
-            xl[i] = p.predLow();
-            xh[i] = p.predHigh();
-            y[i] = p.measured();
-            yl[i] = p.measLow();
-            yh[i] = p.measHigh();
+        c.getStyler().setXAxisMin(0.0);
+        c.getStyler().setXAxisMax(1.0);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setYAxisMax(1.0);
+        ChartStyle.line(c, "1:1", new double[] {0, 1}, new double[] {0, 1},
+                new LineStyle(Palette.REFERENCE, 0.7, new float[] {3f, 2f}), true);
+        double[] x = new double[6 * planets.size()];
+        double[] y = new double[6 * planets.size()];
+        for (int k = 0; k < planets.size(); k++) {
+            Point pt = planets.get(k);
+            double[] xs = {pt.predLow(), pt.predHigh(), pt.predHigh(), pt.predicted(), pt.predicted(), pt.predicted()};
+            double[] ys = {pt.measured(), pt.measured(), Double.NaN, pt.measLow(), pt.measHigh(), Double.NaN};
+            System.arraycopy(xs, 0, x, 6 * k, 6);
+            System.arraycopy(ys, 0, y, 6 * k, 6);
         }
-        ErrorBars.horizontal(chart, "predicted range", x, xl, xh, y, Palette.colour(0));
-        ErrorBars.vertical(chart, "measured range", x, y, yl, yh, Palette.colour(0));
-        XYSeries s = chart.addSeries("planets", x, y);
-        ChartStyle.points(s, 0);
-        for (Point p : planets) {
-            chart.addAnnotation(new AnnotationText(p.label(), Math.min(0.9, p.predicted() + 0.02), p.measured() + 0.03,
-                    false));
+        ChartStyle.line(c, "ranges", x, y, LineStyle.solid(Palette.colour(0), 0.6), false);
+        ChartStyle.points(c, "planets", planets.stream().mapToDouble(Point::predicted).toArray(),
+                planets.stream().mapToDouble(Point::measured).toArray(), Marker.CIRCLE, Palette.colour(0), 1, true);
+        f.fill(c);
+        DirectLabels labels = new DirectLabels(f, c);
+        for (Point pt : planets) {
+            labels.beside(pt.label(), labels.x(pt.predicted()), labels.y(pt.measured()));
         }
-        return chart;
+        return f;
     }
 }

@@ -3,6 +3,8 @@ package org.nebulith.report.chart;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.XYStyler;
+
 
 /**
  * Interior structure of one planet: density (left axis) and pressure (right axis) against radius.
@@ -26,22 +28,33 @@ public record InteriorProfileChart(double[] radiusKm, double[] densityKgM3, doub
      * @param size figure size
      * @return the chart
      */
-    public XYChart chart(final ChartSize size) {
-        XYChart chart = ChartStyle.newXYChart(size, "Radius r [km]", "Density [kg/m3]");
-        chart.getStyler().setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
-        chart.getStyler().setLegendPosition(Styler.LegendPosition.InsideNE);
-        chart.getStyler().setXAxisMin(0.0).setXAxisMax(radiusKm[radiusKm.length - 1]);
-        chart.getStyler().setYAxisMin(0, 0.0);
-        chart.getStyler().setYAxisMin(1, 0.0);
-        chart.setYAxisGroupTitle(0, "Density [kg/m3]");
-        chart.setYAxisGroupTitle(1, "Pressure [GPa]");
-        chart.getStyler().setXAxisDecimalPattern("0");
-        XYSeries rho = chart.addSeries("density", radiusKm, densityKgM3);
-        ChartStyle.line(rho, 0);
-        rho.setYAxisGroup(0);
-        XYSeries p = chart.addSeries("pressure", radiusKm, pressureGpa);
-        ChartStyle.line(p, 1);
-        p.setYAxisGroup(1);
-        return chart;
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Radius r [km]", "Density [kg/m3]");
+        XYStyler s = c.getStyler();
+        s.setXAxisMin(0.0);
+        s.setXAxisMax(radiusKm[radiusKm.length - 1]);
+        s.setYAxisMin(0.0);
+        s.setYAxisMax(top(densityKgM3));
+        s.setLegendPosition(Styler.LegendPosition.InsideNE);
+        ChartStyle.line(c, "density (left)", radiusKm, densityKgM3, ChartStyle.series(0).line(), true);
+        XYSeries p = ChartStyle.line(c, "pressure (right)", radiusKm, pressureGpa, ChartStyle.series(1).line(), true);
+        if (p != null) {
+            p.setYAxisGroup(1);
+        }
+        c.setYAxisGroupTitle(1, "Pressure [GPa]");
+        s.setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
+        s.setYAxisMin(1, 0.0);
+        s.setYAxisMax(1, top(pressureGpa));
+        f.fill(c);
+        return f;
+    }
+
+    private static double top(final double[] v) {
+        double m = 0;
+        for (double x : v) {
+            m = Math.max(m, x);
+        }
+        return m > 0 ? m * 1.08 : 1;
     }
 }

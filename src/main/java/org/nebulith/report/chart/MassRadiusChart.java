@@ -3,10 +3,8 @@ package org.nebulith.report.chart;
 import java.util.List;
 import java.util.Objects;
 
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
+
 
 /**
  * Mass-radius diagram: curves of constant composition (core mass fraction, water) and measured
@@ -48,41 +46,61 @@ public record MassRadiusChart(double[] massMearth, List<Curve> curves, List<Plan
      * @param size figure size
      * @return the chart
      */
-    public XYChart chart(final ChartSize size) {
-        XYChart chart = ChartStyle.newXYChart(size, "Mass [M_earth]", "Radius [R_earth]");
-        chart.getStyler().setXAxisLogarithmic(true);
-        chart.getStyler().setLegendPosition(Styler.LegendPosition.InsideNW);
-        chart.getStyler().setXAxisMin(massMearth[0]).setXAxisMax(massMearth[massMearth.length - 1]);
-        chart.getStyler().setYAxisDecimalPattern("0.0#");
+    public Figure chart(final ChartSize size) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (Curve c : curves) {
+            for (double v : c.values()) {
+                lo = Math.min(lo, v);
+                hi = Math.max(hi, v);
+            }
+        }
+        for (Planet pl : planets) {
+            lo = Math.min(lo, pl.radius() - pl.radiusErr());
+            hi = Math.max(hi, pl.radius() + pl.radiusErr());
+        }
+        if (!(hi > lo)) {
+            lo = 0;
+            hi = 2;
+        }
+        double span = hi - lo;
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), "Mass [M_earth]", "Radius [R_earth]");
+        double mMin = massMearth[0];
+        double mMax = massMearth[massMearth.length - 1];
+        ChartStyle.logAxis(f, c, true, mMin, mMax);
+        c.getStyler().setYAxisMin(Math.max(0, lo - 0.08 * span));
+        c.getStyler().setYAxisMax(hi + 0.12 * span);
         for (int i = 0; i < curves.size(); i++) {
-            XYSeries s = chart.addSeries(curves.get(i).label(), massMearth, curves.get(i).values());
-            ChartStyle.line(s, i);
+            ChartStyle.line(c, curves.get(i).label(), massMearth, curves.get(i).values(), ChartStyle.series(i).line(),
+                    true);
         }
         if (!planets.isEmpty()) {
-            int n = planets.size();
-            double[] x = new double[n];
-            double[] y = new double[n];
-            double[] xl = new double[n];
-            double[] xh = new double[n];
-            double[] yl = new double[n];
-            double[] yh = new double[n];
-            for (int i = 0; i < n; i++) {
-                Planet p = planets.get(i);
-                x[i] = p.mass();
-                y[i] = p.radius();
-                xl[i] = Math.max(massMearth[0], p.mass() - p.massErr());
-                xh[i] = Math.min(massMearth[massMearth.length - 1], p.mass() + p.massErr());
-                yl[i] = p.radius() - p.radiusErr();
-                yh[i] = p.radius() + p.radiusErr();
+            double[] x = new double[6 * planets.size()];
+            double[] y = new double[6 * planets.size()];
+            for (int k = 0; k < planets.size(); k++) {
+                Planet pl = planets.get(k);
+                double[] xs = {Math.max(mMin, pl.mass() - pl.massErr()), Math.min(mMax, pl.mass() + pl.massErr()),
+                    Double.NaN, pl.mass(), pl.mass(), Double.NaN};
+                double[] ys = {pl.radius(), pl.radius(), Double.NaN, pl.radius() - pl.radiusErr(),
+                    pl.radius() + pl.radiusErr(), Double.NaN};
+                System.arraycopy(xs, 0, x, 6 * k, 6);
+                System.arraycopy(ys, 0, y, 6 * k, 6);
+                x[6 * k + 2] = pl.mass();
+                x[6 * k + 5] = pl.mass();
             }
-            ErrorBars.horizontal(chart, "mass errors", x, xl, xh, y, Palette.REFERENCE);
-            ErrorBars.vertical(chart, "radius errors", x, y, yl, yh, Palette.REFERENCE);
-            XYSeries s = chart.addSeries("measured planets", x, y);
-            ChartStyle.points(s, 6);
-            for (Planet p : planets) {
-                chart.addAnnotation(new AnnotationText(p.label(), p.mass(), p.radius() + p.radiusErr() + 0.04, false));
-            }
+            ChartStyle.line(c, "1-sigma", x, y, LineStyle.solid(Palette.REFERENCE, 0.6), false);
+            ChartStyle.points(c, "measured planets", planets.stream().mapToDouble(Planet::mass).toArray(),
+                    planets.stream().mapToDouble(Planet::radius).toArray(), Marker.DIAMOND, Palette.AXIS, 1.2, true);
         }
-        return chart;
+        f.fill(c);
+        DirectLabels labels = new DirectLabels(f, c);
+        for (Planet pl : planets) {
+            double x = labels.x(pl.mass());
+            double y = labels.y(pl.radius() + pl.radiusErr()) - 5;
+            labels.putFirstFree(pl.label(), -1, x, y, x, labels.y(pl.radius() - pl.radiusErr()) + 5);
+        }
+        return f;
     }
+
 }

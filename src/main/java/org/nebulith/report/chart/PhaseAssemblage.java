@@ -3,26 +3,28 @@ package org.nebulith.report.chart;
 import java.util.List;
 
 import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
 
 /**
- * Phase assemblage: the amount of each condensed phase against temperature (decreasing to the
- * right), on a linear or logarithmic amount axis. A phase that is absent has amount 0 (or NaN);
- * on the log axis amounts below {@link #LOG_FLOOR_RATIO} times the largest amount are left out
- * (drawn as gaps) so that trace amounts do not flatten the figure.
+ * Phase assemblage: the share of each condensed phase in the condensate against temperature
+ * (decreasing to the right), on a logarithmic axis from {@link #AXIS_FLOOR} up, so that the first
+ * condensates and the minor phases stay visible beside the major ones. Each phase is one line with
+ * its colour, line pattern and markers along it; where there is room its name is written at its peak; the legend
+ * sits outside the plot.
  *
  * @param temperatureK the temperature grid [K]
- * @param phases       one curve per phase, amounts &ge; 0 (NaN = absent)
- * @param amountUnit   unit of the amounts, e.g. {@code mol per 10^6 Si}
+ * @param phases       one curve per phase, shares &ge; 0 (NaN = absent)
+ * @param axisTitle    title of the share axis with its unit, e.g. {@code Share of the condensate [wt%]}
+ * @param notes        lines written in a corner, may be empty
  */
-public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String amountUnit) {
+public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String axisTitle, List<String> notes) {
 
-    /** Lower limit of the log axis relative to the largest amount. */
-    public static final double LOG_FLOOR_RATIO = 1e-6;
+    /** Lowest value of the share axis (same unit as the curves). */
+    public static final double AXIS_FLOOR = 0.1;
 
     public PhaseAssemblage {
         temperatureK = temperatureK.clone();
         phases = List.copyOf(phases);
+        notes = List.copyOf(notes);
         Curve.checkGrid(temperatureK, "phase assemblage");
         for (Curve c : phases) {
             c.check(temperatureK.length, "phase assemblage", true, 0.0, Double.MAX_VALUE);
@@ -30,72 +32,61 @@ public record PhaseAssemblage(double[] temperatureK, List<Curve> phases, String 
     }
 
     /**
-     * @param size     figure size
-     * @param logScale whether the amount axis is logarithmic
+     * @param size figure size
      * @return the chart
      */
-    public XYChart chart(final ChartSize size, final boolean logScale) {
-        XYChart chart = ChartStyle.newXYChart(size, TemperatureAxis.TITLE, "Amount [" + amountUnit + "]");
-        double[] x = TemperatureAxis.plotted(temperatureK);
-        double max = largest();
-        double floor = logScale ? max * LOG_FLOOR_RATIO : 0.0;
+    public Figure chart(final ChartSize size) {
+        Figure f = new Figure(size.widthPt(), size.heightPt());
+        XYChart c = ChartStyle.chart(f, size.widthPt(), size.heightPt(), ChartStyle.TEMPERATURE_TITLE, axisTitle);
+        ChartStyle.temperatureAxis(f, c, temperatureK);
+        ChartStyle.logAxis(f, c, false, AXIS_FLOOR, Math.max(100, largest() * 1.05));
+        double[] x = new double[temperatureK.length];
+        for (int k = 0; k < x.length; k++) {
+            x[k] = -temperatureK[k];
+        }
+        double[][] shown = new double[phases.size()][];
         for (int i = 0; i < phases.size(); i++) {
-            double[] y = phases.get(i).values();
-            for (int k = 0; k < y.length; k++) {
-                if (logScale && !(y[k] >= floor && y[k] > 0)) {
-                    y[k] = Double.NaN;
-                }
+            double[] v = phases.get(i).values();
+            for (int k = 0; k < v.length; k++) {
+                v[k] = v[k] >= AXIS_FLOOR * 0.5 ? v[k] : Double.NaN;
             }
-            XYSeries s = chart.addSeries(phases.get(i).label(), x, y);
-            ChartStyle.line(s, i);
-        }
-        if (logScale) {
-            chart.getStyler().setYAxisLogarithmic(true);
-            if (max > 0) {
-                double smallest = smallestAbove(floor);
-                chart.getStyler().setYAxisMin(Math.pow(10, Math.floor(Math.log10(smallest))))
-                        .setYAxisMax(Math.pow(10, Math.ceil(Math.log10(max * 1.01))));
+            shown[i] = v;
+            ChartStyle.Series s = ChartStyle.series(i);
+            if (ChartStyle.line(c, phases.get(i).label() + " (line)", x, v, s.line(), false) != null) {
+                ChartStyle.legendEntry(c, phases.get(i).label(), s.line(), s.marker());
             }
-        } else {
-            chart.getStyler().setYAxisMin(0.0);
         }
-        if (logScale) {
-            chart.setCustomYAxisTickLabelsFormatter(PhaseAssemblage::decade);
-        } else {
-            chart.getStyler().setYAxisDecimalPattern("0.##");
+        f.fill(c);
+        DirectLabels labels = new DirectLabels(f, c);
+        double[][][] device = new double[phases.size()][][];
+        for (int i = 0; i < phases.size(); i++) {
+            device[i] = labels.device(x, shown[i]);
+            labels.free().line(device[i]);
         }
-        TemperatureAxis.relabel(chart, temperatureK);
-        return chart;
+        for (int i = 0; i < phases.size(); i++) {
+            ChartStyle.Series s = ChartStyle.series(i);
+            labels.markersAlong(phases.get(i).label() + " (markers)", device[i], s.marker(), s.colour(), 34,
+                    5 + 3.7 * i);
+        }
+        for (int i = 0; i < phases.size(); i++) {
+            labelAtPeak(labels, device[i], i);
+        }
+        labels.note(notes);
+        return f;
     }
 
-    /** Labels decades as powers of ten with superscript exponents (10³); other ticks stay blank. */
-    static String decade(final double y) {
-        double exponent = Math.log10(y);
-        long rounded = Math.round(exponent);
-        if (Math.abs(exponent - rounded) > 1e-9) {
-            return " ";
-        }
-        String superscripts = "\u2070\u00b9\u00b2\u00b3\u2074\u2075\u2076\u2077\u2078\u2079";
-        StringBuilder text = new StringBuilder("10");
-        if (rounded < 0) {
-            text.append('\u207b');
-        }
-        for (char c : Long.toString(Math.abs(rounded)).toCharArray()) {
-            text.append(superscripts.charAt(c - '0'));
-        }
-        return text.toString();
-    }
-
-    private double smallestAbove(final double floor) {
-        double min = Double.POSITIVE_INFINITY;
-        for (Curve c : phases) {
-            for (double v : c.values()) {
-                if (v >= floor && v > 0 && v < min) {
-                    min = v;
-                }
+    private void labelAtPeak(final DirectLabels labels, final double[][] dev, final int i) {
+        int peak = -1;
+        for (int k = 0; k < dev[1].length; k++) {
+            if (Double.isFinite(dev[1][k]) && (peak < 0 || dev[1][k] < dev[1][peak])) {
+                peak = k;
             }
         }
-        return min;
+        if (peak >= 0) {
+            double h = Fonts.capHeight(ChartStyle.NOTE_PT) + 1;
+            labels.putFirstFree(phases.get(i).label(), i, dev[0][peak], dev[1][peak] - 3 - h / 2, dev[0][peak],
+                    dev[1][peak] + 3 + h / 2);
+        }
     }
 
     private double largest() {

@@ -28,7 +28,11 @@ public final class HtmlReportWriter {
             "h1{font-size:1.6rem;margin-bottom:.2rem}h2{font-size:1.2rem;border-bottom:1px solid #ccc;"
                     + "padding-bottom:.2rem;margin-top:2rem}",
             ".meta{color:#555;font-size:.9rem}",
+            ".scroll{overflow-x:auto;max-width:100%}",
             "table{border-collapse:collapse;margin:.5rem 0 1rem;font-size:.85rem}",
+            "th.sortable{cursor:pointer}th.sortable:after{content:' \\2195';color:#999;font-size:.75em}",
+            "td{overflow-wrap:anywhere}",
+            "p,li,figcaption{overflow-wrap:anywhere}",
             "th,td{border:1px solid #ccc;padding:.2rem .5rem;text-align:left;vertical-align:top}",
             "th{background:#f0f0f0}td.num{text-align:right;font-variant-numeric:tabular-nums}",
             "caption{caption-side:top;text-align:left;font-weight:bold;padding:.2rem 0}",
@@ -49,7 +53,7 @@ public final class HtmlReportWriter {
         StringBuilder h = new StringBuilder(1 << 16);
         h.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
                 .append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; "
-                        + "img-src data:; style-src 'unsafe-inline'\">\n")
+                        + "img-src data:; style-src 'unsafe-inline'; script-src '" + TableSort.CSP_HASH + "'\">\n")
                 .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
                 .append("<meta name=\"generator\" content=\"nebulith ").append(Html.escape(report.toolVersion()))
                 .append("\">\n<title>").append(Html.escape(report.title())).append("</title>\n<style>\n")
@@ -67,6 +71,7 @@ public final class HtmlReportWriter {
             section(h, s);
         }
         runDetails(h, report);
+        h.append("<script>").append(TableSort.SCRIPT).append("</script>\n");
         h.append("</body>\n</html>\n");
         return h.toString();
     }
@@ -121,9 +126,10 @@ public final class HtmlReportWriter {
      * @param caption caption
      */
     static void table(final StringBuilder h, final Table table, final String caption) {
-        h.append("<table>\n<caption>").append(Html.escape(caption)).append("</caption>\n<thead><tr>");
+        h.append("<div class=\"scroll\"><table>\n<caption>").append(Html.escape(caption))
+                .append("</caption>\n<thead><tr>");
         for (String col : table.columns()) {
-            h.append("<th>").append(Html.escape(col)).append("</th>");
+            h.append("<th class=\"sortable\" title=\"click to sort\">").append(Html.escape(col)).append("</th>");
         }
         h.append("</tr></thead>\n<tbody>\n");
         List<List<Object>> rows = table.rows();
@@ -131,12 +137,18 @@ public final class HtmlReportWriter {
             h.append("<tr>");
             for (int c = 0; c < table.columns().size(); c++) {
                 Object v = rows.get(r).get(c);
-                String text = CellText.of(v, table.name(), table.columns().get(c), r + 1);
-                h.append(v instanceof Number ? "<td class=\"num\">" : "<td>").append(Html.escape(text)).append("</td>");
+                String text = CellText.forPeople(v, table.name(), table.columns().get(c), r + 1);
+                if (v instanceof Number) {
+                    h.append("<td class=\"num\" data-v=\"").append(Html.escape(CellText.of(v, table.name(),
+                            table.columns().get(c), r + 1))).append("\">");
+                } else {
+                    h.append("<td>");
+                }
+                h.append(Html.escape(text)).append("</td>");
             }
             h.append("</tr>\n");
         }
-        h.append("</tbody>\n</table>\n");
+        h.append("</tbody>\n</table></div>\n");
     }
 
     private static void runDetails(final StringBuilder h, final Report report) {

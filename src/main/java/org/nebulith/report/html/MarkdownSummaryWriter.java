@@ -70,7 +70,8 @@ public final class MarkdownSummaryWriter {
         for (int r = 0; r < rows.size(); r++) {
             m.append('|');
             for (int c = 0; c < table.columns().size(); c++) {
-                m.append(' ').append(dataCell(CellText.of(rows.get(r).get(c), table.name(), table.columns().get(c), r + 1)))
+                m.append(' ').append(dataCell(CellText.forPeople(rows.get(r).get(c), table.name(), table.columns().get(c),
+                        r + 1)))
                         .append(" |");
             }
             m.append('\n');

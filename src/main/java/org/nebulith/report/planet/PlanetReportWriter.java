@@ -3,6 +3,7 @@ package org.nebulith.report.planet;
 import java.time.Instant;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 import org.nebulith.composition.ElementAbundances;
@@ -10,6 +11,7 @@ import org.nebulith.disk.DiskModel;
 import org.nebulith.planet.PlanetComposition;
 import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
+import org.nebulith.format.Decimal;
 import org.nebulith.report.Cautions;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
@@ -51,19 +53,25 @@ public final class PlanetReportWriter {
      * @param settings     effective settings (key, value, origin)
      * @param inputs       the run's input files
      * @param sources      data sources (key, citation)
+     * @param errorBands   per zone, the 16th and 84th percentile offsets of the comparison's quantities from a
+     *                     Monte Carlo over the host's [X/H] errors ({@link PlanetCharts#SHOWN} then the core
+     *                     mass fraction), or null when no errors were given
+     * @param errorNote    how the bands were computed (draws, seed, errors), or null
+     * @param t50K         50% condensation temperatures of the host composition at 1e-4 bar [K], by element
      * @param ci           the CI-chondrite reference of the run (dust and comparisons)
      */
     public record RunData(String title, String command, String version, Instant started, String composition,
                           ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                           List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
-                          List<Report.Citation> sources, org.nebulith.composition.CiReference ci) {
-        /** Run data with the default CI reference. */
+                          List<Report.Citation> sources, Map<String, double[][]> errorBands, String errorNote,
+                          Map<org.nebulith.thermo.Element, Double> t50K, org.nebulith.composition.CiReference ci) {
+        /** Run data with the default CI reference, no error bars and no devolatilisation pattern. */
         public RunData(String title, String command, String version, Instant started, String composition,
                        ElementAbundances host, DiskModel disk, String chemistry, List<ZonePlanet> planets,
                        List<LocalCondensation.Local> scan, List<Report.Setting> settings, RunInputs inputs,
                        List<Report.Citation> sources) {
             this(title, command, version, started, composition, host, disk, chemistry, planets, scan, settings, inputs,
-                    sources, org.nebulith.composition.CiReference.DEFAULT);
+                    sources, null, null, null, org.nebulith.composition.CiReference.DEFAULT);
         }
     }
 
@@ -102,10 +110,14 @@ public final class PlanetReportWriter {
         run.writeCsv("zone-phases.csv", phases);
         run.writeCsv("radial-profile.csv", profile);
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
-        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets())
-                .chart(ChartSize.PAGE), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(), data.ci())
-                .chart(ChartSize.PAGE), run, "planet-comparison", formats);
+        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
+                data.host()).chart(ChartSize.PAGE.widthPt(), 370), run, "radial-map", formats);
+        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
+                PlanetCharts.bars(data.planets(), data.errorBands()), data.ci())
+                .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
+        ChartRenderer.Rendered pattern = data.t50K() == null || data.t50K().isEmpty() ? null
+                : ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(), data.t50K())
+                        .chart(ChartSize.PAGE), run, "devolatilisation", formats);
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
                 .paragraph("Composition: " + data.composition() + ".")
@@ -118,12 +130,30 @@ public final class PlanetReportWriter {
         }
         planets.keyTable(keyRows(data.planets()), "Key quantities per zone (all quantities: bulk-composition.csv)");
         report.section("Comparison with the host star and reference bodies")
-                .chart(compare, "Molar ratios and core mass fraction of the predicted planets beside the host star, "
-                        + "bulk Earth and CI chondrites (log scale).")
+                .chart(compare, "Molar ratios and core mass fraction of the predicted planets (circles) beside the "
+                        + "host star (star marker and dotted line) and reference bodies, one linear panel per quantity; "
+                        + "n/a: the body has no such value. " + (data.errorNote() == null
+                        ? "No [X/H] errors were given, so the planets have no error bars. "
+                        : "Error bars: " + data.errorNote() + ". ")
+                        + "References: " + PlanetCharts.REFERENCE_SOURCES + ".")
                 .table(comparison, "comparison.csv");
+        if (pattern != null) {
+            report.section("Devolatilisation pattern")
+                .chart(pattern, "Abundance of each element in the planets relative to the host star, both normalised "
+                        + "to " + PlanetCharts.NORMALISING.symbol() + " (a refractory element), against the element's "
+                        + "50% condensation temperature T50 computed by Nebulith for the host composition at 1e-4 bar "
+                        + "(equilibrium, 5 K grid bisected to 0.5 K); bulk Earth (McDonough 2003) over the solar "
+                        + "photosphere (Asplund et al. 2009) for comparison, plotted at the same T50. Values below "
+                        + "the axis are drawn at its bottom. The figure follows the form of Wang, Lineweaver & "
+                        + "Ireland (2019, Icarus 328, 287).");
+        }
         report.section("Radial structure of the disk")
-                .chart(radial, "Fraction of the heavy elements condensed, and molar Mg/Si and Fe/Si of the local "
-                        + "solids, against distance; feeding zones shaded, condensation fronts dashed.")
+                .chart(radial, "Top: midplane temperature (left axis) and pressure (right axis, log) of the disk. "
+                        + "Middle: molar Mg/Si and Fe/Si of the local equilibrium solids, host-star ratios dotted, "
+                        + "and the condensed share of the mass of all elements heavier than He (right axis). "
+                        + "Bottom: weight of each feeding zone, normalised to its peak. Dashed verticals: "
+                        + "condensation fronts, '+' where a phase appears and '\u2212' where it disappears "
+                        + "going outwards. Distance on a log scale, limited to the zones plus 30%.")
                 .table(phases, "zone-phases.csv: what each zone collected");
         Report.Section integration = report.section("Radial integration");
         for (ZonePlanet zp : data.planets()) {
@@ -138,6 +168,9 @@ public final class PlanetReportWriter {
                 "planet-comparison.pdf", "summary.md")) {
             report.outputFile(f);
         }
+        if (pattern != null) {
+            List.of("devolatilisation.png", "devolatilisation.svg", "devolatilisation.pdf").forEach(report::outputFile);
+        }
         report.finish(Instant.now());
         run.writeText("report.html", HtmlReportWriter.write(report));
         run.writeText("summary.md", MarkdownSummaryWriter.write(report));
@@ -150,19 +183,24 @@ public final class PlanetReportWriter {
             return zp.zoneName() + ": " + zp.planet().notice() + ".";
         }
         PlanetComposition c = zp.planet().require();
-        StringBuilder sb = new StringBuilder(zp.zoneName()).append(String.format(java.util.Locale.ROOT,
-                ": Mg/Si %.3f, Fe/Si %.3f (molar)", c.molarRatios().get("Mg_Si_molar"), c.molarRatios().get("Fe_Si_molar")));
+        StringBuilder sb = new StringBuilder(zp.zoneName()).append(": Mg/Si ")
+                .append(people(c.molarRatios().get("Mg_Si_molar"))).append(", Fe/Si ")
+                .append(people(c.molarRatios().get("Fe_Si_molar"))).append(" (molar)");
         if (c.hasRock()) {
-            sb.append(String.format(java.util.Locale.ROOT, ", core mass fraction %.3f", c.coreMassFraction()));
+            sb.append(", core mass fraction ").append(Decimal.forPeople(c.coreMassFraction()));
         }
         if (c.hasMgNumber()) {
-            sb.append(String.format(java.util.Locale.ROOT, ", mantle Mg# %.1f", c.oxides().mgNumber()));
+            sb.append(", mantle Mg# ").append(Decimal.forPeople(c.oxides().mgNumber()));
         }
         if (c.iceMassFraction() > 0) {
-            sb.append(String.format(java.util.Locale.ROOT, ", ice %.1f wt%%", 100 * c.iceMassFraction()));
+            sb.append(", ice ").append(Decimal.forPeople(100 * c.iceMassFraction())).append(" wt%");
         }
         sb.append('.');
         return sb.toString();
+    }
+
+    private static String people(Double v) {
+        return v == null || !Double.isFinite(v) ? "n/a" : Decimal.forPeople(v);
     }
 
     /**

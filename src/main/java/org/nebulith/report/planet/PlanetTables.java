@@ -15,7 +15,7 @@ import org.nebulith.planet.ReferenceBodies;
 import org.nebulith.planet.ZoneNotices;
 import org.nebulith.planet.ZonePlanet;
 import org.nebulith.planet.LocalSolids;
-import org.nebulith.files.Table;
+import org.nebulith.report.FormulaText;
 import org.nebulith.files.Table;
 import org.nebulith.thermo.PhaseNames;
 import org.nebulith.zones.LocalCondensation;
@@ -141,8 +141,8 @@ public final class PlanetTables {
                 String phase = PhaseNames.display(parts[0]);
                 String member = parts.length > 1 ? PhaseNames.display(parts[1]) : phase;
                 String kind = p.kind().name().toLowerCase(java.util.Locale.ROOT);
-                String key = phase + "|" + member + "|" + p.formula().notation() + "|" + kind;
-                rows.computeIfAbsent(key, k -> new PhaseRow(phase, member, p.formula().notation(), kind))
+                String key = phase + "|" + member + "|" + FormulaText.conventional(p.formula()) + "|" + kind;
+                rows.computeIfAbsent(key, k -> new PhaseRow(phase, member, FormulaText.conventional(p.formula()), kind))
                         .add(parts[0], p.moles(), p.massGrams());
             }
             for (PhaseRow r : rows.values()) {

@@ -4,6 +4,7 @@ import java.time.Instant;
 import java.util.List;
 
 import org.nebulith.condensation.CondensationSequence;
+import org.nebulith.format.Decimal;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
 import org.nebulith.report.html.HtmlReportWriter;
@@ -44,19 +45,22 @@ public final class SequenceReport {
                              SequenceCharts.Charts charts, Meta meta) {
         Report report = new Report("Nebulith condensation sequence", "nebulith sequence", meta.version(), meta.started());
         String mode = seq.settings().isFractional()
-                ? "removal fraction " + seq.settings().removalFraction() + " (that fraction of each step's new condensate withdrawn from further reaction)"
+                ? "removal fraction " + Decimal.format(seq.settings().removalFraction()) + " (that fraction of each step's new condensate withdrawn from further reaction)"
                 : "equilibrium condensation (all condensates keep reacting)";
         report.section("Scenario")
                 .paragraph("Composition: " + meta.composition() + ".")
                 .paragraph("Chemistry: " + meta.chemistry() + ".")
                 .paragraph("Pressure: " + meta.pressure() + "; " + mode + "; " + seq.steps().size()
-                        + " temperatures from " + seq.settings().tMaxK() + " to " + seq.settings().tMinK() + " K.");
+                        + " temperatures from " + Decimal.format(seq.settings().tMaxK()) + " to "
+                        + Decimal.format(seq.settings().tMinK()) + " K.");
         report.section("Condensation temperatures")
                 .keyTable(tables.condensationTemperatures(), SequenceTables.TEMPERATURES
                         + ": 50% condensation temperature, host phase at T50 and onset of each element")
-                .chart(charts.curves(), "Fraction of each element condensed against temperature (cooling to the right).");
+                .chart(charts.curves(), "Fraction of each element condensed (in solids, withdrawn or reacting) against "
+                        + "temperature, cooling to the right; rings mark the 50% condensation temperatures (T50), "
+                        + "markers and line patterns tell the elements apart without colour.");
         report.section("Phases")
-                .chart(charts.assemblage(), "Amount of the most abundant condensed phases against temperature (log scale).")
+                .chart(charts.assemblage(), charts.assemblageCaption())
                 .table(tables.phaseAppearance(), SequenceTables.APPEARANCE + ": appearance and disappearance on cooling");
         meta.settings().forEach(s -> report.setting(s.key(), s.value(), s.origin()));
         meta.cautions().forEach(report::caution);

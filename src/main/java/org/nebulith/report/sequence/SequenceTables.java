@@ -207,12 +207,20 @@ public final class SequenceTables {
                 "condensed_fraction_at_T_min", "host_data_id");
         SequenceStep last = seq.steps().get(seq.steps().size() - 1);
         for (ElementCondensation ec : seq.condensationTemperatures()) {
-            t.row(ec.element().symbol(), ec.t50K().isPresent() ? ec.t50K().getAsDouble() : null,
+            t.row(ec.element().symbol(), ec.t50K().isPresent() ? bracket(ec.t50K().getAsDouble()) : null,
                     ec.hostPhase().isEmpty() ? null : PhaseNames.display(ec.hostPhase()),
-                    ec.onsetK().isPresent() ? ec.onsetK().getAsDouble() : null, last.condensedFraction(ec.element()),
+                    ec.onsetK().isPresent() ? bracket(ec.onsetK().getAsDouble()) : null, last.condensedFraction(ec.element()),
                     ec.hostPhase().isEmpty() ? null : ec.hostPhase());
         }
         return t;
+    }
+
+    /**
+     * @param kelvin a temperature found by bisection
+     * @return it rounded to the decimals of the bisection bracket (its resolution)
+     */
+    private double bracket(double kelvin) {
+        return Double.parseDouble(org.nebulith.format.Decimal.toResolution(kelvin, seq.settings().refineK()));
     }
 
     /**

@@ -161,6 +161,7 @@ public final class LocalSurvey {
 
     private static Result compute(Request request, EstimatorCache estimators, RunInputs inputs,
                                   LongFunction<Progress> progress, Log log, RunFolder run) throws IOException {
+        java.time.Instant started = java.time.Instant.now();
         CatalogueCheck check = CatalogueCheck.run(request.catalogue(), request.settings(), estimators);
         reportProblems(request, check, log);
         Path folder = run.workingFolder();
@@ -226,8 +227,9 @@ public final class LocalSurvey {
                     counter.runDraws);
             run.writeText(NOTES, notes);
             rename(starsPartial, run.file(StarsTable.FILE), run.target().resolve(StarsTable.FILE));
-            byte[] png = SurveyChart.write(partial, run);
-            SurveyReport.write(run, notes, png, run.file(StarsTable.FILE), inputs);
+            byte[] png = SurveyChart.write(partial, request.catalogue(), run);
+            SurveyReport.write(new SurveyReport.Run(run, request, started, notes, png, run.file(StarsTable.FILE),
+                    partial, inputs));
             rename(failuresPartial, run.file(SurveyFailures.FILE), run.target().resolve(SurveyFailures.FILE));
             rename(partial, run.file(SurveyCsv.FILE), run.target().resolve(SurveyCsv.FILE));
             bar.advance(REPORT_STEPS);

@@ -2,7 +2,6 @@ package org.nebulith.report.chart;
 
 import java.util.Map;
 
-import org.knowm.xchart.XYChart;
 
 /** Public access to the invented demo charts for tests in other packages. */
 public final class ChartFixtures {
@@ -11,7 +10,7 @@ public final class ChartFixtures {
     }
 
     /** @return every chart kind with invented demo data, by base file name */
-    public static Map<String, XYChart> all() {
+    public static Map<String, Figure> all() {
         return ChartSamples.all();
     }
 }

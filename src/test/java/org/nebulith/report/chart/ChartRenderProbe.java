@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.Map;
 
-import org.knowm.xchart.XYChart;
 import org.nebulith.files.AtomicOutput;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
@@ -21,7 +20,7 @@ public final class ChartRenderProbe {
         Path target = Path.of(args[0]);
         try (RunFolder run = AtomicOutput.openRunFolder(target, true, new RunInputs())) {
             for (int pass = 0; pass < 2; pass++) {
-                for (Map.Entry<String, XYChart> e : ChartSamples.all().entrySet()) {
+                for (Map.Entry<String, Figure> e : ChartSamples.all().entrySet()) {
                     for (ChartFormat f : ChartFormat.values()) {
                         long t0 = System.nanoTime();
                         ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(), EnumSet.of(f));

@@ -19,12 +19,15 @@ import java.util.regex.Pattern;
  * of every command.
  */
 public final class ChromiumProbe {
-    private static final Pattern PROBE = Pattern.compile("data-probe=\"images=(\\d+);bad=(\\d+);errors=(\\d+)\"");
+    private static final Pattern PROBE = Pattern.compile(
+            "data-probe=\"images=(\\d+);bad=(\\d+);errors=(\\d+);overflow=(-?\\d+)\"");
     private static final String PROBE_SCRIPT = "<script>var probeErrors=0;"
             + "window.addEventListener('error',function(){probeErrors++;},true);"
             + "window.addEventListener('load',function(){var im=document.images,bad=0;"
             + "for(var i=0;i<im.length;i++){if(!(im[i].complete&&im[i].naturalWidth>0)){bad++;}}"
-            + "document.body.setAttribute('data-probe','images='+im.length+';bad='+bad+';errors='+probeErrors);"
+            + "var de=document.documentElement;"
+            + "document.body.setAttribute('data-probe','images='+im.length+';bad='+bad+';errors='+probeErrors"
+            + "+';overflow='+(de.scrollWidth-de.clientWidth));"
             + "});</script>";
 
     /**
@@ -32,8 +35,10 @@ public final class ChromiumProbe {
      * @param bad      images not decoded
      * @param errors   errors raised while loading
      * @param console  console lines Chromium logged
+     * @param overflow {@code document.documentElement.scrollWidth - clientWidth} [CSS px]: &gt; 0 means the
+     *                 page scrolls sideways
      */
-    public record Result(int images, int bad, int errors, List<String> console) {
+    public record Result(int images, int bad, int errors, List<String> console, int overflow) {
     }
 
     private ChromiumProbe() {
@@ -52,8 +57,13 @@ public final class ChromiumProbe {
     public static Result open(Path report, Path work) throws IOException, InterruptedException {
         Path chromium = chromium().orElseThrow();
         String html = Files.readString(report, StandardCharsets.UTF_8);
+        // the probe's own script needs 'unsafe-inline', which a hash source would disable: replace the policy's
+        // script source (the page's own script then runs as well)
         String probe = html.replace("<head>", "<head>\n" + PROBE_SCRIPT)
-                .replace("default-src 'none';", "default-src 'none'; script-src 'unsafe-inline';");
+                .replaceAll("script-src '[^']*'", "script-src 'unsafe-inline'");
+        if (!probe.contains("script-src")) {
+            probe = probe.replace("default-src 'none';", "default-src 'none'; script-src 'unsafe-inline';");
+        }
         Path page = Files.writeString(work.resolve("probe-" + System.nanoTime() + ".html"), probe);
         Path profile = Files.createTempDirectory(work, "profile");
         Path dom = work.resolve(page.getFileName() + ".dom");
@@ -61,7 +71,7 @@ public final class ChromiumProbe {
         Process p = new ProcessBuilder(chromium.toString(), "--headless", "--no-sandbox", "--disable-gpu",
                 "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
                 "--disable-sync", "--disable-extensions", "--user-data-dir=" + profile, "--enable-logging=stderr",
-                "--v=0", "--virtual-time-budget=5000", "--dump-dom", page.toUri().toString())
+                "--v=0", "--window-size=1024,768", "--virtual-time-budget=5000", "--dump-dom", page.toUri().toString())
                 .redirectOutput(dom.toFile()).redirectError(log.toFile()).start();
         try {
             assertTrue(p.waitFor(90, TimeUnit.SECONDS), "chromium finished");
@@ -78,6 +88,6 @@ public final class ChromiumProbe {
             }
         }
         return new Result(Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2)), Integer.parseInt(m.group(3)),
-                console);
+                console, Integer.parseInt(m.group(4)));
     }
 }

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.knowm.xchart.XYChart;
+import org.nebulith.report.chart.Figure;
 import org.nebulith.files.AtomicOutput;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
@@ -46,11 +46,13 @@ class HtmlReportChromiumTest {
         writeReport(target, new RunInputs().add(input, "preset"));
 
         String html = Files.readString(target.resolve("report.html"));
-        assertFalse(html.contains("<script"), "the report itself has no script");
+        assertEquals(1, html.split("<script", -1).length - 1, "the report's only script is the table sort");
+        assertTrue(html.contains("script-src 'sha256-"), "the script is allowed by its hash only");
         assertFalse(Pattern.compile("src=\"(?!data:)").matcher(html).find(), "every image is embedded");
         assertTrue(html.contains(RunInputs.sha256(input)), "input checksum listed");
         ChromiumProbe.Result result = ChromiumProbe.open(target.resolve("report.html"), dir);
-        assertEquals(6, result.images(), "images in the page");
+        assertEquals(ChartFixtures.all().size(), result.images(), "images in the page");
+        assertTrue(result.overflow() <= 0, "no horizontal overflow: " + result.overflow() + " px");
         assertEquals(0, result.bad(), "images not decoded");
         assertEquals(0, result.errors(), "errors raised in the page");
         assertEquals(List.of(), result.console(), "console messages");
@@ -61,7 +63,7 @@ class HtmlReportChromiumTest {
                 Instant.parse("2026-01-01T00:00:00Z"));
         try (RunFolder run = AtomicOutput.openRunFolder(target, false, inputs)) {
             Report.Section charts = report.section("Charts");
-            for (Map.Entry<String, XYChart> e : ChartFixtures.all().entrySet()) {
+            for (Map.Entry<String, Figure> e : ChartFixtures.all().entrySet()) {
                 ChartRenderer.Rendered r = ChartRenderer.write(e.getValue(), run, e.getKey(),
                         EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
                 charts.chart(r, e.getKey().replace('-', ' ') + " (invented demo data)");

@@ -26,7 +26,7 @@ class ReportWritersTest {
         assertTrue(html.contains("&lt;b&gt;not bold&lt;/b&gt;"));
         assertTrue(html.contains("nebulith 0.1.0 \u00b7 nebulith sequence \u00b7 started 2026-01-01 00:00:00 UTC"
                 + " \u00b7 run time 65.0 s"), html);
-        assertTrue(html.contains("<td class=\"num\">1653.2</td>"));
+        assertTrue(html.contains("<td class=\"num\" data-v=\"1653.2\">1653.2</td>"), "people text, full value for sorting");
         assertTrue(html.contains("Assumptions and cautions") && html.contains("No silicate liquids."));
     }
 
