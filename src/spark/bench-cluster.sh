@@ -20,13 +20,15 @@ mkdir -p "$H/jars"
 tr ':' '\n' < "$W/cp.txt" | grep '\.jar$' | grep -v '/nebulith' | while read -r j; do ln -sf "$j" "$H/jars/"; done
 export SPARK_HOME=$H SPARK_SCALA_VERSION=2.13 SPARK_LOCAL_IP=127.0.0.1 SPARK_LOG_DIR=$W
 spark() { java $FLAGS -Xmx768m -cp "$H/jars/*" "$@"; }
+# a daemon in the background whose pid ($!) is the JVM's own, so that the trap below stops it
+daemon() { (exec java $FLAGS -Xmx768m -cp "$H/jars/*" "$@") & }
 free_port() { python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1])'; }
 MPORT=$(free_port)
-spark org.apache.spark.deploy.master.Master --host 127.0.0.1 --port "$MPORT" --webui-port "$(free_port)" > "$W/master.log" 2>&1 &
+daemon org.apache.spark.deploy.master.Master --host 127.0.0.1 --port "$MPORT" --webui-port "$(free_port)" > "$W/master.log" 2>&1
 MASTER=$!
 until grep -q "I have been elected leader" "$W/master.log"; do sleep 1; done
-spark org.apache.spark.deploy.worker.Worker "spark://127.0.0.1:$MPORT" --host 127.0.0.1 --cores 2 --memory 1536m \
-  --webui-port "$(free_port)" --work-dir "$W/work" > "$W/worker.log" 2>&1 &
+daemon org.apache.spark.deploy.worker.Worker "spark://127.0.0.1:$MPORT" --host 127.0.0.1 --cores 2 --memory 1536m \
+  --webui-port "$(free_port)" --work-dir "$W/work" > "$W/worker.log" 2>&1
 WORKER=$!
 trap 'kill $WORKER $MASTER 2>/dev/null || true; pkill -f "CoarseGrainedExecutorBackend.*$MPORT" 2>/dev/null || true' EXIT
 until grep -q "Successfully registered with master" "$W/worker.log"; do sleep 1; done
