@@ -52,8 +52,9 @@ final class CommandTimer {
         try {
             scratch = Files.createTempDirectory("nebulith-bench-");
             Path folder = scratch.resolve("run");
-            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                    "-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"), Main.class.getName(),
+            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
+            cmd.addAll(QuickStart.jvmFlags(command));
+            cmd.addAll(List.of("-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"), Main.class.getName(),
                     "--quiet", command, "--out", folder.toString()));
             long t0 = System.nanoTime();
             Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(scratch.resolve("log")
