@@ -16,6 +16,7 @@ import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.SystemSpec;
 import org.nebulith.equilibrium.WarmStart;
 import org.nebulith.errors.InputException;
+import org.nebulith.survey.Percentiles;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -188,10 +189,7 @@ public final class BenchCommand extends RunCommand {
     private static double percentile(final double[] v, final double q) {
         double[] s = v.clone();
         Arrays.sort(s);
-        double pos = q * (s.length - 1);
-        int lo = (int) Math.floor(pos);
-        int hi = Math.min(s.length - 1, lo + 1);
-        return s[lo] + (pos - lo) * (s[hi] - s[lo]);
+        return Percentiles.ofSorted(s, q);
     }
 
     private static String fmt(final double v) {

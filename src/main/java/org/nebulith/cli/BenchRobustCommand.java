@@ -16,6 +16,7 @@ import org.nebulith.stress.StressOutcome;
 import org.nebulith.stress.StressSolve;
 import org.nebulith.stress.StressState;
 import org.nebulith.stress.StressStates;
+import org.nebulith.survey.Percentiles;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -207,15 +208,10 @@ public final class BenchRobustCommand extends RunCommand {
         ps.println("note: wall-clock figures on a shared machine; cold starts include the continuation from 4500 K");
     }
 
+    /** @param v at least one value, any order @param q probability @return the percentile ({@link Percentiles}) */
     private static double pct(final double[] v, final double q) {
-        if (v.length == 0) {
-            return Double.NaN;
-        }
         double[] s = v.clone();
         Arrays.sort(s);
-        double pos = q * (s.length - 1);
-        int lo = (int) Math.floor(pos);
-        int hi = Math.min(s.length - 1, lo + 1);
-        return s[lo] + (pos - lo) * (s[hi] - s[lo]);
+        return Percentiles.ofSorted(s, q);
     }
 }
