@@ -61,8 +61,7 @@ public final class Main {
         } catch (RuntimeException e) {
             return FailureReport.report(e, errWriter, verbose);
         }
-        CommandLine cli = commandLine(out, err, errWriter);
-        extra.forEach(cli::addSubcommand);
+        CommandLine cli = commandLine(out, err, errWriter, NebulithCommand.SUBCOMMANDS, extra, List.of(args));
         cli.setDefaultValueProvider(defaults);
         cli.setParameterExceptionHandler((ex, arguments) -> parameterFailure(ex, defaults, errWriter, verbose));
         cli.setExecutionExceptionHandler((ex, line, parsed) ->
@@ -81,12 +80,46 @@ public final class Main {
      * @return the configured command line (no preset)
      */
     static CommandLine commandLine(final PrintStream out, final PrintStream err, final PrintWriter errWriter) {
+        return commandLine(out, err, errWriter, NebulithCommand.SUBCOMMANDS, List.of(), List.of());
+    }
+
+    /**
+     * @param all   the sub-command classes
+     * @param extra additional sub-command objects (always registered)
+     * @param args  the arguments: when the first one that is not an option names a sub-command other
+     *              than help and completion, only that one is registered (the others' models cost a
+     *              fresh JVM about 0.4 s); otherwise all are
+     */
+    static CommandLine commandLine(final PrintStream out, final PrintStream err, final PrintWriter errWriter,
+                                   final List<Class<?>> all, final List<Object> extra, final List<String> args) {
         CommandLine cli = new CommandLine(new NebulithCommand(out, err));
+        Class<?> only = named(all, args);
+        for (Class<?> c : all) {
+            if (only == null || c == only) {
+                cli.addSubcommand(c);
+            }
+        }
+        extra.forEach(cli::addSubcommand);
         cli.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cli.setErr(errWriter);
         cli.setCaseInsensitiveEnumValuesAllowed(true);
         cli.setAbbreviatedOptionsAllowed(false);
         return cli;
+    }
+
+    /** @return the sub-command the arguments name, or null for help, completion or none */
+    private static Class<?> named(final List<Class<?>> all, final List<String> args) {
+        String first = args.stream().filter(a -> !a.startsWith("-")).findFirst().orElse(null);
+        if (first == null || first.equals("help") || first.equals("completion")) {
+            return null;
+        }
+        for (Class<?> c : all) {
+            CommandLine.Command a = c.getAnnotation(CommandLine.Command.class);
+            if (a != null && a.name().equals(first)) {
+                return c;
+            }
+        }
+        return null;
     }
 
     private static int parameterFailure(final CommandLine.ParameterException ex, final PresetDefaults defaults,

@@ -10,7 +10,7 @@ import picocli.CommandLine.Spec;
 
 /**
  * The top-level {@code nebulith} command: global options and the list of sub-commands.
- * A new sub-command is added to {@code subcommands} below (see {@link RunCommand}).
+ * A new sub-command is added to {@link #SUBCOMMANDS} below (see {@link RunCommand}).
  */
 @Command(name = "nebulith",
         mixinStandardHelpOptions = true,
@@ -20,21 +20,6 @@ import picocli.CommandLine.Spec;
         description = {
             "What rocky planets are made of, from a star's abundances and a disk model.",
             "Equilibrium condensation, feeding zones, bulk planet composition, reports and charts.",
-        },
-        subcommands = {
-            PointCommand.class,
-            SequenceCommand.class,
-            PlanetCommand.class,
-            SurveyCommand.class,
-            InteriorCommand.class,
-            MeasuredCommand.class,
-            SurveyBenchCommand.class,
-            BenchCommand.class,
-            BenchRobustCommand.class,
-            PresetsCommand.class,
-            DataAuditCommand.class,
-            CompletionCommand.class,
-            CommandLine.HelpCommand.class,
         },
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
@@ -51,6 +36,26 @@ import picocli.CommandLine.Spec;
             "  source <(nebulith completion)   shell completion for bash or zsh",
         })
 public final class NebulithCommand implements Runnable {
+
+    /**
+     * The sub-commands, in the order of the usage help. {@link Main} registers only the one a run
+     * names (building picocli's model of all of them costs a fresh JVM about 0.4 s), all of them
+     * for help, completion and an unknown or missing command.
+     */
+    static final java.util.List<Class<?>> SUBCOMMANDS = java.util.List.of(
+            PointCommand.class,
+            SequenceCommand.class,
+            PlanetCommand.class,
+            SurveyCommand.class,
+            InteriorCommand.class,
+            MeasuredCommand.class,
+            SurveyBenchCommand.class,
+            BenchCommand.class,
+            BenchRobustCommand.class,
+            PresetsCommand.class,
+            DataAuditCommand.class,
+            CompletionCommand.class,
+            CommandLine.HelpCommand.class);
 
     @Mixin
     private OutputLevelOptions outputLevel;

@@ -21,6 +21,7 @@ import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.report.SourceList;
+import org.nebulith.report.Alongside;
 import org.nebulith.report.planet.PlanetCharts;
 import org.nebulith.survey.HostMonteCarlo;
 import org.nebulith.thermo.Element;
@@ -154,11 +155,15 @@ public final class PlanetCommand extends RunCommand {
         String task = "planet (" + zoneList.size() + (zoneList.size() == 1 ? " zone" : " zones")
                 + ", radial profile, report)";
         try (Progress progress = context.progress(task, PlanetFormation.steps(zoneList, profilePoints) + 1L)) {
-            PlanetFormation.Formation result = formation.run(gas, diskModel, zoneList, profilePoints, progress);
+            // the host's condensation temperatures do not depend on the disk: the second core computes them
+            Alongside<Map<Element, Double>> hostSequence = Alongside.start("host T50", () -> hostT50(spec, gas));
+            PlanetFormation.Formation[] formed = new PlanetFormation.Formation[1];
+            Map<Element, Double> t50 = hostSequence.joinAfter(
+                    () -> formed[0] = formation.run(gas, diskModel, zoneList, profilePoints, progress));
+            PlanetFormation.Formation result = formed[0];
             planets = result.planets();
             Map<String, double[][]> bands = errors == null ? null : HostMonteCarlo.offsets(gas, errors, diskModel,
                     zoneList, PlanetCharts.quantityNames(), errorDraws, seed);
-            Map<Element, Double> t50 = hostT50(spec, gas);
             String errorNote = errors == null ? null
                     : errorDraws + " seeded draws (seed " + seed + ") of the host's [X/H] with 1-sigma errors "
                     + errors + " dex (other elements held), 16th to 84th percentile, run through the survey's planet "

@@ -17,6 +17,7 @@ import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.PressurePathReader;
 import org.nebulith.condensation.SequenceRunner;
 import org.nebulith.condensation.SequenceSettings;
+import org.nebulith.report.Alongside;
 import org.nebulith.report.sequence.SequenceCautions;
 import org.nebulith.report.sequence.SequenceCharts;
 import org.nebulith.report.sequence.SequenceReport;
@@ -163,11 +164,15 @@ public final class SequenceCommand extends RunCommand {
     private Path write(RunFolder run, RunContext context, SystemSpec spec, PressurePath path, CondensationSequence seq,
                        List<String> cautions, double elapsed) {
         SequenceTables tables = new SequenceTables(seq);
-        run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
-        run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
-        run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
-        run.writeCsv(SequenceTables.APPEARANCE, tables.phaseAppearance());
-        SequenceCharts.Charts charts = SequenceCharts.write(run, seq, tables, describe(path));
+        // the charts (on two threads of their own) and the tables are independent: the second core draws
+        Alongside<SequenceCharts.Charts> drawing = Alongside.start("sequence charts",
+                () -> SequenceCharts.write(run, seq, tables, describe(path)));
+        SequenceCharts.Charts charts = drawing.joinAfter(() -> {
+            run.writeCsv(SequenceTables.SEQUENCE, tables.sequence());
+            run.writeCsv(SequenceTables.FRACTIONS, tables.elementFractions());
+            run.writeCsv(SequenceTables.TEMPERATURES, tables.condensationTemperatures());
+            run.writeCsv(SequenceTables.APPEARANCE, tables.phaseAppearance());
+        });
         String chartsNote = "Charts: " + String.join(", ", charts.files()) + "; report: report.html";
         run.writeText(SequenceNotes.FILE, SequenceNotes.text(seq, tables, new SequenceNotes.Context(
                 context.toolVersion(), context.started().toString(), elapsed, settingLines(context),

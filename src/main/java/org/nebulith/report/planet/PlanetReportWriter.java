@@ -16,6 +16,7 @@ import org.nebulith.report.Cautions;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
 import org.nebulith.files.Table;
+import org.nebulith.report.Alongside;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;
@@ -105,19 +106,28 @@ public final class PlanetReportWriter {
         Table comparison = PlanetTables.comparison(data.planets(), data.host(), data.ci());
         Table phases = PlanetTables.zonePhases(data.planets());
         Table profile = PlanetTables.radialProfile(data.scan());
-        run.writeCsv("bulk-composition.csv", bulk);
-        run.writeCsv("comparison.csv", comparison);
-        run.writeCsv("zone-phases.csv", phases);
-        run.writeCsv("radial-profile.csv", profile);
         Set<ChartFormat> formats = EnumSet.allOf(ChartFormat.class);
-        ChartRenderer.Rendered radial = ChartRenderer.write(PlanetCharts.radialMap(data.scan(), data.planets(),
-                data.host()).chart(ChartSize.PAGE.widthPt(), 370), run, "radial-map", formats);
-        ChartRenderer.Rendered compare = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
-                PlanetCharts.bars(data.planets(), data.errorBands()), data.ci())
-                .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
-        ChartRenderer.Rendered pattern = data.t50K() == null || data.t50K().isEmpty() ? null
-                : ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(), data.t50K())
-                        .chart(ChartSize.PAGE), run, "devolatilisation", formats);
+        // the three charts and the tables are independent: two charts are drawn on threads of their own
+        Alongside<ChartRenderer.Rendered> radialDrawing = Alongside.start("radial map", () -> ChartRenderer.write(
+                PlanetCharts.radialMap(data.scan(), data.planets(), data.host()).chart(ChartSize.PAGE.widthPt(), 370),
+                run, "radial-map", formats));
+        Alongside<ChartRenderer.Rendered> patternDrawing = Alongside.start("devolatilisation", () ->
+                data.t50K() == null || data.t50K().isEmpty() ? null
+                        : ChartRenderer.write(PlanetCharts.devolatilisation(data.planets(), data.host(), data.t50K())
+                                .chart(ChartSize.PAGE), run, "devolatilisation", formats));
+        ChartRenderer.Rendered[] drawn = new ChartRenderer.Rendered[1];
+        Runnable tablesAndComparison = () -> {
+            run.writeCsv("bulk-composition.csv", bulk);
+            run.writeCsv("comparison.csv", comparison);
+            run.writeCsv("zone-phases.csv", phases);
+            run.writeCsv("radial-profile.csv", profile);
+            drawn[0] = ChartRenderer.write(PlanetCharts.comparison(data.planets(), data.host(),
+                    PlanetCharts.bars(data.planets(), data.errorBands()), data.ci())
+                    .chart(ChartSize.PAGE.widthPt()), run, "planet-comparison", formats);
+        };
+        ChartRenderer.Rendered pattern = patternDrawing.joinAfter(() -> radialDrawing.joinAfter(tablesAndComparison));
+        ChartRenderer.Rendered radial = radialDrawing.join();
+        ChartRenderer.Rendered compare = drawn[0];
         Report report = new Report(data.title(), data.command(), data.version(), data.started());
         report.section("Scenario")
                 .paragraph("Composition: " + data.composition() + ".")

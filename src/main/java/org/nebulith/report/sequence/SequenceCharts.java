@@ -12,6 +12,7 @@ import org.nebulith.condensation.ElementCondensation;
 import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.format.Decimal;
+import org.nebulith.report.Alongside;
 import org.nebulith.report.PhaseLabels;
 import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;
@@ -61,14 +62,15 @@ public final class SequenceCharts {
         double[] t = temperatures(seq);
         List<String> notes = notes(seq, pressureNote);
         List<Element> shown = shown(seq);
-        ChartRenderer.Rendered curves = ChartRenderer.write(new CondensationCurves(t, curves(seq, shown),
-                t50(seq, shown), notes).chart(ChartSize.COLUMN_TALL), run, "condensation-curves",
-                EnumSet.allOf(ChartFormat.class));
+        Alongside<ChartRenderer.Rendered> curves = Alongside.start("condensation curves", () ->
+                ChartRenderer.write(new CondensationCurves(t, curves(seq, shown), t50(seq, shown), notes)
+                        .chart(ChartSize.COLUMN_TALL), run, "condensation-curves", EnumSet.allOf(ChartFormat.class)));
         Assemblage a = assemblage(seq);
-        ChartRenderer.Rendered assemblage = ChartRenderer.write(new PhaseAssemblage(t, a.curves(),
-                "Share of the condensate [wt%]", notes).chart(ChartSize.PAGE), run, "phase-assemblage",
-                EnumSet.allOf(ChartFormat.class));
-        return new Charts(curves, assemblage, caption(seq, a));
+        ChartRenderer.Rendered[] assemblage = new ChartRenderer.Rendered[1];
+        ChartRenderer.Rendered c = curves.joinAfter(() -> assemblage[0] = ChartRenderer.write(new PhaseAssemblage(t,
+                a.curves(), "Share of the condensate [wt%]", notes).chart(ChartSize.PAGE), run, "phase-assemblage",
+                EnumSet.allOf(ChartFormat.class)));
+        return new Charts(c, assemblage[0], caption(seq, a));
     }
 
     private static List<String> notes(CondensationSequence seq, String pressureNote) {
