@@ -21,7 +21,7 @@ import org.nebulith.equilibrium.ConvergenceException;
 import org.nebulith.errors.Messages;
 import org.nebulith.errors.NumericalException;
 import org.nebulith.report.SourceList;
-import org.nebulith.report.Alongside;
+import org.nebulith.progress.Alongside;
 import org.nebulith.report.planet.PlanetCharts;
 import org.nebulith.survey.HostMonteCarlo;
 import org.nebulith.thermo.Element;

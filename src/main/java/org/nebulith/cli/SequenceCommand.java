@@ -17,7 +17,7 @@ import org.nebulith.condensation.PressurePath;
 import org.nebulith.condensation.PressurePathReader;
 import org.nebulith.condensation.SequenceRunner;
 import org.nebulith.condensation.SequenceSettings;
-import org.nebulith.report.Alongside;
+import org.nebulith.progress.Alongside;
 import org.nebulith.report.sequence.SequenceCautions;
 import org.nebulith.report.sequence.SequenceCharts;
 import org.nebulith.report.sequence.SequenceReport;

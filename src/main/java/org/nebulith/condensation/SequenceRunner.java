@@ -8,6 +8,7 @@ import org.nebulith.equilibrium.EquilibriumProblem;
 import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.WarmStart;
+import org.nebulith.progress.Alongside;
 import org.nebulith.progress.Progress;
 
 /**
@@ -22,11 +23,28 @@ public final class SequenceRunner {
     /** Smallest reacting total kept in withdrawal mode, relative to the element's input total. */
     public static final double REACTING_FLOOR = 1e-14;
 
+    /**
+     * Equilibrium runs of at least this many grid states solve the cooler half of the grid on a second
+     * thread, from a cold start at its hottest state (the fixed split keeps results independent of the
+     * number of cores; they differ from one unbroken warm-started path by the solver's tolerance).
+     */
+    static final int SPLIT_MIN_POINTS = 400;
     private final EquilibriumSolver solver;
+    private final int splitMinPoints;
 
     /** @param solver the equilibrium solver */
     public SequenceRunner(EquilibriumSolver solver) {
+        this(solver, SPLIT_MIN_POINTS);
+    }
+
+    /**
+     * @param solver         the equilibrium solver
+     * @param splitMinPoints grid states from which an equilibrium run is split in two halves
+     *                       ({@link Integer#MAX_VALUE}: never, one warm-started path)
+     */
+    SequenceRunner(EquilibriumSolver solver, int splitMinPoints) {
         this.solver = solver;
+        this.splitMinPoints = splitMinPoints;
     }
 
     /**
@@ -56,15 +74,25 @@ public final class SequenceRunner {
      */
     public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
                                     Progress progress) {
+        double[] grid = grid(settings);
+        Stoichiometry stoich = new Stoichiometry(system);
+        if (!settings.isFractional() && grid.length >= splitMinPoints) {
+            int half = grid.length / 2;
+            Alongside<List<SequenceStep>> cooler = Alongside.start("sequence, cooler half",
+                    () -> equilibriumSteps(system, totals, settings, grid, half, grid.length, stoich, progress));
+            List<SequenceStep> steps = new ArrayList<>();
+            steps.addAll(cooler.joinAfter(() -> steps.addAll(
+                    equilibriumSteps(system, totals, settings, grid, 0, half, stoich, progress))));
+            return refined(system, totals, settings, steps, null, totals.clone(), new double[totals.length], progress);
+        }
         List<SequenceStep> steps = new ArrayList<>();
         double[] b = totals.clone();
         double[][] kept = settings.isFractional() ? zeros(system) : null;
         double[][] withdrawn = settings.isFractional() ? zeros(system) : null;
         double[] floorAdded = new double[totals.length];
-        Stoichiometry stoich = new Stoichiometry(system);
         EquilibriumResult last = null;
         EquilibriumResult prev = null;
-        for (double t : grid(settings)) {
+        for (double t : grid) {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
             EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
             steps.add(new SequenceStep(r, copy(withdrawn), totals, stoich));
@@ -76,11 +104,41 @@ public final class SequenceRunner {
             last = r;
             progress.step();
         }
+        return refined(system, totals, settings, steps, withdrawn, b, floorAdded, progress);
+    }
+
+    private CondensationSequence refined(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                         List<SequenceStep> steps, double[][] withdrawn, double[] b, double[] floorAdded,
+                                         Progress progress) {
         SequenceRefiner refiner = new SequenceRefiner(solver, settings);
         List<PhaseEvent> events = refiner.phaseEvents(steps);
         List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
         progress.step();
         return new CondensationSequence(system, totals, settings, steps, events, temps, withdrawn, b, floorAdded);
+    }
+
+    /**
+     * Grid states from index {@code from} (cold start) to {@code to} (exclusive) of an equilibrium
+     * run, each warm-started from the two before it. Equilibrium states depend only on T, P and the
+     * totals, not on the path to them, so two halves of the grid can be solved at once.
+     */
+    private List<SequenceStep> equilibriumSteps(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                                double[] grid, int from, int to, Stoichiometry stoich,
+                                                Progress progress) {
+        List<SequenceStep> steps = new ArrayList<>(to - from);
+        double[] b = totals.clone();
+        EquilibriumResult last = null;
+        EquilibriumResult prev = null;
+        for (int i = from; i < to; i++) {
+            double t = grid[i];
+            EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
+            EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            steps.add(new SequenceStep(r, null, totals, stoich));
+            prev = last;
+            last = r;
+            progress.step();
+        }
+        return steps;
     }
 
     /**

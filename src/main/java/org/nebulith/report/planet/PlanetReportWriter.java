@@ -16,7 +16,7 @@ import org.nebulith.report.Cautions;
 import org.nebulith.files.RunFolder;
 import org.nebulith.files.RunInputs;
 import org.nebulith.files.Table;
-import org.nebulith.report.Alongside;
+import org.nebulith.progress.Alongside;
 import org.nebulith.report.chart.ChartFormat;
 import org.nebulith.report.chart.ChartRenderer;
 import org.nebulith.report.chart.ChartSize;

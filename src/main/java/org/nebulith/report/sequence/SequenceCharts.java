@@ -12,7 +12,7 @@ import org.nebulith.condensation.ElementCondensation;
 import org.nebulith.condensation.SequenceStep;
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.format.Decimal;
-import org.nebulith.report.Alongside;
+import org.nebulith.progress.Alongside;
 import org.nebulith.report.PhaseLabels;
 import org.nebulith.files.RunFolder;
 import org.nebulith.report.chart.ChartFormat;

@@ -1,4 +1,4 @@
-package org.nebulith.report;
+package org.nebulith.progress;
 
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
