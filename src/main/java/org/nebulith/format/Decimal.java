@@ -10,7 +10,8 @@ import java.math.RoundingMode;
  *
  * <p>Rule: take the fewest significant digits p (1 to 17) such that the exact decimal value of
  * the double, rounded half-even to p digits, parses back to the same double. That p is found by
- * bisection (if p digits round-trip, so do p + 1). The digits are written in plain notation when
+ * bisection over 1 to 17 (if p digits round-trip, so do p + 1, except at eight powers of two such as
+ * 2^149, where the bisection still lands on the fewest). The digits are written in plain notation when
  * the decimal exponent is in [-4, 7) ({@code 1500}, {@code 0.00012}, {@code 2.5}) and otherwise as
  * {@code d.ddde-N} / {@code d.dddeN} ({@code 1.5e-7}, {@code 6.02214076e23}). Negative zero is
  * written {@code 0}. The result depends only on the double, not on the JDK version or the
@@ -19,7 +20,6 @@ import java.math.RoundingMode;
  */
 public final class Decimal {
 
-    private static final int MAX_DIGITS = 17;
     private static final int PLAIN_MIN_EXPONENT = -4;
     private static final int PLAIN_MAX_EXPONENT = 7;
 
@@ -38,27 +38,27 @@ public final class Decimal {
         if (value == 0.0) {
             return "0";
         }
-        BigDecimal shortest = shortestDigits(value);
+        DecimalDigits shortest = ShortestDigits.of(value);
+        int exponent = shortest.exponent();
+        if (exponent >= PLAIN_MIN_EXPONENT && exponent < PLAIN_MAX_EXPONENT) {
+            return DigitsText.plain(shortest);
+        }
+        return DigitsText.scientific(shortest, exponent);
+    }
+
+    /**
+     * The text {@link #format} writes for given shortest digits, laid out by BigDecimal (the definition
+     * that the direct writing in {@link #format} follows).
+     *
+     * @param shortest the shortest round-trip digits of a non-zero double, trailing zeros stripped
+     * @return its text
+     */
+    static String textOf(final BigDecimal shortest) {
         int exponent = shortest.precision() - shortest.scale() - 1;
         if (exponent >= PLAIN_MIN_EXPONENT && exponent < PLAIN_MAX_EXPONENT) {
             return shortest.toPlainString();
         }
         return scientific(shortest, exponent);
-    }
-
-    private static BigDecimal shortestDigits(final double value) {
-        BigDecimal exact = new BigDecimal(value);
-        int low = 1;
-        int high = MAX_DIGITS;
-        while (low < high) {
-            int mid = (low + high) >>> 1;
-            if (round(exact, mid).doubleValue() == value) {
-                high = mid;
-            } else {
-                low = mid + 1;
-            }
-        }
-        return round(exact, low).stripTrailingZeros();
     }
 
     private static BigDecimal round(final BigDecimal exact, final int digits) {
@@ -149,7 +149,7 @@ public final class Decimal {
         if (value == 0.0) {
             return "0";
         }
-        BigDecimal digits = shortestDigits(value);
+        BigDecimal digits = ShortestDigits.of(value).toBigDecimal();
         int exponent = digits.precision() - digits.scale() - 1;
         String plain = digits.toPlainString();
         String sci = scientific(digits, exponent);
