@@ -64,9 +64,11 @@ public final class ZoneCondensation {
     /**
      * @return the settings for Monte Carlo surveys: 4 panels of 3 Gauss-Legendre points, no front
      *         search. On the default survey zone the core mass fraction and mantle Mg# differ from
-     *         the adaptive integration by under 1e-4 relative and Mg/Si, Fe/Si by under 1e-7 (measured),
-     *         far below the spread from the abundance errors; zones that straddle major condensation
-     *         fronts do worse (a kink inside a panel gives a second-order error).
+     *         the adaptive integration by under 1e-4 relative for the proto-solar gas, and by up to
+     *         6.5e-4 (core mass fraction) and 3.2e-4 (Mg#) for compositions 0.1 dex away; Mg/Si, Fe/Si
+     *         by under 1e-8 (measured; contributors' guide, "Survey speed and memory"), far below the
+     *         spread from the abundance errors; zones that straddle major condensation fronts do worse
+     *         (a kink inside a panel gives a second-order error).
      */
     public static ZoneCondensation fast() {
         return fixed(4, 3);
