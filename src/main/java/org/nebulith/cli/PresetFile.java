@@ -94,7 +94,7 @@ public final class PresetFile {
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return parse(file, in);
         } catch (IOException e) {
-            throw new InputException(Messages.INPUT_NOT_READABLE, e, file, e.getClass().getSimpleName());
+            throw new InputException(Messages.INPUT_NOT_READABLE, e, file, InputException.reason(e));
         }
     }
 

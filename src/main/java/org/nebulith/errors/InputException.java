@@ -74,4 +74,21 @@ public final class InputException extends NebulithException {
         Object shown = value instanceof Number ? value : shown(value);
         return new InputException(Messages.BAD_OPTION_VALUE, null, option, shown, problem, accepted);
     }
+
+    /**
+     * @param e why a file could not be read
+     * @return the reason in words ("no such file", "permission denied", ...), else the exception's kind
+     */
+    public static String reason(final java.io.IOException e) {
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "no such file";
+        }
+        if (e instanceof java.nio.file.AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e.getMessage() != null && e.getMessage().contains("Is a directory")) {
+            return "a folder, not a file";
+        }
+        return e.getClass().getSimpleName();
+    }
 }

@@ -22,7 +22,7 @@ public enum Messages {
     /** A bad command-line value: option, value, what is wrong, what is accepted. */
     BAD_OPTION_VALUE(4, "option {0}: value \"{1}\": {2}; accepted: {3}"),
     /** An input file that cannot be found or read: file, reason. */
-    INPUT_NOT_READABLE(2, "{0}: cannot read input file ({1})"),
+    INPUT_NOT_READABLE(2, "{0}: cannot read input file ({1}); accepted: an existing, readable file"),
     /** A preset name that resolves to no file: name, searched folders, available names. */
     UNKNOWN_PRESET(3, "preset \"{0}\" not found in {1}; available presets: {2}"),
     /** An option that was renamed: old name, new option with its parameter, what it means. */

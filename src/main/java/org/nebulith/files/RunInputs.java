@@ -62,7 +62,7 @@ public final class RunInputs {
         try {
             files.add(new InputFile(file, role, checkedSha256(file, file.toString()), Files.size(file)));
         } catch (IOException e) {
-            throw new InputException(Messages.INPUT_NOT_READABLE, e, file, e.getClass().getSimpleName());
+            throw new InputException(Messages.INPUT_NOT_READABLE, e, file, InputException.reason(e));
         }
         return this;
     }
@@ -79,7 +79,7 @@ public final class RunInputs {
         try {
             checkedSha256(file, shown);
         } catch (IOException e) {
-            throw new InputException(Messages.INPUT_NOT_READABLE, e, shown, e.getClass().getSimpleName());
+            throw new InputException(Messages.INPUT_NOT_READABLE, e, shown, InputException.reason(e));
         }
     }
 

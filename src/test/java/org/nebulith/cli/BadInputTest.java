@@ -131,6 +131,8 @@ class BadInputTest {
         "planet --zones {d}/ff-zones.csv --out {d}/o | {d}/ff-zones.csv: line 6: byte 0xFF is not UTF-8 text",
         "planet --disk {d}/ff-disk.csv --out {d}/o | {d}/ff-disk.csv: line 3: byte 0xFF is not UTF-8 text",
         "survey --catalogue {d}/ff-catalogue.csv --out {d}/o | {d}/ff-catalogue.csv: line 5: byte 0xFF",
+        "survey --catalogue {d}/absent.csv --out {d}/o | {d}/absent.csv: cannot read input file (no such file); accepted: an existing, readable file",
+        "survey --catalogue {d}/existing --out {d}/o | {d}/existing: cannot read input file (a folder, not a file)",
         "point --composition {d}/ff-composition.csv --T-K 1500 --P-bar 1e-4 | {d}/ff-composition.csv: line 4: byte 0xFF",
         "point --composition {d}/zero.csv --T-K 1500 --P-bar 1e-4 | {d}/zero.csv: line 0: field \"value\": value \"\": every amount is zero",
         "point --elements H=0,Mg=0 --T-K 1500 --P-bar 1e-4 | option --elements: value \"H=0,Mg=0\": every amount is zero",
