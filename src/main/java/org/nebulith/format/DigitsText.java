@@ -17,7 +17,7 @@ final class DigitsText {
     private static final int DIVIDE_BY_TEN_SHIFT = 35;
     private static final long EIGHT_DIGITS = 100_000_000L;
     /** 10^0 to 10^18; not to be written to. */
-    static final long[] TEN_TO_THE = tenPowers();
+    static final long[] TEN_TO_THE = powers(10, 19);
 
     private DigitsText() {
     }
@@ -123,12 +123,16 @@ final class DigitsText {
         return odd >= TEN_TO_THE[atMost] ? atMost + 1 : atMost;
     }
 
-    /** 10^0 to 10^18. */
-    private static long[] tenPowers() {
-        long[] powers = new long[19];
+    /**
+     * @param base  the base
+     * @param count how many powers (they must stay below 2^63)
+     * @return base^0 to base^(count - 1)
+     */
+    static long[] powers(final long base, final int count) {
+        long[] powers = new long[count];
         powers[0] = 1;
         for (int i = 1; i < powers.length; i++) {
-            powers[i] = powers[i - 1] * 10;
+            powers[i] = powers[i - 1] * base;
         }
         return powers;
     }

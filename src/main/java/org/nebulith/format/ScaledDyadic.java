@@ -16,7 +16,8 @@ final class ScaledDyadic {
     /** Returned when the floor is 2^62 or more (it could not be tagged in a long). */
     static final long TOO_LARGE = -1L;
 
-    private static final long[] FIVE_TO_THE = fivePowers();
+    /** 5^0 to 5^27, the powers of five below 2^63. */
+    private static final long[] FIVE_TO_THE = DigitsText.powers(5, 28);
     private static final BigInteger[] BIG_FIVE_TO_THE = new BigInteger[400];
     private static final int MAX_FLOOR_BITS = 62;
     private static final int HALF_BITS = 63;
@@ -185,15 +186,5 @@ final class ScaledDyadic {
             BIG_FIVE_TO_THE[n] = power;
         }
         return power;
-    }
-
-    /** 5^0 to 5^27, the powers of five below 2^63. */
-    private static long[] fivePowers() {
-        long[] powers = new long[28];
-        powers[0] = 1;
-        for (int i = 1; i < powers.length; i++) {
-            powers[i] = powers[i - 1] * 5;
-        }
-        return powers;
     }
 }
