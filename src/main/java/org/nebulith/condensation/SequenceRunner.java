@@ -76,19 +76,23 @@ public final class SequenceRunner {
                                     Progress progress) {
         double[] grid = grid(settings);
         Stoichiometry stoich = new Stoichiometry(system);
-        if (!settings.isFractional() && grid.length >= splitMinPoints) {
-            int half = grid.length / 2;
-            Alongside<List<SequenceStep>> cooler = Alongside.start("sequence, cooler half",
-                    () -> equilibriumSteps(system, totals, settings, grid, half, grid.length, stoich, progress));
+        if (!settings.isFractional()) {
             List<SequenceStep> steps = new ArrayList<>();
-            steps.addAll(cooler.joinAfter(() -> steps.addAll(
-                    equilibriumSteps(system, totals, settings, grid, 0, half, stoich, progress))));
+            if (grid.length >= splitMinPoints) {
+                int half = grid.length / 2;
+                Alongside<List<SequenceStep>> cooler = Alongside.start("sequence, cooler half",
+                        () -> equilibriumSteps(system, totals, settings, grid, half, grid.length, stoich, progress));
+                steps.addAll(cooler.joinAfter(() -> steps.addAll(
+                        equilibriumSteps(system, totals, settings, grid, 0, half, stoich, progress))));
+            } else {
+                steps.addAll(equilibriumSteps(system, totals, settings, grid, 0, grid.length, stoich, progress));
+            }
             return refined(system, totals, settings, steps, null, totals.clone(), new double[totals.length], progress);
         }
         List<SequenceStep> steps = new ArrayList<>();
         double[] b = totals.clone();
-        double[][] kept = settings.isFractional() ? zeros(system) : null;
-        double[][] withdrawn = settings.isFractional() ? zeros(system) : null;
+        double[][] kept = zeros(system);
+        double[][] withdrawn = zeros(system);
         double[] floorAdded = new double[totals.length];
         EquilibriumResult last = null;
         EquilibriumResult prev = null;
@@ -96,10 +100,8 @@ public final class SequenceRunner {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
             EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
             steps.add(new SequenceStep(r, copy(withdrawn), totals, stoich));
-            if (settings.isFractional()) {
-                b = withdraw(r, stoich, settings.removalFraction(), kept, withdrawn);
-                floorReacting(b, totals, floorAdded);
-            }
+            b = withdraw(r, stoich, settings.removalFraction(), kept, withdrawn);
+            floorReacting(b, totals, floorAdded);
             prev = last;
             last = r;
             progress.step();
@@ -213,9 +215,6 @@ public final class SequenceRunner {
     }
 
     private static double[][] copy(double[][] a) {
-        if (a == null) {
-            return null;
-        }
         double[][] c = new double[a.length][];
         for (int i = 0; i < a.length; i++) {
             c[i] = a[i].clone();
