@@ -8,8 +8,12 @@ import java.util.function.DoubleFunction;
 /**
  * Locates condensation fronts: the radii where a caller-defined signature of the local state
  * changes (for example the set of condensed phases present at T(r), P(r)). Samples the signature
- * on a logarithmic grid and bisects every interval whose ends differ, to a given width. A front
- * pair closer than one grid step is missed unless the grid is fine enough (say 200 points).
+ * on a logarithmic grid and bisects every interval whose ends differ, to a given width. When the
+ * state just outside the front found still differs from the interval's far end, a second front lies
+ * between them and is bisected in turn (two phases changing within one grid step, such as one
+ * appearing and another vanishing a few 1e-4 AU apart: left unannounced, each costs the adaptive
+ * integration hundreds of evaluations). A phase that appears and vanishes again between two grid
+ * points leaves equal ends and is missed unless the grid is fine enough (say 200 points).
  * The radii found are what {@link RadialIntegrator#integrate} takes as break radii.
  */
 public final class FrontFinder {
@@ -37,7 +41,7 @@ public final class FrontFinder {
             double b = i == samples - 1 ? rMaxAU : rMinAU * Math.pow(ratio, i);
             Object sb = signature.apply(b);
             if (!Objects.equals(sa, sb)) {
-                fronts.add(bisect(a, b, sa, signature, tolAU));
+                bisect(a, b, sa, sb, signature, tolAU, fronts);
             }
             a = b;
             sa = sb;
@@ -45,17 +49,25 @@ public final class FrontFinder {
         return fronts;
     }
 
-    private static double bisect(double a, double b, Object sa, DoubleFunction<Object> signature, double tol) {
+    /** Adds the fronts between a and b (signatures sa and sb, which differ) in increasing order. */
+    private static void bisect(double a, double b, Object sa, Object sb, DoubleFunction<Object> signature,
+                               double tol, List<Double> fronts) {
         double lo = a;
         double hi = b;
+        Object sHi = sb;
         while (hi - lo > tol) {
             double mid = 0.5 * (lo + hi);
-            if (Objects.equals(signature.apply(mid), sa)) {
+            Object sMid = signature.apply(mid);
+            if (Objects.equals(sMid, sa)) {
                 lo = mid;
             } else {
                 hi = mid;
+                sHi = sMid;
             }
         }
-        return 0.5 * (lo + hi);
+        fronts.add(0.5 * (lo + hi));
+        if (!Objects.equals(sHi, sb) && b - hi > tol) {
+            bisect(hi, b, sHi, sb, signature, tol, fronts);
+        }
     }
 }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.DoubleFunction;
 
 import org.apache.commons.math3.special.Erf;
 import org.junit.jupiter.api.Test;
@@ -110,6 +111,18 @@ class RadialIntegratorTest {
         assertEquals(1, fronts.size());
         assertEquals(STEP_R, fronts.get(0), 1e-10);
         assertTrue(FrontFinder.find(0.1, 10, 50, r -> 1, 1e-10).isEmpty());
+    }
+
+    @Test
+    void frontFinderLocatesSeveralChangesWithinOneGridStep() {
+        // three signature changes 2e-4 AU apart, inside one step of a 10-point grid over 0.1-10 AU (a
+        // phase appearing and another vanishing close together, as in the demo disk near 0.5634 AU)
+        DoubleFunction<Object> sig = r -> r < 1.0 ? "A" : r < 1.0002 ? "B" : r < 1.0004 ? "C" : "D";
+        List<Double> fronts = FrontFinder.find(0.1, 10, 10, sig, 1e-10);
+        assertEquals(3, fronts.size(), fronts.toString());
+        assertEquals(1.0, fronts.get(0), 1e-10);
+        assertEquals(1.0002, fronts.get(1), 1e-10);
+        assertEquals(1.0004, fronts.get(2), 1e-10);
     }
 
     /**
