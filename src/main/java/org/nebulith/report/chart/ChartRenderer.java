@@ -6,7 +6,6 @@ import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -15,16 +14,6 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-
-import javax.imageio.IIOImage;
-import javax.imageio.ImageIO;
-import javax.imageio.ImageTypeSpecifier;
-import javax.imageio.ImageWriteParam;
-import javax.imageio.ImageWriter;
-import javax.imageio.metadata.IIOInvalidTreeException;
-import javax.imageio.metadata.IIOMetadata;
-import javax.imageio.metadata.IIOMetadataNode;
-import javax.imageio.stream.ImageOutputStream;
 
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
@@ -51,7 +40,6 @@ import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawer;
 public final class ChartRenderer {
 
     private static final double POINTS_PER_INCH = 72.0;
-    private static final double METRES_PER_INCH = 0.0254;
 
     private ChartRenderer() {
     }
@@ -139,13 +127,7 @@ public final class ChartRenderer {
         } finally {
             g.dispose();
         }
-        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-        try {
-            encodePng(image, bytes);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return bytes.toByteArray();
+        return PngEncoder.encode(image, ChartStyle.PNG_DPI);
     }
 
     /**
@@ -203,30 +185,5 @@ public final class ChartRenderer {
             throw new UncheckedIOException(e);
         }
         return out.toByteArray();
-    }
-
-    private static void encodePng(final BufferedImage image, final OutputStream out) throws IOException {
-        ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
-        try (ImageOutputStream stream = ImageIO.createImageOutputStream(out)) {
-            ImageWriteParam param = writer.getDefaultWriteParam();
-            IIOMetadata metadata = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(image),
-                    param);
-            recordDpi(metadata);
-            writer.setOutput(stream);
-            writer.write(metadata, new IIOImage(image, null, metadata), param);
-        } finally {
-            writer.dispose();
-        }
-    }
-
-    private static void recordDpi(final IIOMetadata metadata) throws IIOInvalidTreeException {
-        String perMetre = Integer.toString((int) Math.round(ChartStyle.PNG_DPI / METRES_PER_INCH));
-        IIOMetadataNode phys = new IIOMetadataNode("pHYs");
-        phys.setAttribute("pixelsPerUnitXAxis", perMetre);
-        phys.setAttribute("pixelsPerUnitYAxis", perMetre);
-        phys.setAttribute("unitSpecifier", "meter");
-        IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
-        root.appendChild(phys);
-        metadata.mergeTree("javax_imageio_png_1.0", root);
     }
 }
