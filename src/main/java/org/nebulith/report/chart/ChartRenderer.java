@@ -158,11 +158,15 @@ public final class ChartRenderer {
 
     /**
      * @param figure the chart
-     * @return a one-page PDF of the figure's size, text as text in the embedded (subset) chart font
+     * @return a one-page PDF of the figure's size, text as text in the embedded (subset) chart font;
+     *         the same figure gives the same bytes
      */
     public static byte[] pdf(final Figure figure) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try (PDDocument doc = new PDDocument()) {
+            // the file identifier from the chart's own text rather than the clock, so that the same
+            // chart gives the same bytes on every run
+            doc.setDocumentId((long) figure.texts().hashCode());
             float w = (float) figure.widthPt();
             float h = (float) figure.heightPt();
             PDPage page = new PDPage(new PDRectangle(w, h));
