@@ -12,9 +12,9 @@ import java.util.function.DoubleFunction;
  * state just outside the front found still differs from the interval's far end, a second front lies
  * between them and is bisected in turn (two phases changing within one grid step, such as one
  * appearing and another vanishing a few 1e-4 AU apart: left unannounced, the narrow interval behind
- * it may never hold a quadrature point, which moved a demo zone's Ca/Si by 1.7e-5, and costs the
- * adaptive integration hundreds of evaluations). A phase that appears and vanishes again between two grid
- * points leaves equal ends and is missed unless the grid is fine enough (say 200 points).
+ * it may hold no quadrature point, which moved a demo zone's Ca/Si by 1.7e-5, and it costs the
+ * adaptive integration hundreds of evaluations). A phase that appears and vanishes again between two
+ * grid points leaves equal ends and is missed unless the grid is fine enough (say 200 points).
  * The radii found are what {@link RadialIntegrator#integrate} takes as break radii.
  */
 public final class FrontFinder {
