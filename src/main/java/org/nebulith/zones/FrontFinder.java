@@ -50,25 +50,39 @@ public final class FrontFinder {
         return fronts;
     }
 
+    /**
+     * Most fronts taken from one grid interval: a signature that flickers at the rounding level (a
+     * trace phase present at one radius, absent at the next) would otherwise be followed front by
+     * front across the whole interval; what lies beyond is left to the adaptive integration, as a
+     * front between grid points always was before the search went on past the first.
+     */
+    static final int MAX_FRONTS_PER_STEP = 16;
+
     /** Adds the fronts between a and b (signatures sa and sb, which differ) in increasing order. */
     private static void bisect(double a, double b, Object sa, Object sb, DoubleFunction<Object> signature,
                                double tol, List<Double> fronts) {
-        double lo = a;
-        double hi = b;
-        Object sHi = sb;
-        while (hi - lo > tol) {
-            double mid = 0.5 * (lo + hi);
-            Object sMid = signature.apply(mid);
-            if (Objects.equals(sMid, sa)) {
-                lo = mid;
-            } else {
-                hi = mid;
-                sHi = sMid;
+        double from = a;
+        Object sFrom = sa;
+        for (int found = 0; found < MAX_FRONTS_PER_STEP; found++) {
+            double lo = from;
+            double hi = b;
+            Object sHi = sb;
+            while (hi - lo > tol) {
+                double mid = 0.5 * (lo + hi);
+                Object sMid = signature.apply(mid);
+                if (Objects.equals(sMid, sFrom)) {
+                    lo = mid;
+                } else {
+                    hi = mid;
+                    sHi = sMid;
+                }
             }
-        }
-        fronts.add(0.5 * (lo + hi));
-        if (!Objects.equals(sHi, sb) && b - hi > tol) {
-            bisect(hi, b, sHi, sb, signature, tol, fronts);
+            fronts.add(0.5 * (lo + hi));
+            if (Objects.equals(sHi, sb) || b - hi <= tol) {
+                return;
+            }
+            from = hi;
+            sFrom = sHi;
         }
     }
 }

@@ -125,6 +125,20 @@ class RadialIntegratorTest {
         assertEquals(1.0004, fronts.get(2), 1e-10);
     }
 
+    @Test
+    void frontFinderFollowsAFlickeringSignatureOnlySoFar() {
+        // a signature that changes every 1e-9 AU (noise at the rounding level): at most
+        // MAX_FRONTS_PER_STEP fronts from the one grid interval, found in a bounded number of probes
+        int[] probes = {0};
+        DoubleFunction<Object> sig = r -> {
+            probes[0]++;
+            return r < 1.0 ? -1L : (long) Math.floor((r - 1.0) / 1e-9);
+        };
+        List<Double> fronts = FrontFinder.find(0.5, 2, 2, sig, 1e-12);
+        assertEquals(FrontFinder.MAX_FRONTS_PER_STEP, fronts.size());
+        assertTrue(probes[0] < 50 * FrontFinder.MAX_FRONTS_PER_STEP, probes[0] + " probes");
+    }
+
     /**
      * An integrand that jumps by a relative 3e-5 wherever it is sampled (as a flat disk on a data
      * piece boundary once did): 1 + 3e-5 sign(hash of r). Its integral is known to 3e-5; halving
