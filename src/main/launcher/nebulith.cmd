@@ -11,7 +11,20 @@ set "NEBULITH_JAVA=java"
 if defined JAVA_HOME if exist "%JAVA_HOME%\bin\java.exe" set "NEBULITH_JAVA=%JAVA_HOME%\bin\java.exe"
 rem The brief single-run commands start faster with the quick compiler only (QuickStart.java says why;
 rem keep the two lists equal). NEBULITH_JAVA_OPTS comes after it, so a user's setting wins.
+rem The command is the first argument that is not an option, as Main reads it ('--quiet planet' too).
 set "NEBULITH_QUICK="
-for %%c in (point sequence planet interior measured) do if /i "%~1"=="%%c" set "NEBULITH_QUICK=-XX:TieredStopAtLevel=1"
+set "NEBULITH_COMMAND="
+call :command %*
+for %%c in (point sequence planet interior measured) do if /i "%NEBULITH_COMMAND%"=="%%c" set "NEBULITH_QUICK=-XX:TieredStopAtLevel=1"
 "%NEBULITH_JAVA%" %NEBULITH_QUICK% %NEBULITH_JAVA_OPTS% -jar "%NEBULITH_JAR%" %*
 exit /b %ERRORLEVEL%
+
+:command
+if "%~1"=="" exit /b 0
+set "NEBULITH_ARG=%~1"
+if "%NEBULITH_ARG:~0,1%"=="-" (
+  shift
+  goto command
+)
+set "NEBULITH_COMMAND=%~1"
+exit /b 0
