@@ -7,7 +7,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.Set;
 
 import org.nebulith.composition.ElementAbundances;
@@ -130,16 +129,19 @@ public final class SequenceCommand extends RunCommand {
         CondensationSequence seq;
         double elapsed;
         List<String> cautions = new ArrayList<>();
-        try (RunFolder run = context.openRunFolder(context.defaultRunName())) {
+        SequenceRunner runner = new SequenceRunner(new EquilibriumSolver());
+        try (RunFolder run = context.openRunFolder(context.defaultRunName());
+             SequenceRunner.Begun begun = runner.begin(system, totals, settings(path))) {
+            // the cooler half of the grid is solved meanwhile, unless the start has to be raised
             org.nebulith.report.chart.ChartRenderer.warmUpInBackground();
-            Optional<String> startNote = allGasStart(context, system, totals, path);
+            long t0 = System.nanoTime();
+            AllGasStart.Result start = allGasStart(context, system, totals, path, cautions);
             SequenceSettings settings = settings(path);
-            startNote.ifPresent(cautions::add);
             cautions.addAll(SequenceCautions.lines(spec.describe(),
                     SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK)));
-            long t0 = System.nanoTime();
-            try (Progress progress = context.progress("sequence", SequenceRunner.gridSize(settings) + 2L)) {
-                seq = run(system, totals, settings, progress);
+            try (Progress progress = context.progress("sequence", SequenceRunner.gridSize(settings) + 2L);
+                 SequenceRunner.Begun raised = start.allGasAtStart() ? null : runner.begin(system, totals, settings)) {
+                seq = finish(raised == null ? begun : raised, progress, start.startState().orElse(null));
                 elapsed = (System.nanoTime() - t0) / 1e9;
                 folder = write(run, context, spec, path, seq, cautions, elapsed);
                 progress.step();
@@ -188,9 +190,11 @@ public final class SequenceCommand extends RunCommand {
      * raised (in steps of {@link AllGasStart#STEP_K}) up to the gas data's limit; a start given on the
      * command line or in a preset is refused.
      *
-     * @return the note for the run notes when the start was raised
+     * @param cautions the run's cautions, which get the note when the start was raised
+     * @return what was found (with the all-gas state at the start, which the sequence solves first)
      */
-    private Optional<String> allGasStart(RunContext context, ChemicalSystem system, double[] totals, PressurePath path) {
+    private AllGasStart.Result allGasStart(RunContext context, ChemicalSystem system, double[] totals, PressurePath path,
+                                           List<String> cautions) {
         AllGasStart.Result r;
         try {
             r = AllGasStart.find(new EquilibriumSolver(), system, totals, path, tMaxK);
@@ -198,7 +202,7 @@ public final class SequenceCommand extends RunCommand {
             throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
         }
         if (r.allGasAtStart()) {
-            return Optional.empty();
+            return r;
         }
         String stable = r.stableAtStart().stream().map(PhaseNames::display).distinct()
                 .collect(java.util.stream.Collectors.joining(", "));
@@ -218,7 +222,8 @@ public final class SequenceCommand extends RunCommand {
                 + " already stable at " + Decimal.format(tMaxK) + " K with this composition";
         tMaxK = r.startK().get();
         context.info("sequence: " + note);
-        return Optional.of(note);
+        cautions.add(note);
+        return r;
     }
 
     private static List<org.nebulith.report.html.Report.Setting> reportSettings(RunContext context) {
@@ -233,10 +238,10 @@ public final class SequenceCommand extends RunCommand {
                 org.nebulith.thermo.SpeciesDatabase.bundled().sources(), List.of());
     }
 
-    private static CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
-                                            Progress progress) {
+    private static CondensationSequence finish(SequenceRunner.Begun run, Progress progress,
+                                               org.nebulith.equilibrium.EquilibriumResult atStart) {
         try {
-            return new SequenceRunner(new EquilibriumSolver()).run(system, totals, settings, progress);
+            return run.finish(progress, atStart);
         } catch (ConvergenceException e) {
             throw new NumericalException(Messages.SEQUENCE_STOPPED, e, e.getMessage());
         }

@@ -25,8 +25,11 @@ public final class AllGasStart {
      * @param stableAtStart data ids of the condensed phases stable at the requested start
      *                     (empty if it was all gas)
      * @param limitK       the highest temperature tried: the upper limit of the gas data [K]
+     * @param startState   the all-gas equilibrium at {@code startK} (a cold solve, the same a sequence
+     *                     started there would solve first), if any
      */
-    public record Result(Optional<Double> startK, List<String> stableAtStart, double limitK) {
+    public record Result(Optional<Double> startK, List<String> stableAtStart, double limitK,
+                         Optional<EquilibriumResult> startState) {
         /** @return whether the requested start was all gas already */
         public boolean allGasAtStart() {
             return stableAtStart.isEmpty();
@@ -47,22 +50,23 @@ public final class AllGasStart {
      */
     public static Result find(EquilibriumSolver solver, ChemicalSystem system, double[] totals, PressurePath path,
                               double startK) {
-        List<String> stable = condensedAt(solver, system, totals, path, startK);
+        EquilibriumResult first = solveAt(solver, system, totals, path, startK);
+        List<String> stable = first.presentPhaseNames();
         if (stable.isEmpty()) {
-            return new Result(Optional.of(startK), List.of(), system.gasTMaxK());
+            return new Result(Optional.of(startK), List.of(), system.gasTMaxK(), Optional.of(first));
         }
         double limit = system.gasTMaxK();
         for (double t = startK + STEP_K; t <= limit; t += STEP_K) {
-            if (condensedAt(solver, system, totals, path, t).isEmpty()) {
-                return new Result(Optional.of(t), stable, limit);
+            EquilibriumResult r = solveAt(solver, system, totals, path, t);
+            if (r.presentPhaseNames().isEmpty()) {
+                return new Result(Optional.of(t), stable, limit, Optional.of(r));
             }
         }
-        return new Result(Optional.empty(), stable, limit);
+        return new Result(Optional.empty(), stable, limit, Optional.empty());
     }
 
-    private static List<String> condensedAt(EquilibriumSolver solver, ChemicalSystem system, double[] totals,
-                                            PressurePath path, double tK) {
-        EquilibriumResult r = solver.solve(new EquilibriumProblem(system, tK, path.pressureBar(tK), totals));
-        return r.presentPhaseNames();
+    private static EquilibriumResult solveAt(EquilibriumSolver solver, ChemicalSystem system, double[] totals,
+                                             PressurePath path, double tK) {
+        return solver.solve(new EquilibriumProblem(system, tK, path.pressureBar(tK), totals));
     }
 }

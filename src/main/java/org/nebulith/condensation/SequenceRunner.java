@@ -1,7 +1,9 @@
 package org.nebulith.condensation;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicBoolean;
 
 import org.nebulith.equilibrium.ChemicalSystem;
 import org.nebulith.equilibrium.EquilibriumProblem;
@@ -9,6 +11,7 @@ import org.nebulith.equilibrium.EquilibriumResult;
 import org.nebulith.equilibrium.EquilibriumSolver;
 import org.nebulith.equilibrium.WarmStart;
 import org.nebulith.progress.Alongside;
+import org.nebulith.progress.DeferredProgress;
 import org.nebulith.progress.Progress;
 
 /**
@@ -74,21 +77,97 @@ public final class SequenceRunner {
      */
     public CondensationSequence run(ChemicalSystem system, double[] totals, SequenceSettings settings,
                                     Progress progress) {
-        double[] grid = grid(settings);
-        Stoichiometry stoich = new Stoichiometry(system);
-        if (!settings.isFractional()) {
+        try (Begun run = begin(system, totals, settings)) {
+            return run.finish(progress, null);
+        }
+    }
+
+    /**
+     * Begins a run: the cooler half of a split equilibrium grid starts on its own thread at once, so
+     * that it is solved while the caller does other work (checks the start) before {@link Begun#finish}.
+     *
+     * @param system   the chemical system
+     * @param totals   input element totals [mol], in the system's element order
+     * @param settings grid, pressure and removal fraction
+     * @return the begun run; close it to abandon it if it is not finished
+     */
+    public Begun begin(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+        return new Begun(system, totals.clone(), settings);
+    }
+
+    /** A run begun by {@link #begin}; thread-confined to its caller apart from its own cooler half. */
+    public final class Begun implements AutoCloseable {
+        private final ChemicalSystem system;
+        private final double[] totals;
+        private final SequenceSettings settings;
+        private final double[] grid;
+        private final Stoichiometry stoich;
+        private final DeferredProgress coolerProgress = new DeferredProgress();
+        private final AtomicBoolean abandoned = new AtomicBoolean();
+        private final Alongside<List<SequenceStep>> cooler;
+        private boolean finished;
+
+        private Begun(ChemicalSystem system, double[] totals, SequenceSettings settings) {
+            this.system = system;
+            this.totals = totals;
+            this.settings = settings;
+            this.grid = grid(settings);
+            this.stoich = new Stoichiometry(system);
+            int half = grid.length / 2;
+            this.cooler = !settings.isFractional() && grid.length >= splitMinPoints
+                    ? Alongside.start("sequence, cooler half", () -> equilibriumSteps(system, totals, settings, grid,
+                            half, grid.length, stoich, coolerProgress, null, abandoned))
+                    : null;
+        }
+
+        /**
+         * Solves the rest and refines the boundaries.
+         *
+         * @param progress advanced by one per grid state ({@link #gridSize}) and one for the refinement
+         * @param atStart  the equilibrium at the first grid state if the caller has it already (it must
+         *                 be the solver's cold solution of exactly that state; used only if T, P and the
+         *                 totals match), or null
+         * @return the sequence
+         */
+        public CondensationSequence finish(Progress progress, EquilibriumResult atStart) {
+            if (finished) {
+                throw new IllegalStateException("this run is finished already");
+            }
+            finished = true;
+            EquilibriumResult first = atStart != null && isFirstState(atStart) ? atStart : null;
+            if (settings.isFractional()) {
+                return fractional(system, totals, settings, grid, stoich, progress, first);
+            }
             List<SequenceStep> steps = new ArrayList<>();
-            if (grid.length >= splitMinPoints) {
-                int half = grid.length / 2;
-                Alongside<List<SequenceStep>> cooler = Alongside.start("sequence, cooler half",
-                        () -> equilibriumSteps(system, totals, settings, grid, half, grid.length, stoich, progress));
-                steps.addAll(cooler.joinAfter(() -> steps.addAll(
-                        equilibriumSteps(system, totals, settings, grid, 0, half, stoich, progress))));
+            if (cooler != null) {
+                coolerProgress.attach(progress);
+                steps.addAll(cooler.joinAfter(() -> steps.addAll(equilibriumSteps(system, totals, settings, grid, 0,
+                        grid.length / 2, stoich, progress, first, new AtomicBoolean()))));
             } else {
-                steps.addAll(equilibriumSteps(system, totals, settings, grid, 0, grid.length, stoich, progress));
+                steps.addAll(equilibriumSteps(system, totals, settings, grid, 0, grid.length, stoich, progress, first,
+                        new AtomicBoolean()));
             }
             return refined(system, totals, settings, steps, null, totals.clone(), new double[totals.length], progress);
         }
+
+        private boolean isFirstState(EquilibriumResult r) {
+            EquilibriumProblem p = r.problem();
+            return r.system() == system && p.temperatureK() == grid[0]
+                    && p.pressureBar() == settings.path().pressureBar(grid[0]) && Arrays.equals(p.totals(), totals);
+        }
+
+        /** Stops the cooler half (if any) at its next state, unless the run is finished. */
+        @Override
+        public void close() {
+            if (!finished) {
+                abandoned.set(true);
+            }
+        }
+    }
+
+    private CondensationSequence fractional(ChemicalSystem system, double[] totals, SequenceSettings settings,
+                                            double[] grid, Stoichiometry stoich, Progress progress,
+                                            EquilibriumResult first) {
         List<SequenceStep> steps = new ArrayList<>();
         double[] b = totals.clone();
         double[][] kept = zeros(system);
@@ -98,7 +177,8 @@ public final class SequenceRunner {
         EquilibriumResult prev = null;
         for (double t : grid) {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
-            EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            EquilibriumResult r = last == null ? (first != null ? first : solver.solve(pr))
+                    : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
             steps.add(new SequenceStep(r, copy(withdrawn), totals, stoich));
             b = withdraw(r, stoich, settings.removalFraction(), kept, withdrawn);
             floorReacting(b, totals, floorAdded);
@@ -112,11 +192,10 @@ public final class SequenceRunner {
     private CondensationSequence refined(ChemicalSystem system, double[] totals, SequenceSettings settings,
                                          List<SequenceStep> steps, double[][] withdrawn, double[] b, double[] floorAdded,
                                          Progress progress) {
-        SequenceRefiner refiner = new SequenceRefiner(solver, settings);
-        List<PhaseEvent> events = refiner.phaseEvents(steps);
-        List<ElementCondensation> temps = refiner.condensationTemperatures(steps, events);
+        SequenceRefiner.Refined refined = new SequenceRefiner(solver, settings).refine(steps);
         progress.step();
-        return new CondensationSequence(system, totals, settings, steps, events, temps, withdrawn, b, floorAdded);
+        return new CondensationSequence(system, totals, settings, steps, refined.events(), refined.temperatures(),
+                withdrawn, b, floorAdded);
     }
 
     /**
@@ -126,15 +205,16 @@ public final class SequenceRunner {
      */
     private List<SequenceStep> equilibriumSteps(ChemicalSystem system, double[] totals, SequenceSettings settings,
                                                 double[] grid, int from, int to, Stoichiometry stoich,
-                                                Progress progress) {
+                                                Progress progress, EquilibriumResult first, AtomicBoolean stop) {
         List<SequenceStep> steps = new ArrayList<>(to - from);
         double[] b = totals.clone();
         EquilibriumResult last = null;
         EquilibriumResult prev = null;
-        for (int i = from; i < to; i++) {
+        for (int i = from; i < to && !stop.get(); i++) {
             double t = grid[i];
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
-            EquilibriumResult r = last == null ? solver.solve(pr) : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            EquilibriumResult r = last == null ? (first != null ? first : solver.solve(pr))
+                    : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
             steps.add(new SequenceStep(r, null, totals, stoich));
             prev = last;
             last = r;
