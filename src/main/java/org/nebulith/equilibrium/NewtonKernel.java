@@ -34,6 +34,17 @@ final class NewtonKernel {
      */
     static final double NEGLIGIBLE = 1e-22;
     private final double[] gasJacobianFloor;
+    /**
+     * A gas species whose moles are below this fraction of the smallest total among its elements
+     * changes no sum of the Newton system by a representable amount (a relative 1e-30, where the
+     * balances converge to 1e-10 and a double resolves 1e-16): its exponential is not even taken
+     * during the iteration. The result computes every species' amount in full
+     * ({@link ResultBuilder}), so the reported trace gases are unaffected.
+     */
+    static final double UNSEEN = 1e-30;
+    /** Marks a member of {@link #lastX} left out of the latest sums (its mole fraction not computed). */
+    static final double NOT_COMPUTED = -1;
+    private final double[] gasLnSumFloor;
     /** mole fractions (not normalised) of the mixture members from the latest evaluation */
     final double[][] lastX;
     double lastBalance;
@@ -47,6 +58,7 @@ final class NewtonKernel {
         this.opt = opt;
         this.lastX = new double[sys.phaseCount()][];
         this.gasJacobianFloor = st.gasJacobianFloor;
+        this.gasLnSumFloor = st.gasLnSumFloor;
     }
 
     /** Mole fraction of member k of phase p (not normalised). */
@@ -157,6 +169,9 @@ final class NewtonKernel {
         int[] idx = ph.index;
         double[] cnt = ph.count;
         double[] mult = ph.multiplicity;
+        // in the gas, ln x below a species' limit means moles below its floor (UNSEEN)
+        boolean gas = p == 0;
+        double lnN = gas ? Math.log(n) : 0;
         for (int k = 0; k < xs.length; k++) {
             double c = cs[k];
             if (c == Double.POSITIVE_INFINITY) {
@@ -169,7 +184,12 @@ final class NewtonKernel {
             for (int a = from; a < to; a++) {
                 dot += cnt[a] * lambda[idx[a]];
             }
-            double xk = Math.exp(Math.min((dot - c) / mult[k], MAX_EXP));
+            double lnX = (dot - c) / mult[k];
+            if (gas && lnX + lnN < gasLnSumFloor[k]) {
+                xs[k] = NOT_COMPUTED;
+                continue;
+            }
+            double xk = Math.exp(Math.min(lnX, MAX_EXP));
             xs[k] = xk;
             if (xk == 0) {
                 continue;

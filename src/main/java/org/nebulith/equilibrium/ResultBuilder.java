@@ -40,7 +40,7 @@ final class ResultBuilder {
         double[] x = memberMoles[p];
         double[] known = kernel.lastX[p];
         for (int k = 0; k < x.length; k++) {
-            x[k] = known != null ? known[k] : kernel.x(p, k, it.lambda);
+            x[k] = known != null && known[k] != NewtonKernel.NOT_COMPUTED ? known[k] : kernel.x(p, k, it.lambda);
             sum += x[k];
         }
         for (int k = 0; k < x.length; k++) {

@@ -21,6 +21,8 @@ final class StateData {
     final double[] scale;
     /** moles of each gas species below which it is left out of the Jacobian ({@link NewtonKernel}) */
     final double[] gasJacobianFloor;
+    /** ln of the moles below which a gas species is left out of the Newton sums ({@link NewtonKernel#UNSEEN}) */
+    final double[] gasLnSumFloor;
     final int excludedGas;
     /** the data that depend on T and P only (shared) */
     final Thermal thermal;
@@ -50,12 +52,14 @@ final class StateData {
         }
         PhaseDef gas = system.phase(0);
         gasJacobianFloor = new double[gas.members.length];
+        gasLnSumFloor = new double[gas.members.length];
         for (int k = 0; k < gasJacobianFloor.length; k++) {
             double bmin = Double.POSITIVE_INFINITY;
             for (int j : gas.members[k].nzIndex) {
                 bmin = Math.min(bmin, problem.total(j));
             }
             gasJacobianFloor[k] = NewtonKernel.NEGLIGIBLE * bmin;
+            gasLnSumFloor[k] = Math.log(NewtonKernel.UNSEEN * bmin);
         }
     }
 
