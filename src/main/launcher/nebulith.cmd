@@ -16,7 +16,12 @@ set "NEBULITH_QUICK="
 set "NEBULITH_COMMAND="
 call :command %*
 for %%c in (point sequence planet interior measured) do if /i "%NEBULITH_COMMAND%"=="%%c" set "NEBULITH_QUICK=-XX:TieredStopAtLevel=1"
-"%NEBULITH_JAVA%" %NEBULITH_QUICK% %NEBULITH_JAVA_OPTS% -jar "%NEBULITH_JAR%" %*
+rem They also use the serial collector, unless the user's JVM options choose one (two collectors stop the JVM).
+set "NEBULITH_GC="
+if defined NEBULITH_QUICK set "NEBULITH_GC=-XX:+UseSerialGC"
+set "NEBULITH_ALL_OPTS=x %NEBULITH_JAVA_OPTS% %JDK_JAVA_OPTIONS% %JAVA_TOOL_OPTIONS%"
+if not "%NEBULITH_ALL_OPTS:GC=%"=="%NEBULITH_ALL_OPTS%" set "NEBULITH_GC="
+"%NEBULITH_JAVA%" %NEBULITH_QUICK% %NEBULITH_GC% %NEBULITH_JAVA_OPTS% -jar "%NEBULITH_JAR%" %*
 exit /b %ERRORLEVEL%
 
 :command

@@ -53,7 +53,7 @@ final class CommandTimer {
             scratch = Files.createTempDirectory("nebulith-bench-");
             Path folder = scratch.resolve("run");
             List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
-            cmd.addAll(QuickStart.jvmFlags(command));
+            cmd.addAll(QuickStart.jvmFlags(command, System.getenv()));
             cmd.addAll(List.of("-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"), Main.class.getName(),
                     "--quiet", command, "--out", folder.toString()));
             long t0 = System.nanoTime();

@@ -13,7 +13,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Both launchers give the quick-start flag to exactly the commands of {@link QuickStart}, and those exist. */
+/** Both launchers give the quick-start flags to exactly the commands of {@link QuickStart}, and those exist. */
 class QuickStartTest {
 
     @Test
@@ -23,7 +23,8 @@ class QuickStartTest {
         List<String> names = Arrays.asList(line.strip().substring(0, line.strip().indexOf(')')).split("\\|"));
         assertEquals(QuickStart.COMMANDS, names);
         assertTrue(line.contains("quick=" + QuickStart.FLAG), line);
-        assertTrue(sh.contains("exec \"$java\" $quick ${NEBULITH_JAVA_OPTS:-} -jar"), "the user's options come after it");
+        assertTrue(sh.contains("gc=" + QuickStart.GC_FLAG), "the same collector");
+        assertTrue(sh.contains("exec \"$java\" $quick $gc ${NEBULITH_JAVA_OPTS:-} -jar"), "the user's options come after them");
     }
 
     @Test
@@ -33,7 +34,8 @@ class QuickStartTest {
         List<String> names = Arrays.asList(line.substring("for %%c in (".length(), line.indexOf(')')).split(" "));
         assertEquals(QuickStart.COMMANDS, names);
         assertTrue(line.contains("NEBULITH_QUICK=" + QuickStart.FLAG), line);
-        assertTrue(cmd.contains("%NEBULITH_QUICK% %NEBULITH_JAVA_OPTS% -jar"), "the user's options come after it");
+        assertTrue(cmd.contains("NEBULITH_GC=" + QuickStart.GC_FLAG), "the same collector");
+        assertTrue(cmd.contains("%NEBULITH_QUICK% %NEBULITH_GC% %NEBULITH_JAVA_OPTS% -jar"), "the user's options come after them");
     }
 
     @Test
@@ -43,8 +45,10 @@ class QuickStartTest {
         for (String c : QuickStart.COMMANDS) {
             assertTrue(spec.containsKey(c), c);
         }
-        assertEquals(List.of(QuickStart.FLAG), QuickStart.jvmFlags("sequence"));
-        assertEquals(List.of(), QuickStart.jvmFlags("survey"));
+        assertEquals(List.of(QuickStart.FLAG, QuickStart.GC_FLAG), QuickStart.jvmFlags("sequence", java.util.Map.of()));
+        assertEquals(List.of(QuickStart.FLAG), QuickStart.jvmFlags("sequence", java.util.Map.of("JDK_JAVA_OPTIONS", "-XX:+UseZGC")),
+                "a collector of the user's is kept (two stop the JVM)");
+        assertEquals(List.of(), QuickStart.jvmFlags("survey", java.util.Map.of()));
     }
 
     /** The command is found after options too, as Main finds it: '--quiet sequence' starts quick. */
@@ -57,19 +61,25 @@ class QuickStartTest {
         Files.createDirectories(java.getParent());
         Files.writeString(java, "#!/bin/sh\nprintf '%s\\n' \"$@\"\n");
         assertTrue(java.toFile().setExecutable(true));
-        assertEquals(List.of(QuickStart.FLAG, "-jar"), jvmArguments(dir, "--quiet", "sequence", "--out", "x"));
-        assertEquals(List.of(QuickStart.FLAG, "-jar"), jvmArguments(dir, "planet"));
-        assertEquals(List.of("-jar"), jvmArguments(dir, "--quiet", "survey", "planet"));
-        assertEquals(List.of("-jar"), jvmArguments(dir, "--version"));
+        List<String> quick = List.of(QuickStart.FLAG, QuickStart.GC_FLAG, "-jar");
+        assertEquals(quick, jvmArguments(dir, null, "--quiet", "sequence", "--out", "x"));
+        assertEquals(quick, jvmArguments(dir, null, "planet"));
+        assertEquals(List.of("-jar"), jvmArguments(dir, null, "--quiet", "survey", "planet"));
+        assertEquals(List.of("-jar"), jvmArguments(dir, null, "--version"));
+        assertEquals(List.of(QuickStart.FLAG, "-XX:+UseG1GC", "-jar"), jvmArguments(dir, "-XX:+UseG1GC", "planet"),
+                "a collector of the user's replaces the serial one");
     }
 
-    /** @return the arguments the launcher gives java before the jar's path */
-    private static List<String> jvmArguments(final Path dir, final String... args) throws Exception {
+    /** @return the arguments the launcher gives java before the jar's path, with NEBULITH_JAVA_OPTS = opts */
+    private static List<String> jvmArguments(final Path dir, final String opts, final String... args) throws Exception {
         List<String> cmd = new java.util.ArrayList<>(List.of("/bin/sh", dir.resolve("nebulith").toString()));
         cmd.addAll(List.of(args));
         ProcessBuilder pb = new ProcessBuilder(cmd).redirectErrorStream(true);
         pb.environment().put("JAVA_HOME", dir.resolve("jdk").toString());
-        pb.environment().remove("NEBULITH_JAVA_OPTS");
+        QuickStart.OPTION_VARIABLES.forEach(pb.environment()::remove);
+        if (opts != null) {
+            pb.environment().put("NEBULITH_JAVA_OPTS", opts);
+        }
         Process p = pb.start();
         List<String> lines = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)
                 .lines().toList();
