@@ -75,6 +75,11 @@ public final class EquilibriumProblem {
         return pBar;
     }
 
+    /** @param b element totals [mol] @return whether they are this problem's, value for value */
+    boolean hasTotals(double[] b) {
+        return Arrays.equals(totals, b);
+    }
+
     /** @return element totals [mol], a copy */
     public double[] totals() {
         return totals.clone();

@@ -37,29 +37,71 @@ final class StateData {
         chosen = th.chosen;
         available = th.available;
         excludedGas = th.excludedGas;
+        Amounts am = Amounts.of(problem);
+        gasJacobianFloor = am.gasJacobianFloor;
+        gasLnSumFloor = am.gasLnSumFloor;
         int np = system.phaseCount();
         scale = new double[np];
         scale[0] = 1.0; // the gas amount is ln N_gas, never scaled
         for (int p = 1; p < np; p++) {
-            PhaseDef ph = system.phase(p);
             double sc = 0;
-            for (int k = 0; k < ph.members.length; k++) {
+            double[] most = am.memberMost[p];
+            for (int k = 0; k < most.length; k++) {
                 if (chosen[p][k] != null) {
-                    sc = Math.max(sc, maxAmount(ph.members[k], problem));
+                    sc = Math.max(sc, most[k]);
                 }
             }
             scale[p] = sc > 0 ? sc : 1.0;
         }
-        PhaseDef gas = system.phase(0);
-        gasJacobianFloor = new double[gas.members.length];
-        gasLnSumFloor = new double[gas.members.length];
-        for (int k = 0; k < gasJacobianFloor.length; k++) {
-            double bmin = Double.POSITIVE_INFINITY;
-            for (int j : gas.members[k].nzIndex) {
-                bmin = Math.min(bmin, problem.total(j));
+    }
+
+    /**
+     * The data of a system that depend on the element totals only (the largest amount of every
+     * member and the gas floors of {@link NewtonKernel}); the latest is kept per thread, since a
+     * sequence or a survey draw solves state after state with the same totals. Immutable.
+     */
+    private static final class Amounts {
+        private static final ThreadLocal<Amounts> LATEST = new ThreadLocal<>();
+        final ChemicalSystem system;
+        final double[] totals;
+        /** largest amount of member k of phase p that the totals allow [mol] */
+        final double[][] memberMost;
+        final double[] gasJacobianFloor;
+        final double[] gasLnSumFloor;
+
+        private Amounts(EquilibriumProblem problem) {
+            system = problem.system();
+            totals = problem.totals();
+            int np = system.phaseCount();
+            memberMost = new double[np][];
+            for (int p = 0; p < np; p++) {
+                Constituent[] members = system.phase(p).members;
+                memberMost[p] = new double[members.length];
+                for (int k = 0; k < members.length; k++) {
+                    memberMost[p][k] = maxAmount(members[k], problem);
+                }
             }
-            gasJacobianFloor[k] = NewtonKernel.NEGLIGIBLE * bmin;
-            gasLnSumFloor[k] = Math.log(NewtonKernel.UNSEEN * bmin);
+            Constituent[] gas = system.phase(0).members;
+            gasJacobianFloor = new double[gas.length];
+            gasLnSumFloor = new double[gas.length];
+            for (int k = 0; k < gas.length; k++) {
+                double bmin = Double.POSITIVE_INFINITY;
+                for (int j : gas[k].nzIndex) {
+                    bmin = Math.min(bmin, problem.total(j));
+                }
+                gasJacobianFloor[k] = NewtonKernel.NEGLIGIBLE * bmin;
+                gasLnSumFloor[k] = Math.log(NewtonKernel.UNSEEN * bmin);
+            }
+        }
+
+        static Amounts of(EquilibriumProblem problem) {
+            Amounts last = LATEST.get();
+            if (last != null && last.system == problem.system() && problem.hasTotals(last.totals)) {
+                return last;
+            }
+            Amounts a = new Amounts(problem);
+            LATEST.set(a);
+            return a;
         }
     }
 
