@@ -63,6 +63,8 @@ final class InteriorPoint {
     private final double[] weight;
     private final double[] g;
     private final double[][] grad;
+    /** the non-zero entries of one constraint gradient (work array of {@link #evaluate}) */
+    private final int[] nz;
     int iterations;
     /** why {@link #solve} returned null */
     String failure = "";
@@ -96,6 +98,17 @@ final class InteriorPoint {
         }
         g = new double[phases.length];
         grad = new double[phases.length][m];
+        nz = new int[m];
+        for (int i = 0; i < phases.length; i++) {
+            PhaseDef ph = sys.phase(phases[i]);
+            if (ph.kind == PhaseKind.PURE) {
+                // a pure phase's constraint is linear: its gradient is its stoichiometry, set once
+                Constituent c = ph.members[0];
+                for (int k = 0; k < c.nzIndex.length; k++) {
+                    grad[i][c.nzIndex[k]] = c.nzCount[k];
+                }
+            }
+        }
     }
 
     /**
@@ -225,15 +238,11 @@ final class InteriorPoint {
     private double constraint(int i, double[] lambda, double[][] h, double mu, boolean gradient) {
         int p = phases[i];
         PhaseDef ph = sys.phase(p);
+        if (ph.kind == PhaseKind.PURE) {
+            return ph.members[0].dot(lambda) - st.c[p][0];
+        }
         double[] gi = grad[i];
         java.util.Arrays.fill(gi, 0);
-        if (ph.kind == PhaseKind.PURE) {
-            Constituent c = ph.members[0];
-            for (int k = 0; k < c.nzIndex.length; k++) {
-                gi[c.nzIndex[k]] = c.nzCount[k];
-            }
-            return c.dot(lambda) - st.c[p][0];
-        }
         Constituent[] mem = ph.members;
         double[] cs = st.c[p];
         double[] e = work(mem.length);
@@ -334,14 +343,19 @@ final class InteriorPoint {
                 double nu = mu * weight[i] / -gi;
                 double[] gv = grad[i];
                 double rank = nu / -gi - (mixture ? nu : 0);
+                int count = 0;
                 for (int j = 0; j < m; j++) {
-                    if (gv[j] == 0) {
-                        continue;
+                    if (gv[j] != 0) {
+                        nz[count++] = j;
                     }
+                }
+                for (int a = 0; a < count; a++) {
+                    int j = nz[a];
                     gr[j] += nu * gv[j];
                     double[] row = h[j];
                     double v = rank * gv[j];
-                    for (int l = 0; l < m; l++) {
+                    for (int b = 0; b < count; b++) {
+                        int l = nz[b];
                         row[l] += v * gv[l];
                     }
                 }
