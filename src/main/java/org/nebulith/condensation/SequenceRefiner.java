@@ -28,6 +28,8 @@ final class SequenceRefiner {
     private final SequenceSettings settings;
     /** Probes solved so far, by cold step, temperature and start (the same inputs give the same state). */
     private final Map<Probe, EquilibriumResult> probes = new ConcurrentHashMap<>();
+    /** The states at the final midpoints of the brackets that report a host (50% points), by bracket. */
+    private final Map<Integer, EquilibriumResult> hosts = new ConcurrentHashMap<>();
 
     private record Probe(SequenceStep cold, double tK, EquilibriumResult near) {
         @Override
@@ -39,6 +41,10 @@ final class SequenceRefiner {
         public int hashCode() {
             return 31 * (31 * System.identityHashCode(cold) + Double.hashCode(tK)) + System.identityHashCode(near);
         }
+    }
+
+    /** A phase appearing or vanishing between two grid steps, and the bracket that locates it. */
+    private record PhaseChange(int phase, boolean appears, int bracket) {
     }
 
     /**
@@ -61,7 +67,7 @@ final class SequenceRefiner {
     Refined refine(List<SequenceStep> steps) {
         ChemicalSystem sys = steps.get(0).result().system();
         List<Bracket> brackets = new ArrayList<>();
-        List<int[]> phaseChanges = phaseChanges(steps, sys, brackets);
+        List<PhaseChange> phaseChanges = phaseChanges(steps, sys, brackets);
         List<int[]> elementCrossings = new ArrayList<>();
         for (Element e : sys.elements()) {
             elementCrossings.add(crossings(e, steps, brackets));
@@ -79,9 +85,9 @@ final class SequenceRefiner {
     record Refined(List<PhaseEvent> events, List<ElementCondensation> temperatures) {
     }
 
-    /** @return per phase change {step index, phase, +1 appears / -1 vanishes, bracket index} */
-    private static List<int[]> phaseChanges(List<SequenceStep> steps, ChemicalSystem sys, List<Bracket> brackets) {
-        List<int[]> changes = new ArrayList<>();
+    /** @return the phase changes between grid steps, hottest first, each with its bracket added */
+    private static List<PhaseChange> phaseChanges(List<SequenceStep> steps, ChemicalSystem sys, List<Bracket> brackets) {
+        List<PhaseChange> changes = new ArrayList<>();
         for (int i = 1; i < steps.size(); i++) {
             SequenceStep warm = steps.get(i - 1);
             SequenceStep cold = steps.get(i);
@@ -90,7 +96,7 @@ final class SequenceRefiner {
                 boolean is = cold.result().phaseMoles(p) > 0;
                 final int ph = p;
                 if (was != is) {
-                    changes.add(new int[] {i, p, is ? 1 : -1, brackets.size()});
+                    changes.add(new PhaseChange(p, is, brackets.size()));
                     brackets.add(new Bracket(warm, cold, is ? r -> r.phaseMoles(ph) > 0 : r -> r.phaseMoles(ph) <= 0, false));
                 }
             }
@@ -98,7 +104,7 @@ final class SequenceRefiner {
         return changes;
     }
 
-    private static List<PhaseEvent> phaseEvents(List<SequenceStep> steps, ChemicalSystem sys, List<int[]> changes,
+    private static List<PhaseEvent> phaseEvents(List<SequenceStep> steps, ChemicalSystem sys, List<PhaseChange> changes,
                                                 double[] t) {
         Map<Integer, Double> openSince = new LinkedHashMap<>();
         Map<Integer, Boolean> atStart = new LinkedHashMap<>();
@@ -107,13 +113,14 @@ final class SequenceRefiner {
             openSince.put(p, steps.get(0).temperatureK());
             atStart.put(p, true);
         }
-        for (int[] c : changes) {
-            int p = c[1];
-            if (c[2] > 0) {
-                openSince.put(p, t[c[3]]);
+        for (PhaseChange c : changes) {
+            int p = c.phase();
+            if (c.appears()) {
+                openSince.put(p, t[c.bracket()]);
                 atStart.put(p, false);
             } else if (openSince.containsKey(p)) {
-                events.add(new PhaseEvent(sys.phaseName(p), openSince.remove(p), OptionalDouble.of(t[c[3]]), atStart.remove(p)));
+                events.add(new PhaseEvent(sys.phaseName(p), openSince.remove(p), OptionalDouble.of(t[c.bracket()]),
+                        atStart.remove(p)));
             }
         }
         for (Map.Entry<Integer, Double> e : openSince.entrySet()) {
@@ -161,9 +168,6 @@ final class SequenceRefiner {
         }
         return new ElementCondensation(e, t50, host, onset);
     }
-
-    /** The states at the final midpoints of the brackets that report a host (50% points), by bracket. */
-    private final Map<Integer, EquilibriumResult> hosts = new ConcurrentHashMap<>();
 
     /** Bisects every bracket (in parallel); a failure is rethrown as the first failing bracket's, in order. */
     private double[] bisectAll(List<Bracket> brackets) {
