@@ -37,7 +37,7 @@ final class NewtonKernel {
     /**
      * A gas species whose moles are below this fraction of the smallest total among its elements
      * changes no sum of the Newton system by a representable amount (a relative 1e-30, where the
-     * balances converge to 1e-10 and a double resolves 1e-16): its exponential is not even taken
+     * balances converge to 1e-12 and a double resolves 1e-16): its exponential is not even taken
      * during the iteration. The result computes every species' amount in full
      * ({@link ResultBuilder}), so the reported trace gases are unaffected.
      */
