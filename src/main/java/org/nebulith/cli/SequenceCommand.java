@@ -139,6 +139,9 @@ public final class SequenceCommand extends RunCommand {
             SequenceSettings settings = settings(path);
             cautions.addAll(SequenceCautions.lines(spec.describe(),
                     SequenceCautions.gasesBelowDataRange(spec.species(), elements, tMinK)));
+            if (!start.allGasAtStart()) {
+                begun.close(); // its grid started at the old start: stop its cooler half now
+            }
             try (Progress progress = context.progress("sequence", SequenceRunner.gridSize(settings) + 2L);
                  SequenceRunner.Begun raised = start.allGasAtStart() ? null : runner.begin(system, totals, settings)) {
                 seq = finish(raised == null ? begun : raised, progress, start.startState().orElse(null));

@@ -34,6 +34,8 @@ public final class SequenceRunner {
     static final int SPLIT_MIN_POINTS = 400;
     private final EquilibriumSolver solver;
     private final int splitMinPoints;
+    /** The stop flag of work that is never abandoned. */
+    private static final AtomicBoolean NEVER = new AtomicBoolean();
 
     /** @param solver the equilibrium solver */
     public SequenceRunner(EquilibriumSolver solver) {
@@ -142,10 +144,10 @@ public final class SequenceRunner {
             if (cooler != null) {
                 coolerProgress.attach(progress);
                 steps.addAll(cooler.joinAfter(() -> steps.addAll(equilibriumSteps(system, totals, settings, grid, 0,
-                        grid.length / 2, stoich, progress, first, new AtomicBoolean()))));
+                        grid.length / 2, stoich, progress, first, NEVER))));
             } else {
                 steps.addAll(equilibriumSteps(system, totals, settings, grid, 0, grid.length, stoich, progress, first,
-                        new AtomicBoolean()));
+                        NEVER));
             }
             return refined(system, totals, settings, steps, null, totals.clone(), new double[totals.length], progress);
         }
@@ -177,8 +179,7 @@ public final class SequenceRunner {
         EquilibriumResult prev = null;
         for (double t : grid) {
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
-            EquilibriumResult r = last == null ? (first != null ? first : solver.solve(pr))
-                    : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            EquilibriumResult r = solveStep(pr, last, prev, first);
             steps.add(new SequenceStep(r, copy(withdrawn), totals, stoich));
             b = withdraw(r, stoich, settings.removalFraction(), kept, withdrawn);
             floorReacting(b, totals, floorAdded);
@@ -213,14 +214,25 @@ public final class SequenceRunner {
         for (int i = from; i < to && !stop.get(); i++) {
             double t = grid[i];
             EquilibriumProblem pr = new EquilibriumProblem(system, t, settings.path().pressureBar(t), b);
-            EquilibriumResult r = last == null ? (first != null ? first : solver.solve(pr))
-                    : solver.solve(pr, WarmStart.extrapolate(last, prev, t));
+            EquilibriumResult r = solveStep(pr, last, prev, first);
             steps.add(new SequenceStep(r, null, totals, stoich));
             prev = last;
             last = r;
             progress.step();
         }
         return steps;
+    }
+
+    /**
+     * @param first the caller's state at the first grid temperature (used when there is no last), or null
+     * @return the state of pr: the first state, a cold solve, or a start extrapolated from the two before
+     */
+    private EquilibriumResult solveStep(EquilibriumProblem pr, EquilibriumResult last, EquilibriumResult prev,
+                                        EquilibriumResult first) {
+        if (last == null) {
+            return first != null ? first : solver.solve(pr);
+        }
+        return solver.solve(pr, WarmStart.extrapolate(last, prev, pr.temperatureK()));
     }
 
     /**
