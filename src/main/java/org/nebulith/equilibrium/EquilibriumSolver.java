@@ -160,10 +160,12 @@ public final class EquilibriumSolver {
     /**
      * Solves from a warm start; falls back to a cold start if the warm start fails or its result
      * fails the checks (a warm start can land in a wrong assemblage near a phase boundary). A start
-     * of the same composition (a sequence, the next radius) tries the active-set method, a start from
-     * another composition (a survey draw from its star's nominal state) a short active-set search
-     * ({@link PhaseSelection#forOtherComposition}); then both try the interior-point path, then the
-     * continuation from the start's state (in T, P and composition).
+     * of the same composition (a sequence, the next radius) tries the active-set method; a start from
+     * another composition at the same T and P (a survey draw from its star's nominal state) follows
+     * the composition path ({@link CompositionPath}), one from another composition and state (a
+     * fractional sequence) a short active-set search ({@link PhaseSelection#forOtherComposition});
+     * then each tries the interior-point path, then the continuation from the start's state (in T,
+     * P and composition).
      *
      * @param problem the state
      * @param start   a start from earlier results of the same system (may be null)
@@ -179,14 +181,26 @@ public final class EquilibriumSolver {
 
     /**
      * The warm start's paths (fast attempt, globally convergent path, continuation); null if all fail.
+     * A start from another composition at the same T and P (a survey draw from its star's nominal
+     * state) is carried along the composition path first ({@link CompositionPath}): measured on 20
+     * invented stars x 100 draws, the first radius then takes 35,300 Newton iterations against 50,100
+     * for the short search from the nominal state followed by the interior-point path where that
+     * failed (a third of the draws), and 90 % of the draws end by the path.
      */
     private EquilibriumResult warmOnly(EquilibriumProblem problem, WarmStart start) {
         StateData st = new StateData(problem);
         Iterate it = adapt(start.iterate.copy(), st);
         boolean sameTotals = java.util.Arrays.equals(start.fromTotals, problem.totals());
-        Attempt a = attempt(problem, st, it, !sameTotals);
-        if (a.result != null) {
-            return a.result;
+        if (!sameTotals && start.fromTK == problem.temperatureK() && start.fromPBar == problem.pressureBar()) {
+            EquilibriumResult path = alongComposition(problem, start);
+            if (path != null) {
+                return path;
+            }
+        } else {
+            Attempt a = attempt(problem, st, it, !sameTotals);
+            if (a.result != null) {
+                return a.result;
+            }
         }
         // the globally convergent path before the continuation, measured: from another composition
         // (a survey draw from its star's nominal state) a mean of 5 ms against 25 ms for the
@@ -200,6 +214,20 @@ public final class EquilibriumSolver {
             return global.result;
         }
         return continueFrom(problem, start);
+    }
+
+    /**
+     * The parametric path in the element totals from the start's composition ({@link CompositionPath});
+     * null if it fails or its end fails the checks.
+     */
+    EquilibriumResult alongComposition(EquilibriumProblem problem, WarmStart start) {
+        CompositionPath path = new CompositionPath(problem, start.fromTotals, options);
+        CompositionPath.Prediction end = path.follow(start.iterate);
+        if (end == null) {
+            return null;
+        }
+        Attempt a = attempt(problem, end.state(), end.iterate(), true);
+        return a.result == null ? null : ResultBuilder.withIterations(a.result, a.iterations + path.iterations);
     }
 
     /**

@@ -56,6 +56,15 @@ final class PhaseSelection {
         return this;
     }
 
+    /**
+     * @param newtonIterations Newton iterations this search may spend
+     * @return this
+     */
+    PhaseSelection withBudget(int newtonIterations) {
+        this.budget = newtonIterations;
+        return this;
+    }
+
     PhaseSelection(StateData st, NewtonKernel kernel, SolverOptions opt) {
         this.st = st;
         this.kernel = kernel;
