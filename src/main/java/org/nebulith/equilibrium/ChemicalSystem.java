@@ -23,6 +23,8 @@ public final class ChemicalSystem {
     private final Element[] elements;
     private final List<PhaseDef> phases;
     private final Map<String, Integer> phaseIndex = new HashMap<>();
+    /** the names of each phase's members, built once (the survey asks for them per draw) */
+    private final List<List<String>> memberNames = new ArrayList<>();
     private final double gasTMin;
     private final double gasTMax;
     /**
@@ -42,6 +44,11 @@ public final class ChemicalSystem {
         this.phases = phases;
         for (int p = 0; p < phases.size(); p++) {
             phaseIndex.put(phases.get(p).name, p);
+            List<String> names = new ArrayList<>();
+            for (Constituent c : phases.get(p).members) {
+                names.add(c.name);
+            }
+            memberNames.add(List.copyOf(names));
         }
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
@@ -180,13 +187,14 @@ public final class ChemicalSystem {
         return phases.get(p).kind;
     }
 
+    /** @param p phase index @return the number of its constituents (gas species, end-members) */
+    public int memberCount(int p) {
+        return phases.get(p).members.length;
+    }
+
     /** @param p phase index @return names of its constituents (gas species, end-members) */
     public List<String> memberNames(int p) {
-        List<String> n = new ArrayList<>();
-        for (Constituent c : phases.get(p).members) {
-            n.add(c.name);
-        }
-        return Collections.unmodifiableList(n);
+        return memberNames.get(p);
     }
 
     /** @param p phase index @param k member index @return stoichiometry over {@link #elements()} */

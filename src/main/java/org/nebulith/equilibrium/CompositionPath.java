@@ -86,6 +86,7 @@ final class CompositionPath {
         double t = 0;
         EquilibriumProblem pr = at(0);
         StateData st = new StateData(pr);
+        StateData first = st;
         Iterate it = start.copy();
         for (int step = 0; step < MAX_STEPS; step++) {
             NewtonKernel kernel = new NewtonKernel(st, pr.totals(), opt);
@@ -108,7 +109,7 @@ final class CompositionPath {
             }
             double tNext = s >= room ? 1 : t + s;
             EquilibriumProblem next = tNext == 1 ? target : at(tNext);
-            StateData stNext = new StateData(next);
+            StateData stNext = tNext == 1 ? new StateData(next) : new StateData(next, first);
             Iterate pred = predict(it, dx, s, st, stNext);
             if (e != null) {
                 e.apply(pred, st.system);

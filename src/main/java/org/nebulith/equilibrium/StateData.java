@@ -56,12 +56,37 @@ final class StateData {
     }
 
     /**
+     * The data of {@code problem} with the totals-only data (amount scales, gas floors) of
+     * {@code like}, a state of the same system at the same T and P: for the intermediate points of a
+     * path in composition ({@link CompositionPath}), which any nearby scale serves.
+     */
+    StateData(EquilibriumProblem problem, StateData like) {
+        if (problem.system() != like.system || problem.temperatureK() != like.tK
+                || Math.log(problem.pressureBar()) != like.lnP) {
+            throw new IllegalArgumentException("another system or state");
+        }
+        system = like.system;
+        tK = like.tK;
+        lnP = like.lnP;
+        thermal = like.thermal;
+        c = like.c;
+        chosen = like.chosen;
+        available = like.available;
+        excludedGas = like.excludedGas;
+        gasJacobianFloor = like.gasJacobianFloor;
+        gasLnSumFloor = like.gasLnSumFloor;
+        scale = like.scale;
+    }
+
+    /**
      * The data of a system that depend on the element totals only (the largest amount of every
-     * member and the gas floors of {@link NewtonKernel}); the latest is kept per thread, since a
-     * sequence or a survey draw solves state after state with the same totals. Immutable.
+     * member and the gas floors of {@link NewtonKernel}); the latest two are kept per thread, since a
+     * sequence or a survey draw solves state after state with the same totals, and a draw starts
+     * from its star's nominal totals. Immutable.
      */
     private static final class Amounts {
-        private static final ThreadLocal<Amounts> LATEST = new ThreadLocal<>();
+        /** the latest two of this thread (a survey draw's first radius starts from its star's nominal totals) */
+        private static final ThreadLocal<Amounts[]> LATEST = new ThreadLocal<>();
         final ChemicalSystem system;
         final double[] totals;
         /** largest amount of member k of phase p that the totals allow [mol] */
@@ -95,12 +120,19 @@ final class StateData {
         }
 
         static Amounts of(EquilibriumProblem problem) {
-            Amounts last = LATEST.get();
-            if (last != null && last.system == problem.system() && problem.hasTotals(last.totals)) {
-                return last;
+            Amounts[] kept = LATEST.get();
+            if (kept == null) {
+                kept = new Amounts[2];
+                LATEST.set(kept);
+            }
+            for (Amounts a : kept) {
+                if (a != null && a.system == problem.system() && problem.hasTotals(a.totals)) {
+                    return a;
+                }
             }
             Amounts a = new Amounts(problem);
-            LATEST.set(a);
+            kept[1] = kept[0];
+            kept[0] = a;
             return a;
         }
     }

@@ -104,14 +104,13 @@ public final class ZoneCondensation {
         int[][] index = new int[sys.phaseCount()][];
         int dim = 0;
         for (int p = 1; p < sys.phaseCount(); p++) {
-            index[p] = new int[sys.memberNames(p).size()];
+            index[p] = new int[sys.memberCount(p)];
             for (int k = 0; k < index[p].length; k++) {
                 index[p][k] = dim++;
             }
         }
         final int iceIndex = dim++;
         final int n = dim;
-        ErrorControl control = control(sys, index, n, continuityRel);
         RadialIntegrand f = new RadialIntegrand() {
             @Override
             public int dimension() {
@@ -130,10 +129,11 @@ public final class ZoneCondensation {
                 out[iceIndex] = l.iceMoles();
             }
         };
+        // the fixed rule (the survey's) needs no error control: it is not built per draw
         ZoneIntegral zi = fixedPanels > 0 ? integrator.integrateFixed(zone, disk, f, fixedPanels)
-                : integrator.integrate(zone, disk, f, fronts, control);
+                : integrator.integrate(zone, disk, f, fronts, control(sys, index, n, continuityRel));
         double[][] moles = new double[sys.phaseCount()][];
-        moles[0] = new double[sys.memberNames(0).size()];
+        moles[0] = new double[sys.memberCount(0)];
         for (int p = 1; p < sys.phaseCount(); p++) {
             moles[p] = new double[index[p].length];
             for (int k = 0; k < index[p].length; k++) {
