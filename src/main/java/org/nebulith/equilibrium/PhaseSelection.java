@@ -144,7 +144,9 @@ final class PhaseSelection {
             }
             backup = it.copy();
             if (sys.phaseKind(cand) == PhaseKind.SOLUTION) {
-                it.add(cand, NewtonKernel.START_LN);
+                if (!replaceDependent(it, cand)) {
+                    it.add(cand, NewtonKernel.START_LN);
+                }
             } else if (!exchange(it, cand)) {
                 it.add(cand, 0.0);
             }
@@ -223,6 +225,71 @@ final class PhaseSelection {
             return true;
         }
         return false;
+    }
+
+    /**
+     * A solution brought in beside a present pure phase whose formula is a combination of the
+     * solution's end-members (picrochromite MgCr2O4 = spinel + chromite - hercynite) makes the Newton
+     * system nearly singular: it creeps until the stall test ends it, and the swap that follows
+     * ({@link #swapIn}) is what the reaction does anyway. So the swap is made at once: the pure phase
+     * leaves, and the solution starts with its amount in formula units.
+     *
+     * @return true if a dependent pure phase was replaced by the solution
+     */
+    private boolean replaceDependent(Iterate it, int solution) {
+        Constituent[] members = sys.phase(solution).members;
+        int valid = 0;
+        double[][] basis = new double[members.length][];
+        for (int k = 0; k < members.length; k++) {
+            if (st.c[solution][k] != Double.POSITIVE_INFINITY) {
+                basis[valid++] = members[k].a;
+            }
+        }
+        for (int q = 0; q < it.active.length; q++) {
+            int p = it.active[q];
+            if (sys.phaseKind(p) == PhaseKind.PURE && inSpan(basis, valid, sys.phase(p).members[0].a)) {
+                double moles = it.u[q] * st.scale[p];
+                it.remove(q);
+                it.add(solution, moles > 0 ? Math.log(moles / st.scale[solution]) : NewtonKernel.START_LN);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** True if target is a linear combination of the first n rows of basis (least squares, 1e-9 of its norm). */
+    private static boolean inSpan(double[][] basis, int n, double[] target) {
+        if (n == 0) {
+            return false;
+        }
+        double[][] g = new double[n][n];
+        double[] rhs = new double[n];
+        for (int i = 0; i < n; i++) {
+            for (int l = 0; l < n; l++) {
+                g[i][l] = dot(basis[i], basis[l]);
+            }
+            rhs[i] = dot(basis[i], target);
+        }
+        if (!LinearSystem.solve(g, rhs, n)) {
+            return false;
+        }
+        double res = 0;
+        for (int j = 0; j < target.length; j++) {
+            double v = target[j];
+            for (int i = 0; i < n; i++) {
+                v -= rhs[i] * basis[i][j];
+            }
+            res += v * v;
+        }
+        return res <= 1e-18 * dot(target, target);
+    }
+
+    private static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int j = 0; j < a.length; j++) {
+            s += a[j] * b[j];
+        }
+        return s;
     }
 
     /** How many of the most similar present phases {@link #swapIn} tries to replace. */
