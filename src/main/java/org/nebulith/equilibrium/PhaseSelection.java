@@ -247,7 +247,7 @@ final class PhaseSelection {
         }
         for (int q = 0; q < it.active.length; q++) {
             int p = it.active[q];
-            if (sys.phaseKind(p) == PhaseKind.PURE && inSpan(basis, valid, sys.phase(p).members[0].a)) {
+            if (sys.phaseKind(p) == PhaseKind.PURE && spanCoefficients(basis, valid, sys.phase(p).members[0].a) != null) {
                 double moles = it.u[q] * st.scale[p];
                 it.remove(q);
                 it.add(solution, moles > 0 ? Math.log(moles / st.scale[solution]) : NewtonKernel.START_LN);
@@ -257,10 +257,13 @@ final class PhaseSelection {
         return false;
     }
 
-    /** True if target is a linear combination of the first n rows of basis (least squares, 1e-9 of its norm). */
-    private static boolean inSpan(double[][] basis, int n, double[] target) {
+    /**
+     * Least-squares coefficients c with sum c_i basis_i = target over the first n rows of basis, or
+     * null if target is not their combination (residual above 1e-9 of its norm).
+     */
+    private static double[] spanCoefficients(double[][] basis, int n, double[] target) {
         if (n == 0) {
-            return false;
+            return null;
         }
         double[][] g = new double[n][n];
         double[] rhs = new double[n];
@@ -271,7 +274,7 @@ final class PhaseSelection {
             rhs[i] = dot(basis[i], target);
         }
         if (!LinearSystem.solve(g, rhs, n)) {
-            return false;
+            return null;
         }
         double res = 0;
         for (int j = 0; j < target.length; j++) {
@@ -281,7 +284,7 @@ final class PhaseSelection {
             }
             res += v * v;
         }
-        return res <= 1e-18 * dot(target, target);
+        return res <= 1e-18 * dot(target, target) ? rhs : null;
     }
 
     private static double dot(double[] a, double[] b) {
@@ -429,39 +432,11 @@ final class PhaseSelection {
 
     /** Least-squares coefficients c with sum c_i a_i = target, or null if target is independent. */
     private double[] combination(Iterate it, int[] pure, int nq, double[] target) {
-        int m = sys.elementCount();
-        double[][] g = new double[nq][nq];
-        double[] rhs = new double[nq];
+        double[][] basis = new double[nq][];
         for (int i = 0; i < nq; i++) {
-            double[] ai = sys.phase(it.active[pure[i]]).members[0].a;
-            for (int l = 0; l < nq; l++) {
-                double[] al = sys.phase(it.active[pure[l]]).members[0].a;
-                double s = 0;
-                for (int j = 0; j < m; j++) {
-                    s += ai[j] * al[j];
-                }
-                g[i][l] = s;
-            }
-            double s = 0;
-            for (int j = 0; j < m; j++) {
-                s += ai[j] * target[j];
-            }
-            rhs[i] = s;
+            basis[i] = sys.phase(it.active[pure[i]]).members[0].a;
         }
-        if (!LinearSystem.solve(g, rhs, nq)) {
-            return null;
-        }
-        double res = 0;
-        double norm = 0;
-        for (int j = 0; j < m; j++) {
-            double v = target[j];
-            for (int i = 0; i < nq; i++) {
-                v -= rhs[i] * sys.phase(it.active[pure[i]]).members[0].a[j];
-            }
-            res += v * v;
-            norm += target[j] * target[j];
-        }
-        return res <= 1e-18 * norm ? rhs : null;
+        return spanCoefficients(basis, nq, target);
     }
 
     /**
