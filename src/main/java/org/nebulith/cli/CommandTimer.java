@@ -9,12 +9,14 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
  * Times whole commands as a user runs them: each run is a fresh JVM ({@code java -cp <this classpath>
- * org.nebulith.cli.Main COMMAND --quiet --out <scratch>}), so start-up, computing, charts, report and
- * file writing are all counted. The scratch folders are deleted afterwards.
+ * org.nebulith.cli.Main COMMAND --quiet --out <scratch>}, with the launcher's quick-start flags and class
+ * archive), so start-up, computing, charts, report and file writing are all counted. The scratch
+ * folders are deleted afterwards.
  */
 final class CommandTimer {
 
@@ -31,14 +33,29 @@ final class CommandTimer {
      * @param repeats runs per command (the median is printed)
      */
     static void run(final PrintStream out, final int repeats) {
-        time(out, "sequence", TARGET_SEQUENCE_S, repeats);
-        time(out, "planet", TARGET_PLANET_S, repeats);
+        Optional<QuickStart.Archive> archive = archive();
+        out.println("command: " + archive.map(a -> "with the class archive made for " + a.jar())
+                .orElse("without a class archive (none beside the jar, or made for another jar or java)"));
+        time(out, "sequence", TARGET_SEQUENCE_S, repeats, archive);
+        time(out, "planet", TARGET_PLANET_S, repeats, archive);
     }
 
-    private static void time(final PrintStream out, final String command, final double target, final int repeats) {
+    /** @return the class archive as the launcher maps it, when this runs from the built jar beside it */
+    private static Optional<QuickStart.Archive> archive() {
+        String classPath = System.getProperty("java.class.path");
+        return classPath.endsWith(".jar") && !classPath.contains(File.pathSeparator)
+                ? QuickStart.classArchive(Path.of(classPath), javaExecutable()) : Optional.empty();
+    }
+
+    private static Path javaExecutable() {
+        return Path.of(System.getProperty("java.home"), "bin", "java");
+    }
+
+    private static void time(final PrintStream out, final String command, final double target, final int repeats,
+                             final Optional<QuickStart.Archive> archive) {
         double[] seconds = new double[repeats];
         for (int i = 0; i < repeats; i++) {
-            seconds[i] = once(command);
+            seconds[i] = once(command, archive);
         }
         Arrays.sort(seconds);
         double median = repeats % 2 == 1 ? seconds[repeats / 2] : (seconds[repeats / 2 - 1] + seconds[repeats / 2]) / 2;
@@ -47,15 +64,17 @@ final class CommandTimer {
                 median <= target ? "met" : "not met");
     }
 
-    private static double once(final String command) {
+    private static double once(final String command, final Optional<QuickStart.Archive> archive) {
         Path scratch = null;
         try {
             scratch = Files.createTempDirectory("nebulith-bench-");
             Path folder = scratch.resolve("run");
-            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
+            List<String> cmd = new ArrayList<>(List.of(javaExecutable().toString()));
             cmd.addAll(QuickStart.jvmFlags(command, System.getenv()));
-            cmd.addAll(List.of("-Djava.awt.headless=true", "-cp", System.getProperty("java.class.path"), Main.class.getName(),
-                    "--quiet", command, "--out", folder.toString()));
+            archive.ifPresent(a -> cmd.add(a.flag()));
+            String classPath = archive.map(a -> a.jar().toString()).orElse(System.getProperty("java.class.path"));
+            cmd.addAll(List.of("-Djava.awt.headless=true", "-cp", classPath, Main.class.getName(), "--quiet", command,
+                    "--out", folder.toString()));
             long t0 = System.nanoTime();
             Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(scratch.resolve("log")
                     .toFile()).start();

@@ -1,7 +1,11 @@
 package org.nebulith.cli;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * JVM settings of the launchers for the commands that run once and briefly. Their fresh JVM spends
@@ -13,7 +17,9 @@ import java.util.Map;
  * serial collector (no concurrent collector threads beside a run of a few hundred MB; alternating
  * runs on the same machine: {@code sequence} median 1.48 against 1.52 s, {@code planet} 1.82 against
  * 1.93 s), unless the user's JVM options name a collector, since two collectors stop the JVM.
- * {@code NEBULITH_JAVA_OPTS} comes after these flags, so a user's own setting wins.
+ * {@code NEBULITH_JAVA_OPTS} comes after these flags, so a user's own setting wins. The POSIX launcher
+ * also maps the class archive that {@code mvn package} leaves beside the jar ({@link #ARCHIVE}; see
+ * {@link #classArchive}).
  */
 final class QuickStart {
     /** The JVM flag: tiered compilation stops at the quick (C1) compiler. */
@@ -25,7 +31,52 @@ final class QuickStart {
     /** Environment variables whose JVM options the launchers read for a collector of the user's. */
     static final List<String> OPTION_VARIABLES = List.of("NEBULITH_JAVA_OPTS", "JDK_JAVA_OPTIONS", "JAVA_TOOL_OPTIONS");
 
+    /** File name of the class archive beside the jar (made by {@code mvn package}, see pom.xml). */
+    static final String ARCHIVE = "nebulith.jsa";
+    /** File beside it naming the jar and the java it was made for, a line each. */
+    static final String ARCHIVE_FOR = ARCHIVE + ".for";
+
     private QuickStart() {
+    }
+
+    /**
+     * The class archive for a run of the jar with this java, as the POSIX launcher decides it: the
+     * archive and its {@link #ARCHIVE_FOR} file sit beside the jar, the archive is newer than the jar,
+     * and both the jar and the java are the files it was made for. A JVM that refuses an archive
+     * drops the JDK's own one too and starts slower than with none, hence the checks.
+     *
+     * @param jar  the jar to run
+     * @param java the java executable
+     * @return the JVM flag and the jar named as when the archive was made (the JVM compares the name),
+     *         or empty
+     */
+    static Optional<Archive> classArchive(final Path jar, final Path java) {
+        Path archive = jar.resolveSibling(ARCHIVE);
+        Path madeFor = jar.resolveSibling(ARCHIVE_FOR);
+        try {
+            if (!Files.isRegularFile(archive) || !Files.isRegularFile(madeFor)
+                    || Files.getLastModifiedTime(archive).compareTo(Files.getLastModifiedTime(jar)) <= 0) {
+                return Optional.empty();
+            }
+            List<String> lines = Files.readAllLines(madeFor);
+            if (lines.size() < 2 || !sameFile(Path.of(lines.get(0)), jar) || !sameFile(Path.of(lines.get(1)), java)) {
+                return Optional.empty();
+            }
+            return Optional.of(new Archive("-XX:SharedArchiveFile=" + archive, Path.of(lines.get(0))));
+        } catch (IOException | java.nio.file.InvalidPathException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static boolean sameFile(final Path a, final Path b) throws IOException {
+        return Files.exists(a) && Files.exists(b) && Files.isSameFile(a, b);
+    }
+
+    /**
+     * @param flag the JVM flag that maps the archive
+     * @param jar  the jar, named as when the archive was made
+     */
+    record Archive(String flag, Path jar) {
     }
 
     /**

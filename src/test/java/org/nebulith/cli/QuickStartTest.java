@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assumptions.assumeTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
 import java.util.Arrays;
 import java.util.List;
 
@@ -24,7 +25,10 @@ class QuickStartTest {
         assertEquals(QuickStart.COMMANDS, names);
         assertTrue(line.contains("quick=" + QuickStart.FLAG), line);
         assertTrue(sh.contains("gc=" + QuickStart.GC_FLAG), "the same collector");
-        assertTrue(sh.contains("exec \"$java\" $quick $gc ${NEBULITH_JAVA_OPTS:-} -jar"), "the user's options come after them");
+        assertTrue(sh.contains("exec \"$java\" $quick $gc ${share:+\"$share\"} ${NEBULITH_JAVA_OPTS:-} -jar"),
+                "the user's options come after them");
+        assertTrue(sh.contains("archive=$here/" + QuickStart.ARCHIVE) && sh.contains("\"$archive.for\""),
+                "the launcher and QuickStart name the same archive");
     }
 
     @Test
@@ -70,8 +74,55 @@ class QuickStartTest {
                 "a collector of the user's replaces the serial one");
     }
 
-    /** @return the arguments the launcher gives java before the jar's path, with NEBULITH_JAVA_OPTS = opts */
+    /**
+     * The class archive is mapped only for a quick command, when it is newer than the jar and was
+     * made for this jar and this java; the jar is then named as the archive's file says.
+     */
+    @Test
+    void thePosixLauncherMapsTheClassArchiveMadeForItsJarAndJava(@TempDir final Path dir) throws Exception {
+        assumeTrue(Files.isExecutable(Path.of("/bin/sh")), "needs a POSIX shell");
+        Files.copy(Path.of("src/main/launcher/nebulith"), dir.resolve("nebulith"));
+        Path jar = dir.resolve("nebulith.jar");
+        Files.writeString(jar, "");
+        Path java = dir.resolve("jdk/bin/java");
+        Files.createDirectories(java.getParent());
+        Files.writeString(java, "#!/bin/sh\nprintf '%s\\n' \"$@\"\n");
+        assertTrue(java.toFile().setExecutable(true));
+        Path archive = dir.resolve(QuickStart.ARCHIVE);
+        Files.writeString(archive, "");
+        Files.setLastModifiedTime(jar, FileTime.fromMillis(System.currentTimeMillis() - 60_000));
+        // named through a link, as a build folder reached by another path would be
+        Path link = Files.createSymbolicLink(dir.resolve("same-jar.jar"), jar);
+        Files.writeString(dir.resolve(QuickStart.ARCHIVE_FOR), link + "\n" + java + "\n");
+        String flag = "-XX:SharedArchiveFile=" + archive;
+        assertEquals(List.of(QuickStart.FLAG, QuickStart.GC_FLAG, flag, "-jar", link.toString()),
+                jvmArguments(dir, null, true, "sequence"));
+        assertEquals(List.of("-jar", jar.toString()), jvmArguments(dir, null, true, "survey"), "only the brief commands");
+        assertEquals(new QuickStart.Archive(flag, link), QuickStart.classArchive(jar, java).orElseThrow(),
+                "the benchmark decides as the launcher does");
+
+        Files.writeString(dir.resolve(QuickStart.ARCHIVE_FOR), jar + "\n" + dir.resolve("nebulith") + "\n");
+        assertEquals(List.of(QuickStart.FLAG, QuickStart.GC_FLAG, "-jar", jar.toString()),
+                jvmArguments(dir, null, true, "sequence"), "made for another java");
+        assertTrue(QuickStart.classArchive(jar, java).isEmpty());
+
+        Files.writeString(dir.resolve(QuickStart.ARCHIVE_FOR), jar + "\n" + java + "\n");
+        Files.setLastModifiedTime(jar, FileTime.fromMillis(System.currentTimeMillis() + 60_000));
+        assertEquals(List.of(QuickStart.FLAG, QuickStart.GC_FLAG, "-jar", jar.toString()),
+                jvmArguments(dir, null, true, "sequence"), "a jar rebuilt after the archive");
+        assertTrue(QuickStart.classArchive(jar, java).isEmpty());
+    }
+
     private static List<String> jvmArguments(final Path dir, final String opts, final String... args) throws Exception {
+        return jvmArguments(dir, opts, false, args);
+    }
+
+    /**
+     * @param withJar also the jar's path that follows {@code -jar}
+     * @return the arguments the launcher gives java before the jar's path, with NEBULITH_JAVA_OPTS = opts
+     */
+    private static List<String> jvmArguments(final Path dir, final String opts, final boolean withJar,
+                                             final String... args) throws Exception {
         List<String> cmd = new java.util.ArrayList<>(List.of("/bin/sh", dir.resolve("nebulith").toString()));
         cmd.addAll(List.of(args));
         ProcessBuilder pb = new ProcessBuilder(cmd).redirectErrorStream(true);
@@ -84,6 +135,6 @@ class QuickStartTest {
         List<String> lines = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)
                 .lines().toList();
         assertEquals(0, p.waitFor(), String.join("\n", lines));
-        return lines.subList(0, lines.indexOf("-jar") + 1);
+        return lines.subList(0, lines.indexOf("-jar") + (withJar ? 2 : 1));
     }
 }
