@@ -29,6 +29,10 @@ class QuickStartTest {
                 "the user's options come after them");
         assertTrue(sh.contains("archive=$here/" + QuickStart.ARCHIVE) && sh.contains("\"$archive.for\""),
                 "the launcher and QuickStart name the same archive");
+        String pom = Files.readString(Path.of("pom.xml"));
+        assertTrue(pom.contains("<arg line=\"" + QuickStart.FLAG + " " + QuickStart.GC_FLAG + " "),
+                "the class archive's training runs use the same flags");
+        assertTrue(pom.contains("${project.build.directory}/" + QuickStart.ARCHIVE + "\""), "and the same file name");
     }
 
     @Test
